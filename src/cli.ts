@@ -1,0 +1,53 @@
+import { checkCommand } from "./cli/check.ts";
+import { materialsCommand, schemaCommand } from "./cli/info.ts";
+import type { Io } from "./cli/io.ts";
+
+const HELP = `Hoopwise — fatigue screening of pressurized shell skins
+
+Usage: npm run -s cli -- <command> [options]
+
+Commands:
+  check FILE|-                 run a check; prints the result JSON (exit 0), or the errors (exit 2)
+  materials [--json]           list the material library (typical values — verify against certified data)
+  schema                       print the check format as JSON Schema
+  help                         this text
+
+Exit codes: 0 done, 2 the input is wrong (the errors document names each field), 1 something else failed.
+A screening check, not a code-compliance certificate: the governing pressure-vessel or
+airworthiness code and a licensed or authorized engineer decide.
+`;
+
+type Command = (args: string[], io: Io) => number | Promise<number>;
+
+const COMMANDS: Record<string, Command> = {
+  check: checkCommand,
+  materials: materialsCommand,
+  schema: schemaCommand,
+};
+
+export async function main(argv: string[], io: Io): Promise<number> {
+  const [name, ...args] = argv;
+  if (!name || name === "help" || name === "--help" || name === "-h") {
+    io.stdout.write(HELP);
+    return name ? 0 : 2;
+  }
+  const command = COMMANDS[name];
+  if (!command) {
+    io.stderr.write(`unknown command "${name}"\n\n${HELP}`);
+    return 2;
+  }
+  return command(args, io);
+}
+
+const isEntry = process.argv[1] && import.meta.url === new URL(`file://${process.argv[1]}`).href;
+if (isEntry) {
+  main(process.argv.slice(2), { stdin: process.stdin, stdout: process.stdout, stderr: process.stderr }).then(
+    (code) => {
+      process.exitCode = code;
+    },
+    (err) => {
+      process.stderr.write(`hoopwise: ${(err as Error).stack ?? err}\n`);
+      process.exitCode = 1;
+    },
+  );
+}

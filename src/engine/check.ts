@@ -1,0 +1,269 @@
+import { MEAN_STRESS_CRITERIA, type MeanStressCriterion } from "../schema/check.ts";
+import { fingerprint } from "../schema/canonical.ts";
+import type { ResolvedCheck } from "../schema/resolve.ts";
+import { fitCoupons } from "./coupons.ts";
+import { crackGrowth } from "./crack.ts";
+import { InputError } from "./errors.ts";
+import { evaluate, evaluationSteps, type Context, type Evaluation } from "./evaluate.ts";
+import { evaluateEvidence } from "./evidence.ts";
+import { resolveLoad } from "./load.ts";
+import { CRITERION_LABEL } from "./meanStress.ts";
+import type { CheckResult, CriterionRow } from "./result.ts";
+import { modifyingFactors, VALID_LIFE } from "./sn.ts";
+import { solveFor } from "./solvers.ts";
+import { normalQuantile } from "./special.ts";
+import { fmt, type Step } from "./step.ts";
+import { verdictTable } from "./verdict.ts";
+import { ENGINE_VERSION } from "./version.ts";
+
+/**
+ * The whole check: load → material curve → membrane, static, notch, fatigue → optional solve,
+ * crack growth and test evidence → verdict. Pure: no I/O. Throws InputError only for input problems
+ * that show once the numbers are worked; faces turn it into the errors document.
+ */
+export function runCheck(input: ResolvedCheck): CheckResult {
+  const steps: Step[] = [];
+  const warnings: string[] = [];
+  const load = resolveLoad(input.pressure);
+  if (!load.isSpectrum && load.min_MPa >= load.max_MPa) {
+    throw new InputError("pressure.min_MPa", `the minimum pressure (${fmt(load.min_MPa)} MPa) must be below the maximum (${fmt(load.max_MPa)} MPa)`);
+  }
+  steps.push(...load.steps);
+
+  const mat = input.material;
+  let fit: ReturnType<typeof fitCoupons> | undefined;
+  if (mat.coupons && input.fatigue.curve === "basquin") {
+    fit = fitCoupons(mat.coupons);
+    steps.push(...fit.steps);
+    warnings.push(...fit.warnings);
+  }
+  const coefficient = mat.fatigueStrengthCoefficient_MPa ?? fit?.fatigueStrengthCoefficient_MPa ?? NaN;
+  const exponent = mat.fatigueStrengthExponent ?? fit?.fatigueStrengthExponent ?? NaN;
+  if (fit && mat.fatigueStrengthCoefficient_MPa !== undefined) warnings.push("coupons were given but σ'f and b were given too; the given σ'f and b are used and the fit is shown for comparison");
+  const mods = modifyingFactors(input.fatigue.modifiers, mat.ultimate_MPa, normalQuantile);
+  steps.push(...mods.steps);
+  warnings.push(...mods.warnings);
+
+  const ctx: Context = {
+    input,
+    load,
+    curve: { coefficient_MPa: coefficient, exponent, enduranceLimit_MPa: mat.enduranceLimit_MPa, factor: mods.factor },
+    strengths: { ultimate_MPa: mat.ultimate_MPa, yield_MPa: mat.yield_MPa, fatigueStrengthCoefficient_MPa: coefficient, walkerGamma: input.fatigue.walkerGamma },
+  };
+  const criterion = input.fatigue.meanStress;
+  const t = input.shell.thickness_mm;
+  const e = evaluate(ctx, t, 1, criterion);
+  steps.push(...evaluationSteps(ctx, e, criterion));
+  warnings.push(...e.conc.warnings, ...e.notch.warnings, ...validityWarnings(ctx, e));
+
+  const criteria = input.fatigue.curve === "welded" ? [] : compareCriteria(ctx, t, criterion);
+
+  const result: CheckResult = {
+    format: "hoopwise.result/1",
+    engine: ENGINE_VERSION,
+    fingerprint: fingerprint(input.document),
+    title: input.title,
+    verdict: "pass",
+    governs: "",
+    load: { pressureMax_MPa: load.max_MPa, pressureMin_MPa: load.min_MPa, source: load.source },
+    membrane: {
+      theory: e.theory,
+      theoryReason: theoryReason(input.shell.theory, e),
+      innerRadius_mm: e.radii.inner_mm,
+      meanRadius_mm: e.radii.mean_mm,
+      outerRadius_mm: e.radii.outer_mm,
+      hoopMax_MPa: e.hoopMax,
+      hoopMin_MPa: e.hoopMin,
+      axialMax_MPa: e.axialMax,
+      axialMin_MPa: e.axialMin,
+      radialMax_MPa: e.radialMax,
+      vonMisesMax_MPa: e.vonMisesMax,
+    },
+    static: { yieldFactor: input.static?.yieldFactor ?? 1.5, allowable_MPa: e.staticAllowable, vonMisesMax_MPa: e.vonMisesMax, margin: e.staticMargin, pass: e.staticMargin >= 0 },
+    notch: { kt: e.conc.kt, ktGoverns: e.conc.governs, biaxialRatio: e.lambda, q: e.notch.q, kf: e.notch.kf, peakMax_MPa: e.peakMax, peakMin_MPa: e.peakMin, localYield: e.localYield },
+    fatigue: {
+      criterion,
+      curve: input.fatigue.curve,
+      amplitude_MPa: e.governing.amplitude,
+      mean_MPa: e.governing.mean,
+      equivalentAmplitude_MPa: e.governing.sigmaAr,
+      life_cycles: e.life,
+      allowableLife_cycles: e.allowable,
+      designLife_cycles: input.fatigue.designLife_cycles,
+      scatterFactor: input.fatigue.scatterFactor,
+      damage: e.damage,
+      lifeCountedIn: load.isSpectrum ? "passes" : "cycles",
+      modifyingFactor: mods.factor,
+      curveUsed: { fatigueStrengthCoefficient_MPa: coefficient, fatigueStrengthExponent: exponent, enduranceLimit_MPa: mat.enduranceLimit_MPa ?? null },
+      criteria,
+      pass: e.damage <= 1,
+    },
+    lifeVsThickness: lifeVsThickness(ctx, t),
+    verdictTable: [],
+    material: { id: mat.id, name: mat.name, source: mat.source, typical: mat.id !== undefined },
+    steps,
+    warnings,
+  };
+  if (fit) result.materialFit = fitSummary(fit, mat.coupons ?? []);
+  if (load.isSpectrum) {
+    const totalCycles = load.cycles.reduce((s, c) => s + c.count, 0);
+    const k = e.notch.kf * e.unit.hoop;
+    result.spectrum = {
+      cycles: load.cycles.map((c) => ({ range_MPa: k * c.range, mean_MPa: k * c.mean, count: c.count })),
+      totalCycles,
+      damagePerPass: e.damagePerPass,
+      passesToFailure: e.life,
+      historyPoints: load.historyPoints,
+    };
+  }
+
+  if (input.solve) {
+    const s = solveFor(ctx, input.solve.for);
+    result.solution = s.solution;
+    steps.push(...s.steps);
+    warnings.push(...s.warnings);
+  }
+  if (input.crack) addCrack(result, input, e, steps, warnings);
+  if (input.evidence) {
+    const ev = evaluateEvidence(input.evidence, input.fatigue.designLife_cycles, input.fatigue.scatterFactor);
+    result.evidence = {
+      n: ev.n,
+      logMean: ev.logMean,
+      logStdDev: ev.logStdDev,
+      toleranceFactor: ev.toleranceFactor,
+      lowerBound_cycles: ev.lowerBound_cycles,
+      impliedScatterFactor: ev.impliedScatterFactor,
+      requiredLogStdDev: ev.requiredLogStdDev,
+      supportsDesignLife: ev.supportsDesignLife,
+    };
+    steps.push(...ev.steps);
+    warnings.push(...ev.warnings);
+  }
+  const table = verdictTable(result);
+  result.verdictTable = table.rows;
+  result.verdict = table.verdict;
+  result.governs = table.governs;
+  return result;
+}
+
+function addCrack(result: CheckResult, input: ResolvedCheck, e: Evaluation, steps: Step[], warnings: string[]): void {
+  const c = input.crack!;
+  const m = input.material;
+  const holeRadius = c.holeRadius_mm ?? (input.cutout.kind === "circular-hole" ? input.cutout.radius_mm : undefined);
+  const g = crackGrowth({
+    geometry: c.geometry,
+    initial_mm: c.initial_mm,
+    width_mm: c.width_mm,
+    holeRadius_mm: holeRadius,
+    cracksAtHole: c.cracksAtHole,
+    bulging: c.bulging,
+    form: input.shell.form,
+    shellRadius_mm: e.radii.mean_mm,
+    thickness_mm: e.thickness_mm,
+    hoopMax_MPa: e.hoopMax,
+    hoopMin_MPa: e.hoopMin,
+    yield_MPa: m.yield_MPa,
+    parisC: m.parisC!,
+    parisM: m.parisM!,
+    toughness_MPaSqrtM: m.toughness_MPaSqrtM!,
+    walkerGamma: c.walkerGamma,
+    inspectionFactor: c.inspectionFactor,
+  });
+  result.crack = {
+    geometry: c.geometry,
+    initial_mm: c.initial_mm,
+    critical_mm: g.critical_mm,
+    criticalBy: g.criticalBy,
+    cycles: g.cycles,
+    inspectionInterval_cycles: g.inspectionInterval_cycles,
+    curve: g.curve,
+    leakBeforeBreak: g.leakBeforeBreak ?? null,
+  };
+  steps.push(...g.steps);
+  warnings.push(...g.warnings);
+}
+
+/** Life under each criterion at the same thickness, so the user sees how much the choice matters. */
+function compareCriteria(ctx: Context, t: number, chosen: MeanStressCriterion): CriterionRow[] {
+  return MEAN_STRESS_CRITERIA.map((c) => {
+    const e = evaluate(ctx, t, 1, c);
+    return {
+      criterion: c,
+      label: CRITERION_LABEL[c],
+      equivalentAmplitude_MPa: e.governing.sigmaAr,
+      life_cycles: e.life,
+      allowableLife_cycles: e.allowable,
+      damage: e.damage,
+      status: e.life === 0 ? "no-answer" : e.governing.status,
+      chosen: c === chosen,
+    };
+  });
+}
+
+function lifeVsThickness(ctx: Context, t: number): CheckResult["lifeVsThickness"] {
+  const shell = ctx.input.shell;
+  const points: CheckResult["lifeVsThickness"] = [];
+  for (let i = 0; i <= 20; i++) {
+    const ti = t * (0.6 + i * 0.05);
+    const inner = shell.radiusAt === "inner" ? shell.radius_mm : shell.radiusAt === "mean" ? shell.radius_mm - ti / 2 : shell.radius_mm - ti;
+    if (inner <= 0) continue;
+    points.push({ thickness_mm: ti, life_cycles: evaluate(ctx, ti, 1).life });
+  }
+  return points;
+}
+
+function theoryReason(requested: string, e: Evaluation): string {
+  const ratio = fmt(e.radii.mean_mm / e.thickness_mm);
+  if (requested === "auto") return e.theory === "thin" ? `thin-wall theory: r_m/t = ${ratio} ≥ 10` : `thick-wall (Lamé) theory: r_m/t = ${ratio} < 10`;
+  return `${e.theory}-wall theory as requested (r_m/t = ${ratio})`;
+}
+
+function validityWarnings(ctx: Context, e: Evaluation): string[] {
+  const w: string[] = [];
+  const { input } = ctx;
+  const ratio = e.radii.mean_mm / e.thickness_mm;
+  if (e.theory === "thin" && ratio < 10) {
+    const thick = evaluateThick(ctx, e);
+    w.push(`thin-wall theory was asked for at r_m/t = ${fmt(ratio)}, below 10: it under-estimates the inner-surface hoop stress by ${fmt(100 * (thick / e.hoopMax - 1), 2)} %; use "auto" or "thick"`);
+  }
+  if (e.localYield) {
+    w.push(
+      `the elastic local stress at the notch (${fmt(e.peakMax)} MPa) exceeds the yield strength (${fmt(input.material.yield_MPa)} MPa): the notch yields on the first cycle. ` +
+        (input.fatigue.localYield === "shakedown"
+          ? "The local mean stress is reduced to Sy − σa (shakedown); a strain-life analysis would be more exact."
+          : "The elastic stresses are kept, which over-states the mean stress (conservative); choose localYield \"shakedown\" or make a strain-life analysis for a closer answer."),
+    );
+  }
+  if (2 * e.governing.amplitude > 2 * input.material.yield_MPa) w.push("the local stress range exceeds twice the yield strength: the notch yields in every cycle (reversed plasticity); stress-life results are not valid there");
+  if (e.life === 0) w.push(`no life: ${e.governing.reason ?? "the mean stress is beyond the chosen criterion's range"}. The check fails.`);
+  if (e.governing.status === "no-damage") w.push(e.governing.reason ?? "the cycle never reaches tension");
+  if (input.fatigue.curve === "basquin" && !ctx.load.isSpectrum && e.life !== null && e.life > 0) {
+    if (e.life < VALID_LIFE[0]) w.push(`the life (${fmt(e.life)} cycles) is below 10³ cycles, where local plasticity makes stress-life curves unreliable; a strain-life analysis is needed`);
+    if (e.life > VALID_LIFE[1] && ctx.curve.enduranceLimit_MPa === undefined) w.push(`the life (${fmt(e.life)} cycles) extrapolates the curve beyond 10⁷ cycles, past typical test data and with no endurance limit given`);
+  }
+  if (input.fatigue.scatterFactor === 1) w.push("the scatter factor is 1: the life is a median estimate with no statistical allowance for the weaker items of a fleet");
+  if (e.damage > 1 && e.life !== 0) w.push(`the allowable life (${fmt(e.allowable ?? 0)}) is short of the design life (${fmt(input.fatigue.designLife_cycles)})`);
+  return w;
+}
+
+function evaluateThick(ctx: Context, e: Evaluation): number {
+  const thick = evaluate({ ...ctx, input: { ...ctx.input, shell: { ...ctx.input.shell, theory: "thick" } } }, e.thickness_mm, 1);
+  return thick.hoopMax;
+}
+
+/** The fit with its E739 band drawn across the tested amplitudes (not beyond: the band is for the data's range). */
+function fitSummary(fit: ReturnType<typeof fitCoupons>, coupons: { amplitude_MPa: number; runout: boolean }[]): NonNullable<CheckResult["materialFit"]> {
+  const tested = coupons.filter((c) => !c.runout).map((c) => c.amplitude_MPa);
+  const lo = Math.min(...tested);
+  const hi = Math.max(...tested);
+  const amplitudes = Array.from({ length: 9 }, (_, i) => lo * (hi / lo) ** (i / 8));
+  return {
+    fatigueStrengthCoefficient_MPa: fit.fatigueStrengthCoefficient_MPa,
+    fatigueStrengthExponent: fit.fatigueStrengthExponent,
+    n: fit.n,
+    runouts: fit.runouts,
+    logStdDev: fit.logStdDev,
+    rSquared: fit.rSquared,
+    band: amplitudes.map((a) => ({ amplitude_MPa: a, ...fit.band(a, 0.95) })),
+  };
+}

@@ -1,0 +1,68 @@
+import type { ResolvedCheck } from "../schema/resolve.ts";
+import { cabinDifferential } from "./atmosphere.ts";
+import { countCycles } from "./rainflow.ts";
+import { fmt, step, type Step } from "./step.ts";
+
+/** One pressure cycle (MPa) with how many times it occurs in one pass of the loading. */
+export interface PressureCycle {
+  range: number;
+  mean: number;
+  count: number;
+}
+
+export interface Load {
+  source: "direct" | "altitude" | "history" | "blocks";
+  max_MPa: number;
+  min_MPa: number;
+  /** A single cycle has one entry with count 1; a spectrum has its rainflow or block cycles. */
+  cycles: PressureCycle[];
+  isSpectrum: boolean;
+  historyPoints?: number;
+  steps: Step[];
+}
+
+/** The pressure loading in MPa, counted into cycles once so solvers can rescale it without recounting. */
+export function resolveLoad(p: ResolvedCheck["pressure"]): Load {
+  if (p.history_MPa) {
+    const cycles = countCycles(p.history_MPa);
+    let max = -Infinity;
+    let min = Infinity;
+    for (const x of p.history_MPa) {
+      if (x > max) max = x;
+      if (x < min) min = x;
+    }
+    const total = cycles.reduce((s, c) => s + c.count, 0);
+    return {
+      source: "history",
+      max_MPa: max,
+      min_MPa: min,
+      cycles,
+      isSpectrum: true,
+      historyPoints: p.history_MPa.length,
+      steps: [step("rainflow", "Rainflow count of the pressure history", "cycles = rainflow(p(t))", `${p.history_MPa.length} points → ${cycles.length} distinct cycles, ${fmt(total)} cycles in all`, total, "cycles", "ASTM E1049-85, §5.4.4 (rainflow counting)")],
+    };
+  }
+  if (p.blocks) {
+    const cycles = p.blocks.map((b) => ({ range: b.max_MPa - b.min_MPa, mean: (b.max_MPa + b.min_MPa) / 2, count: b.cycles }));
+    const total = cycles.reduce((s, c) => s + c.count, 0);
+    return {
+      source: "blocks",
+      max_MPa: Math.max(...p.blocks.map((b) => b.max_MPa)),
+      min_MPa: Math.min(...p.blocks.map((b) => b.min_MPa)),
+      cycles,
+      isSpectrum: true,
+      steps: [step("blocks", "Block spectrum", "one pass = Σ blocks", `${p.blocks.length} blocks, ${fmt(total)} cycles per pass`, total, "cycles", "block loading, Palmgren–Miner (Dowling, Mechanical Behavior of Materials, §9.6)")],
+    };
+  }
+  const min = p.min_MPa ?? 0;
+  if (p.fromAltitude) {
+    const { differential_MPa, steps } = cabinDifferential(p.fromAltitude.flight_m, p.fromAltitude.cabin_m);
+    return { source: "altitude", max_MPa: differential_MPa, min_MPa: min, cycles: [single(differential_MPa, min)], isSpectrum: false, steps };
+  }
+  const max = p.max_MPa as number;
+  return { source: "direct", max_MPa: max, min_MPa: min, cycles: [single(max, min)], isSpectrum: false, steps: [] };
+}
+
+function single(max: number, min: number): PressureCycle {
+  return { range: max - min, mean: (max + min) / 2, count: 1 };
+}

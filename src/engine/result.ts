@@ -1,0 +1,125 @@
+import type { MeanStressCriterion } from "../schema/check.ts";
+import type { Step } from "./step.ts";
+
+/** The result document, format "hoopwise.result/1". Keys listed in the check format never change meaning. */
+export interface CriterionRow {
+  criterion: MeanStressCriterion;
+  label: string;
+  equivalentAmplitude_MPa: number | null;
+  life_cycles: number | null;
+  allowableLife_cycles: number | null;
+  damage: number;
+  /** "ok" | "no-answer" (mean beyond the criterion's strength) | "no-damage" (never in tension) | "unlimited" */
+  status: "ok" | "no-answer" | "no-damage" | "unlimited";
+  chosen: boolean;
+}
+
+export interface VerdictRow {
+  id: "static" | "fatigue" | "crack" | "evidence" | "leak-before-break";
+  title: string;
+  status: "pass" | "fail" | "info";
+  /** Plain-words statement of the demand against the capacity. */
+  detail: string;
+  /** Reserve: capacity / demand − 1 where it means something. */
+  margin: number | null;
+}
+
+export interface SpectrumCycle {
+  range_MPa: number;
+  mean_MPa: number;
+  count: number;
+}
+
+export interface CheckResult {
+  format: "hoopwise.result/1";
+  engine: string;
+  fingerprint: string;
+  title?: string;
+  verdict: "pass" | "fail";
+  governs: string;
+  load: { pressureMax_MPa: number; pressureMin_MPa: number; source: "direct" | "altitude" | "history" | "blocks" };
+  membrane: {
+    theory: "thin" | "thick";
+    theoryReason: string;
+    innerRadius_mm: number;
+    meanRadius_mm: number;
+    outerRadius_mm: number;
+    hoopMax_MPa: number;
+    hoopMin_MPa: number;
+    axialMax_MPa: number;
+    axialMin_MPa: number;
+    radialMax_MPa: number;
+    vonMisesMax_MPa: number;
+  };
+  static: { yieldFactor: number; allowable_MPa: number; vonMisesMax_MPa: number; margin: number; pass: boolean };
+  notch: {
+    kt: number;
+    ktGoverns: string;
+    biaxialRatio: number;
+    q: number;
+    kf: number;
+    peakMax_MPa: number;
+    peakMin_MPa: number;
+    localYield: boolean;
+  };
+  fatigue: {
+    criterion: MeanStressCriterion;
+    curve: "basquin" | "welded";
+    amplitude_MPa: number;
+    mean_MPa: number;
+    equivalentAmplitude_MPa: number | null;
+    life_cycles: number | null;
+    allowableLife_cycles: number | null;
+    designLife_cycles: number;
+    scatterFactor: number;
+    damage: number;
+    /** "cycles" for a single cycle; "passes" when a history or block spectrum is repeated. */
+    lifeCountedIn: "cycles" | "passes";
+    modifyingFactor: number;
+    curveUsed: { fatigueStrengthCoefficient_MPa: number; fatigueStrengthExponent: number; enduranceLimit_MPa: number | null };
+    criteria: CriterionRow[];
+    pass: boolean;
+  };
+  crack?: {
+    geometry: string;
+    initial_mm: number;
+    critical_mm: number;
+    criticalBy: string;
+    cycles: number;
+    inspectionInterval_cycles: number;
+    curve: { a_mm: number; n_cycles: number }[];
+    leakBeforeBreak: { leakBeforeBreak: boolean; throughWallHalfLength_mm: number; criticalHalfLength_mm: number } | null;
+  };
+  evidence?: {
+    n: number;
+    logMean: number;
+    logStdDev: number;
+    toleranceFactor: number | null;
+    lowerBound_cycles: number | null;
+    impliedScatterFactor: number | null;
+    requiredLogStdDev: number | null;
+    supportsDesignLife: boolean | null;
+  };
+  materialFit?: {
+    fatigueStrengthCoefficient_MPa: number;
+    fatigueStrengthExponent: number;
+    n: number;
+    runouts: number;
+    logStdDev: number;
+    rSquared: number;
+    band: { amplitude_MPa: number; lower_cycles: number; median_cycles: number; upper_cycles: number }[];
+  };
+  spectrum?: {
+    cycles: SpectrumCycle[];
+    totalCycles: number;
+    damagePerPass: number;
+    passesToFailure: number | null;
+    historyPoints?: number;
+  };
+  solution?: { thickness_mm?: number; pressureMax_MPa?: number; governs: string; iterations: number; evaluations: number };
+  lifeVsThickness: { thickness_mm: number; life_cycles: number | null }[];
+  verdictTable: VerdictRow[];
+  material: { id?: string; name: string; source: string; typical: boolean };
+  steps: Step[];
+  warnings: string[];
+}

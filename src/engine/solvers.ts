@@ -1,0 +1,60 @@
+import { evaluate, type Context, type Evaluation } from "./evaluate.ts";
+import type { CheckResult } from "./result.ts";
+import { increasingRoot } from "./solve.ts";
+import { fmt, step, type Step } from "./step.ts";
+
+/**
+ * Design solvers. The reserve of an evaluation is the smaller of the fatigue reserve
+ * log10(N_allow / N_design) and the static reserve log10(σ_allow / σvm); both grow with thickness
+ * and fall with pressure, so the minimum thickness (or the maximum pressure) is the root of the reserve.
+ */
+const CAP = 50;
+
+function reserve(e: Evaluation, designLife: number): { value: number; governs: "fatigue" | "static" } {
+  const fatigue = e.allowable === null ? CAP : e.allowable <= 0 ? -CAP : Math.log10(e.allowable / designLife);
+  const stat = e.vonMisesMax > 0 ? Math.log10(e.staticAllowable / e.vonMisesMax) : CAP;
+  return fatigue <= stat ? { value: Math.max(fatigue, -CAP), governs: "fatigue" } : { value: Math.max(stat, -CAP), governs: "static" };
+}
+
+export function solveFor(ctx: Context, target: "thickness" | "pressure"): { solution: NonNullable<CheckResult["solution"]>; steps: Step[]; warnings: string[] } {
+  const design = ctx.input.fatigue.designLife_cycles;
+  const shell = ctx.input.shell;
+  const t0 = shell.thickness_mm;
+  const warnings: string[] = [];
+  const REL_TOL = 1e-4;
+  if (target === "thickness") {
+    // The wall must leave an inside: for a mean radius t < 2r, for an outer radius t < r.
+    const tMax = shell.radiusAt === "inner" ? 100 * shell.radius_mm : shell.radiusAt === "mean" ? 1.999 * shell.radius_mm : 0.999 * shell.radius_mm;
+    const root = increasingRoot((t) => reserve(evaluate(ctx, t, 1), design).value, t0, t0 * 1e-4, tMax, REL_TOL);
+    const e = evaluate(ctx, root.x, 1);
+    const governs = root.found ? reserve(e, design).governs : "none";
+    if (!root.found) warnings.push(root.side === "above-max" ? "no wall thickness meets the design life and the static check for this radius" : "even a wall far thinner than the given one meets the checks; the solve stopped at 1/10 000 of it");
+    const stepOut = step(
+      "solve-thickness",
+      "Minimum wall thickness",
+      "t_min: min(log₁₀(N_allow/N_design), log₁₀(σ_allow/σvm)) = 0",
+      `t_min = ${fmt(root.x)} mm (${governs} governs; ${root.evaluations} evaluations)`,
+      root.x,
+      "mm",
+      "bracketing and Illinois false position (Dowell & Jarratt 1971) on ln t",
+    );
+    return { solution: { thickness_mm: root.x, governs, iterations: root.iterations, evaluations: root.evaluations }, steps: [stepOut], warnings };
+  }
+  // Pressure: scale every pressure by s; the reserve falls with s, so solve on w = 1/s where it rises.
+  const root = increasingRoot((w) => reserve(evaluate(ctx, t0, 1 / w), design).value, 1, 1e-6, 1e6, REL_TOL);
+  const s = 1 / root.x;
+  const e = evaluate(ctx, t0, s);
+  const governs = root.found ? reserve(e, design).governs : "none";
+  if (!root.found) warnings.push("no pressure scale between 10⁻⁶ and 10⁶ times the given one brings the reserve to zero");
+  const pMax = ctx.load.max_MPa * s;
+  const stepOut = step(
+    "solve-pressure",
+    "Maximum pressure (all pressures scaled together)",
+    "p_max: min(log₁₀(N_allow/N_design), log₁₀(σ_allow/σvm)) = 0",
+    `p_max = ${fmt(ctx.load.max_MPa)} × ${fmt(s)} (${governs} governs; ${root.evaluations} evaluations)`,
+    pMax,
+    "MPa",
+    "bracketing and Illinois false position (Dowell & Jarratt 1971) on ln(1/s)",
+  );
+  return { solution: { pressureMax_MPa: pMax, governs, iterations: root.iterations, evaluations: root.evaluations }, steps: [stepOut], warnings };
+}

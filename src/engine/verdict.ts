@@ -1,0 +1,76 @@
+import type { CheckResult, VerdictRow } from "./result.ts";
+import { fmt } from "./step.ts";
+
+/**
+ * The verdict table: one row per check made, with what was demanded against what is allowed.
+ * The verdict fails if any row fails; "info" rows (inspection intervals, leak-before-break)
+ * inform without deciding. What governs is the failing row, or else the row with the least reserve.
+ */
+export function verdictTable(r: CheckResult): { rows: VerdictRow[]; verdict: "pass" | "fail"; governs: string } {
+  const rows: VerdictRow[] = [];
+  const s = r.static;
+  rows.push({
+    id: "static",
+    title: "Static strength (von Mises against yield / factor)",
+    status: s.pass ? "pass" : "fail",
+    detail: `σvm = ${fmt(s.vonMisesMax_MPa)} MPa against Sy/${fmt(s.yieldFactor)} = ${fmt(s.allowable_MPa)} MPa`,
+    margin: s.margin,
+  });
+  const f = r.fatigue;
+  const unit = f.lifeCountedIn;
+  rows.push({
+    id: "fatigue",
+    title: `Fatigue life (${f.curve === "welded" ? "welded detail category" : f.criteria.find((c) => c.chosen)?.label ?? f.criterion}, scatter factor ${fmt(f.scatterFactor)})`,
+    status: f.pass ? "pass" : "fail",
+    detail:
+      f.life_cycles === null
+        ? `unlimited life against a design life of ${fmt(f.designLife_cycles)} ${unit}`
+        : f.life_cycles === 0
+          ? "no life: the mean stress is beyond the criterion's range"
+          : `allowable ${fmt(f.allowableLife_cycles ?? 0)} ${unit} against a design life of ${fmt(f.designLife_cycles)} ${unit} (damage ${fmt(f.damage, 3)})`,
+    margin: f.life_cycles === null ? null : f.damage > 0 && Number.isFinite(f.damage) ? 1 / f.damage - 1 : -1,
+  });
+  if (r.crack) {
+    const c = r.crack;
+    const covers = c.inspectionInterval_cycles >= f.designLife_cycles;
+    rows.push({
+      id: "crack",
+      title: "Crack growth (Paris law)",
+      status: covers ? "pass" : "info",
+      detail: covers
+        ? `the crack needs ${fmt(c.cycles)} cycles to reach ${fmt(c.critical_mm)} mm: the interval ${fmt(c.inspectionInterval_cycles)} covers the design life`
+        : `the crack reaches its critical size of ${fmt(c.critical_mm)} mm (${c.criticalBy}) in ${fmt(c.cycles)} cycles: inspect at least every ${fmt(c.inspectionInterval_cycles)} cycles`,
+      margin: null,
+    });
+    if (c.leakBeforeBreak) {
+      const l = c.leakBeforeBreak;
+      rows.push({
+        id: "leak-before-break",
+        title: "Leak before break (through-wall crack of length 2t)",
+        status: "info",
+        detail: l.leakBeforeBreak
+          ? `yes: a through-wall crack of half-length ${fmt(l.throughWallHalfLength_mm)} mm is below the critical half-length ${fmt(l.criticalHalfLength_mm)} mm, so the shell should leak before it breaks`
+          : `no: a through-wall crack of half-length ${fmt(l.throughWallHalfLength_mm)} mm exceeds the critical half-length ${fmt(l.criticalHalfLength_mm)} mm, so the shell may break without warning`,
+        margin: l.criticalHalfLength_mm / l.throughWallHalfLength_mm - 1,
+      });
+    }
+  }
+  if (r.evidence) {
+    const ev = r.evidence;
+    rows.push({
+      id: "evidence",
+      title: "Test evidence (one-sided lower tolerance bound)",
+      status: ev.supportsDesignLife === null ? "info" : ev.supportsDesignLife ? "pass" : "fail",
+      detail:
+        ev.lowerBound_cycles === null
+          ? `no bound: ${ev.n} test life without an assumed scatter cannot bound a fleet's life`
+          : `lower bound ${fmt(ev.lowerBound_cycles)} cycles against a design life of ${fmt(f.designLife_cycles)} cycles`,
+      margin: ev.lowerBound_cycles === null ? null : ev.lowerBound_cycles / f.designLife_cycles - 1,
+    });
+  }
+  const failing = rows.filter((x) => x.status === "fail");
+  const deciding = rows.filter((x) => x.status !== "info" && x.margin !== null);
+  const least = deciding.reduce<VerdictRow | undefined>((a, b) => (a === undefined || (b.margin as number) < (a.margin as number) ? b : a), undefined);
+  const gov = failing[0] ?? least ?? rows[0];
+  return { rows, verdict: failing.length ? "fail" : "pass", governs: `${gov.title}: ${gov.detail}` };
+}

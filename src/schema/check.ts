@@ -1,0 +1,258 @@
+import { z } from "zod";
+
+/**
+ * The check format, version 1: the one definition of a check.
+ * Every face (form, JSON API, CLI, sheet) parses through this schema; the TypeScript
+ * types come from it with z.infer. Units are in the key names (mm, MPa, cycles).
+ */
+
+const num = (what: string) => z.number({ error: `${what} must be a number` });
+const positive = (what: string, max: number) =>
+  num(what).positive({ error: `${what} must be greater than 0` }).max(max, { error: `${what} must be at most ${max}` });
+const fraction = (what: string) =>
+  num(what)
+    .gt(0, { error: `${what} must be between 0 and 1 (exclusive)` })
+    .lt(1, { error: `${what} must be between 0 and 1 (exclusive)` });
+const text = (what: string, max: number) => z.string({ error: `${what} must be text` }).max(max, { error: `${what} must be at most ${max} characters` });
+
+export const MEAN_STRESS_CRITERIA = ["goodman", "gerber", "soderberg", "asme-elliptic", "swt", "morrow", "walker"] as const;
+export const SURFACE_FINISHES = ["ground", "machined", "hot-rolled", "as-forged"] as const;
+export const MATERIAL_FAMILIES = ["aluminium", "steel", "stainless", "titanium", "other"] as const;
+
+export const shellSchema = z
+  .strictObject({
+    form: z.enum(["cylinder", "sphere"], { error: 'shell form must be "cylinder" or "sphere"' }),
+    radius_mm: positive("the radius", 1e5).describe("Shell radius in mm, measured where radiusAt says"),
+    radiusAt: z.enum(["inner", "mean", "outer"], { error: 'radiusAt must be "inner", "mean" or "outer"' }).default("mean"),
+    thickness_mm: positive("the wall thickness", 1e4).describe("Skin or wall thickness in mm"),
+    theory: z
+      .enum(["auto", "thin", "thick"], { error: 'theory must be "auto", "thin" or "thick"' })
+      .default("auto")
+      .describe("auto: thick-wall (Lamé) below mean radius / thickness = 10"),
+  })
+  .superRefine((s, ctx) => {
+    const inner = s.radiusAt === "inner" ? s.radius_mm : s.radiusAt === "mean" ? s.radius_mm - s.thickness_mm / 2 : s.radius_mm - s.thickness_mm;
+    if (inner <= 0) {
+      ctx.addIssue({
+        code: "custom",
+        path: ["radius_mm"],
+        message: `the radius is too small for its wall: a ${s.radiusAt} radius of ${s.radius_mm} mm with a ${s.thickness_mm} mm wall leaves no inside`,
+      });
+    }
+  });
+
+const altitudeSchema = z
+  .strictObject({
+    flight_m: num("the flight altitude").min(-500, { error: "the flight altitude must be at least −500 m" }).max(20000, {
+      error: "the flight altitude must be at most 20 000 m (the standard atmosphere is modelled to 20 km)",
+    }),
+    cabin_m: num("the cabin altitude").min(-500, { error: "the cabin altitude must be at least −500 m" }).max(20000, {
+      error: "the cabin altitude must be at most 20 000 m",
+    }),
+  })
+  .superRefine((a, ctx) => {
+    if (a.cabin_m >= a.flight_m) {
+      ctx.addIssue({ code: "custom", path: ["cabin_m"], message: "the cabin altitude must be below the flight altitude, or the shell is not pressurized" });
+    }
+  });
+
+const blockSchema = z
+  .strictObject({
+    max_MPa: num("the block's maximum pressure").max(1e4, { error: "the block's maximum pressure must be at most 10 000 MPa" }),
+    min_MPa: num("the block's minimum pressure").default(0),
+    cycles: positive("the block's cycle count", 1e12),
+  })
+  .superRefine((b, ctx) => {
+    if (b.min_MPa > b.max_MPa) ctx.addIssue({ code: "custom", path: ["min_MPa"], message: "the block's minimum pressure must not exceed its maximum" });
+  });
+
+export const pressureSchema = z
+  .strictObject({
+    max_MPa: num("the maximum pressure").max(1e4, { error: "the maximum pressure must be at most 10 000 MPa" }).optional(),
+    min_MPa: num("the minimum pressure").optional(),
+    fromAltitude: altitudeSchema.optional(),
+    history_MPa: z.array(num("each pressure in the history"), { error: "the pressure history must be a list of numbers" }).max(5_000_000, {
+      error: "the pressure history may hold at most 5 000 000 points",
+    }).optional(),
+    blocks: z.array(blockSchema, { error: "the blocks must be a list" }).min(1, { error: "give at least one block" }).max(10000, {
+      error: "at most 10 000 blocks",
+    }).optional(),
+  })
+  .superRefine((p, ctx) => {
+    const modes = [p.max_MPa !== undefined, p.fromAltitude !== undefined, p.history_MPa !== undefined, p.blocks !== undefined].filter(Boolean).length;
+    if (modes !== 1) {
+      ctx.addIssue({
+        code: "custom",
+        path: [],
+        message: "give the pressure one way: max_MPa (with min_MPa), fromAltitude, history_MPa or blocks",
+      });
+      return;
+    }
+    if (p.max_MPa !== undefined && p.max_MPa <= 0) {
+      ctx.addIssue({
+        code: "custom",
+        path: ["max_MPa"],
+        message: "the maximum pressure must be greater than 0 (inside above outside); an outside pressure needs a buckling check, which this tool does not make",
+      });
+    }
+    const top = p.max_MPa ?? Infinity;
+    if (p.min_MPa !== undefined && p.min_MPa > top) ctx.addIssue({ code: "custom", path: ["min_MPa"], message: "the minimum pressure must not exceed the maximum" });
+    if ((p.history_MPa || p.blocks) && p.min_MPa !== undefined) {
+      ctx.addIssue({ code: "custom", path: ["min_MPa"], message: "min_MPa applies only to a single cycle; a history or blocks carry their own minima" });
+    }
+    if (p.history_MPa && p.history_MPa.length < 2) {
+      ctx.addIssue({ code: "custom", path: ["history_MPa"], message: "the pressure history needs at least two points to make a cycle" });
+    }
+    if (p.history_MPa && p.history_MPa.length >= 2 && Math.max(...sampleMax(p.history_MPa)) <= 0) {
+      ctx.addIssue({ code: "custom", path: ["history_MPa"], message: "the pressure history never rises above 0: the shell is never pressurized" });
+    }
+    if (p.blocks && p.blocks.every((b) => b.max_MPa <= 0)) {
+      ctx.addIssue({ code: "custom", path: ["blocks"], message: "no block rises above 0 MPa: the shell is never pressurized" });
+    }
+  });
+
+/** Largest value without spreading a million-element array into Math.max's arguments. */
+function sampleMax(xs: number[]): [number] {
+  let m = -Infinity;
+  for (const x of xs) if (x > m) m = x;
+  return [m];
+}
+
+export const cutoutSchema = z.discriminatedUnion(
+  "kind",
+  [
+    z.strictObject({ kind: z.literal("none") }),
+    z.strictObject({
+      kind: z.literal("circular-hole"),
+      radius_mm: positive("the hole radius", 1e4).optional().describe("Needed only for notch sensitivity from the root radius"),
+    }),
+    z.strictObject({
+      kind: z.literal("elliptical-hole"),
+      halfAxisAlongHoop_mm: positive("the half-axis along the hoop direction", 1e4),
+      halfAxisAlongAxial_mm: positive("the half-axis along the axial direction", 1e4),
+    }),
+    z.strictObject({
+      kind: z.literal("given"),
+      kt: num("Kt").min(1, { error: "Kt must be at least 1" }).max(20, { error: "Kt must be at most 20" }),
+      rootRadius_mm: positive("the notch root radius", 1e4).optional(),
+      basis: text("the basis of Kt", 500).optional().describe("Where the given Kt comes from (chart, FE model, test)"),
+    }),
+  ],
+  { error: 'cutout kind must be "none", "circular-hole", "elliptical-hole" or "given"' },
+);
+
+const couponSchema = z.strictObject({
+  amplitude_MPa: positive("the coupon stress amplitude", 1e4),
+  life_cycles: positive("the coupon life", 1e12),
+  runout: z.boolean({ error: "runout must be true or false" }).default(false),
+});
+
+export const materialSchema = z.strictObject({
+  id: text("the material id", 100).optional().describe("A library material; values given beside it override the library's"),
+  name: text("the material name", 200).optional(),
+  family: z.enum(MATERIAL_FAMILIES, { error: `family must be one of ${MATERIAL_FAMILIES.join(", ")}` }).optional(),
+  ultimate_MPa: positive("the ultimate strength", 1e4).optional(),
+  yield_MPa: positive("the yield strength", 1e4).optional(),
+  modulus_MPa: positive("the elastic modulus", 1e7).optional(),
+  fatigueStrengthCoefficient_MPa: positive("the fatigue strength coefficient σ'f", 1e5).optional(),
+  fatigueStrengthExponent: num("the Basquin exponent b")
+    .lt(0, { error: "the Basquin exponent b must be negative (strength falls as life rises); typical values lie between −0.05 and −0.15" })
+    .gt(-1, { error: "the Basquin exponent b must be above −1" })
+    .optional(),
+  enduranceLimit_MPa: positive("the endurance limit", 1e4).optional(),
+  toughness_MPaSqrtM: positive("the fracture toughness", 1e4).optional(),
+  parisC: positive("the Paris coefficient C", 1).optional(),
+  parisM: num("the Paris exponent m").min(1, { error: "the Paris exponent m must be between 1 and 10" }).max(10, { error: "the Paris exponent m must be between 1 and 10" }).optional(),
+  coupons: z.array(couponSchema, { error: "coupons must be a list" }).max(10000, { error: "at most 10 000 coupons" }).optional(),
+  source: text("the material source", 500).optional(),
+});
+
+export const fatigueSchema = z
+  .strictObject({
+    meanStress: z.enum(MEAN_STRESS_CRITERIA, { error: `meanStress must be one of ${MEAN_STRESS_CRITERIA.join(", ")}` }).default("goodman"),
+    walkerGamma: num("the Walker exponent γ").gt(0, { error: "the Walker exponent γ must be above 0" }).max(1, { error: "the Walker exponent γ must be at most 1" }).default(0.5),
+    notchSensitivity: num("the notch sensitivity q").min(0, { error: "the notch sensitivity q must be between 0 and 1" }).max(1, { error: "the notch sensitivity q must be between 0 and 1" }).optional(),
+    notchConstant: z.enum(["peterson", "neuber"], { error: 'notchConstant must be "peterson" or "neuber"' }).optional(),
+    designLife_cycles: positive("the design life", 1e12),
+    scatterFactor: num("the scatter factor").min(1, { error: "the scatter factor must be at least 1" }).max(100, { error: "the scatter factor must be at most 100" }).default(1),
+    curve: z.enum(["basquin", "welded"], { error: 'curve must be "basquin" or "welded"' }).default("basquin"),
+    detailCategory_MPa: positive("the detail category", 1000).optional(),
+    gammaMf: num("the partial factor γMf").min(1, { error: "γMf must be at least 1" }).max(2, { error: "γMf must be at most 2" }).default(1),
+    localYield: z.enum(["elastic", "shakedown"], { error: 'localYield must be "elastic" or "shakedown"' }).default("elastic"),
+    modifiers: z
+      .strictObject({
+        surface: z.enum(SURFACE_FINISHES, { error: `surface must be one of ${SURFACE_FINISHES.join(", ")}` }).optional(),
+        reliability: z
+          .number({ error: "the reliability must be a number" })
+          .min(0.5, { error: "the reliability factor needs a reliability between 0.5 and 0.9999" })
+          .max(0.9999, { error: "the reliability factor needs a reliability between 0.5 and 0.9999" })
+          .optional(),
+        sizeDiameter_mm: num("the effective size").min(2.79, { error: "the size factor is published for 2.79 to 254 mm" }).max(254, { error: "the size factor is published for 2.79 to 254 mm" }).optional(),
+      })
+      .optional(),
+  })
+  .superRefine((f, ctx) => {
+    if (f.notchSensitivity !== undefined && f.notchConstant !== undefined) {
+      ctx.addIssue({ code: "custom", path: ["notchConstant"], message: "give either notchSensitivity or notchConstant, not both" });
+    }
+    if (f.curve === "welded" && f.detailCategory_MPa === undefined) {
+      ctx.addIssue({ code: "custom", path: ["detailCategory_MPa"], message: "a welded curve needs its detail category (stress range at 2 million cycles, MPa)" });
+    }
+  });
+
+export const crackSchema = z.strictObject({
+  geometry: z.enum(["center-through", "edge-through", "hole-through"], { error: 'crack geometry must be "center-through", "edge-through" or "hole-through"' }),
+  initial_mm: positive("the initial crack size", 1e4),
+  width_mm: positive("the panel width", 1e5).optional(),
+  holeRadius_mm: positive("the hole radius", 1e4).optional(),
+  cracksAtHole: z.union([z.literal(1), z.literal(2)], { error: "cracksAtHole must be 1 or 2" }).default(1),
+  inspectionFactor: num("the inspection factor").min(1, { error: "the inspection factor must be at least 1" }).max(100, { error: "the inspection factor must be at most 100" }).default(2),
+  bulging: z.boolean({ error: "bulging must be true or false" }).default(false),
+  walkerGamma: num("the crack-growth Walker exponent").gt(0, { error: "the crack-growth Walker exponent must be above 0" }).max(1, { error: "the crack-growth Walker exponent must be at most 1" }).optional(),
+});
+
+export const evidenceSchema = z.strictObject({
+  lives_cycles: z
+    .array(positive("each test life", 1e12), { error: "the test lives must be a list of numbers" })
+    .min(1, { error: "give at least one test life" })
+    .max(10000, { error: "at most 10 000 test lives" }),
+  reliability: fraction("the reliability").default(0.9),
+  confidence: fraction("the confidence").default(0.95),
+  assumedLogStdDev: positive("the assumed log standard deviation", 5).optional(),
+});
+
+const lengthUnits = ["mm", "in"] as const;
+const stressUnits = ["MPa", "kPa", "bar", "psi", "ksi"] as const;
+export const displaySchema = z.strictObject({
+  length: z.enum(lengthUnits, { error: 'length unit must be "mm" or "in"' }).default("mm"),
+  stress: z.enum(stressUnits, { error: `stress unit must be one of ${stressUnits.join(", ")}` }).default("MPa"),
+  pressure: z.enum(stressUnits, { error: `pressure unit must be one of ${stressUnits.join(", ")}` }).default("MPa"),
+  altitude: z.enum(["m", "ft"], { error: 'altitude unit must be "m" or "ft"' }).default("m"),
+});
+
+export const checkSchema = z.strictObject({
+  format: z.literal("hoopwise.check/1", { error: 'format must be "hoopwise.check/1"' }),
+  title: text("the title", 300).optional(),
+  project: text("the project", 300).optional(),
+  calcNumber: text("the calculation number", 100).optional(),
+  notes: text("the notes", 5000).optional(),
+  display: displaySchema.optional().describe("The units the user reads and types in; the check itself is always SI"),
+  shell: shellSchema,
+  pressure: pressureSchema,
+  axialExtra: z
+    .strictObject({ max_MPa: num("the extra axial stress at maximum").default(0), min_MPa: num("the extra axial stress at minimum").default(0) })
+    .optional(),
+  cutout: cutoutSchema.default({ kind: "none" }),
+  material: materialSchema,
+  fatigue: fatigueSchema,
+  static: z.strictObject({ yieldFactor: num("the yield factor").min(1, { error: "the yield factor must be at least 1" }).max(10, { error: "the yield factor must be at most 10" }).default(1.5) }).optional(),
+  crack: crackSchema.optional(),
+  evidence: evidenceSchema.optional(),
+  solve: z.strictObject({ for: z.enum(["thickness", "pressure"], { error: 'solve for "thickness" or "pressure"' }) }).optional(),
+});
+
+export type CheckDocument = z.input<typeof checkSchema>;
+export type ParsedCheck = z.output<typeof checkSchema>;
+export type MeanStressCriterion = (typeof MEAN_STRESS_CRITERIA)[number];
+export type SurfaceFinish = (typeof SURFACE_FINISHES)[number];
+export type MaterialFamily = (typeof MATERIAL_FAMILIES)[number];

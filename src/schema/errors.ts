@@ -1,0 +1,47 @@
+import type { z } from "zod";
+import type { FieldError } from "../engine/errors.ts";
+
+/**
+ * Turn zod issues into the errors document of the check format: one entry per problem,
+ * `path` in dot notation, `message` in words a user understands. The schema carries its own
+ * messages for ranges and types; this fills in the cases zod words for programmers.
+ */
+export function toFieldErrors(issues: readonly z.core.$ZodIssue[], raw: unknown, prefix = ""): FieldError[] {
+  const out: FieldError[] = [];
+  for (const issue of issues) {
+    const base = [prefix, issue.path.map(String).join(".")].filter(Boolean).join(".");
+    if (issue.code === "unrecognized_keys") {
+      for (const key of issue.keys) {
+        out.push({ path: base ? `${base}.${key}` : key, message: `"${key}" is not a field of the check format here; check its spelling` });
+      }
+      continue;
+    }
+    const present = valueAt(raw, issue.path) !== undefined;
+    let message = issue.message;
+    if (issue.code === "invalid_type" && !present) message = "is required";
+    if (issue.code === "invalid_union" && "note" in issue && issue.note === "No matching discriminator") {
+      message = present ? `must be one of ${(issue as { options?: unknown[] }).options?.map((o) => `"${String(o)}"`).join(", ")}` : "is required";
+    }
+    out.push({ path: base || "(document)", message });
+  }
+  return dedupe(out);
+}
+
+function valueAt(raw: unknown, path: readonly PropertyKey[]): unknown {
+  let v: unknown = raw;
+  for (const key of path) {
+    if (v === null || typeof v !== "object") return undefined;
+    v = (v as Record<PropertyKey, unknown>)[key];
+  }
+  return v;
+}
+
+function dedupe(errors: FieldError[]): FieldError[] {
+  const seen = new Set<string>();
+  return errors.filter((e) => {
+    const k = `${e.path}\u0000${e.message}`;
+    if (seen.has(k)) return false;
+    seen.add(k);
+    return true;
+  });
+}

@@ -1,0 +1,104 @@
+import type { FieldError } from "../engine/errors.ts";
+import { MATERIALS, findMaterial, TYPICAL_FLAG } from "../materials/library.ts";
+import type { MaterialFamily, ParsedCheck } from "./check.ts";
+
+/** A material with every value the engine needs; optional ones only where a method may go without. */
+export interface ResolvedMaterial {
+  id?: string;
+  name: string;
+  family: MaterialFamily;
+  ultimate_MPa: number;
+  yield_MPa: number;
+  modulus_MPa: number;
+  /** Absent only while coupons are still to be fitted. */
+  fatigueStrengthCoefficient_MPa?: number;
+  fatigueStrengthExponent?: number;
+  enduranceLimit_MPa?: number;
+  toughness_MPaSqrtM?: number;
+  parisC?: number;
+  parisM?: number;
+  coupons?: { amplitude_MPa: number; life_cycles: number; runout: boolean }[];
+  source: string;
+}
+
+/** The parsed document (defaults filled in) is kept beside the resolved values: it is what gets fingerprinted. */
+export type ResolvedCheck = Omit<ParsedCheck, "material"> & { material: ResolvedMaterial; document: ParsedCheck };
+
+/**
+ * Cross-field rules the schema cannot see one field at a time: the library lookup with
+ * overrides, the values a chosen method needs, strengths in a sensible order.
+ */
+export function resolveCheck(parsed: ParsedCheck): { ok: true; value: ResolvedCheck } | { ok: false; errors: FieldError[] } {
+  const errors: FieldError[] = [];
+  const m = parsed.material;
+  let base: Partial<ResolvedMaterial> = {};
+  if (m.id !== undefined) {
+    const lib = findMaterial(m.id);
+    if (!lib) {
+      errors.push({ path: "material.id", message: `unknown material "${m.id}"; the library holds ${MATERIALS.map((x) => x.id).join(", ")}` });
+      return { ok: false, errors };
+    }
+    base = { ...lib, source: `${lib.source} (${TYPICAL_FLAG})` };
+  }
+  const merged = { ...base, ...stripUndefined(m) } as Partial<ResolvedMaterial> & { name?: string };
+  const need = (key: keyof ResolvedMaterial, words: string, why = "") => {
+    if (merged[key] === undefined) errors.push({ path: `material.${key}`, message: `${words} is required${why}` });
+  };
+  need("ultimate_MPa", "the ultimate strength");
+  need("yield_MPa", "the yield strength");
+  need("modulus_MPa", "the elastic modulus");
+  const curve = parsed.fatigue.curve;
+  if (curve === "basquin" && !merged.coupons) {
+    need("fatigueStrengthCoefficient_MPa", "the fatigue strength coefficient σ'f", " (or give coupons to fit it)");
+    need("fatigueStrengthExponent", "the Basquin exponent b", " (or give coupons to fit it)");
+  }
+  if (parsed.crack) {
+    const why = " because a crack is given";
+    need("toughness_MPaSqrtM", "the fracture toughness", why);
+    need("parisC", "the Paris coefficient C", why);
+    need("parisM", "the Paris exponent m", why);
+    if (parsed.crack.geometry === "hole-through" && parsed.crack.holeRadius_mm === undefined && !(parsed.cutout.kind === "circular-hole" && parsed.cutout.radius_mm)) {
+      errors.push({ path: "crack.holeRadius_mm", message: "a crack from a hole needs the hole radius (here or as cutout.radius_mm)" });
+    }
+  }
+  if (merged.yield_MPa !== undefined && merged.ultimate_MPa !== undefined && merged.yield_MPa > merged.ultimate_MPa) {
+    errors.push({ path: "material.yield_MPa", message: `the yield strength (${merged.yield_MPa} MPa) must not exceed the ultimate strength (${merged.ultimate_MPa} MPa)` });
+  }
+  if (merged.enduranceLimit_MPa !== undefined && merged.ultimate_MPa !== undefined && merged.enduranceLimit_MPa >= merged.ultimate_MPa) {
+    errors.push({ path: "material.enduranceLimit_MPa", message: "the endurance limit must be below the ultimate strength" });
+  }
+  if (merged.fatigueStrengthCoefficient_MPa !== undefined && merged.ultimate_MPa !== undefined && merged.fatigueStrengthCoefficient_MPa < 0.5 * merged.ultimate_MPa) {
+    errors.push({
+      path: "material.fatigueStrengthCoefficient_MPa",
+      message: `σ'f (${merged.fatigueStrengthCoefficient_MPa} MPa) is below half the ultimate strength; σ'f is normally near or above the ultimate strength — check the value`,
+    });
+  }
+  if (parsed.fatigue.notchConstant !== undefined) {
+    const family = merged.family ?? "other";
+    const steelLike = family === "steel" || family === "stainless";
+    if (parsed.fatigue.notchConstant === "neuber" && !steelLike) {
+      errors.push({ path: "fatigue.notchConstant", message: "Neuber's constant is published here for steels only; use peterson or give notchSensitivity" });
+    } else if (!steelLike && family !== "aluminium") {
+      errors.push({ path: "fatigue.notchConstant", message: `Peterson's constant is published here for steels and aluminium alloys, not for the "${family}" family; give notchSensitivity` });
+    }
+    const radiusKnown =
+      parsed.cutout.kind === "elliptical-hole" ||
+      (parsed.cutout.kind === "circular-hole" && parsed.cutout.radius_mm !== undefined) ||
+      (parsed.cutout.kind === "given" && parsed.cutout.rootRadius_mm !== undefined);
+    if (!radiusKnown) {
+      errors.push({ path: "fatigue.notchConstant", message: "notch sensitivity from a constant needs the root radius: give cutout.radius_mm or cutout.rootRadius_mm" });
+    }
+  }
+  if (errors.length) return { ok: false, errors };
+  const material: ResolvedMaterial = {
+    ...(merged as ResolvedMaterial),
+    name: merged.name ?? "own material",
+    family: merged.family ?? "other",
+    source: merged.source ?? "entered by the user",
+  };
+  return { ok: true, value: { ...parsed, material, document: parsed } };
+}
+
+function stripUndefined<T extends object>(o: T): Partial<T> {
+  return Object.fromEntries(Object.entries(o).filter(([, v]) => v !== undefined)) as Partial<T>;
+}
