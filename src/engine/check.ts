@@ -130,6 +130,7 @@ export function runCheck(input: ResolvedCheck): CheckResult {
       n: ev.n,
       logMean: ev.logMean,
       logStdDev: ev.logStdDev,
+      logStdDevFrom: ev.logStdDevFrom,
       toleranceFactor: ev.toleranceFactor,
       lowerBound_cycles: ev.lowerBound_cycles,
       impliedScatterFactor: ev.impliedScatterFactor,

@@ -85,16 +85,18 @@ export interface CheckResult {
     initial_mm: number;
     critical_mm: number;
     criticalBy: string;
-    cycles: number;
-    inspectionInterval_cycles: number;
+    /** null when the pressure does not cycle (no growth). */
+    cycles: number | null;
+    inspectionInterval_cycles: number | null;
     curve: { a_mm: number; n_cycles: number }[];
     leakBeforeBreak: { leakBeforeBreak: boolean; throughWallHalfLength_mm: number; criticalHalfLength_mm: number } | null;
   };
   evidence?: {
     n: number;
     logMean: number;
-    logStdDev: number;
-    toleranceFactor: number | null;
+    logStdDev: number | null;
+    logStdDevFrom: "sample" | "assumed" | null;
+    toleranceFactor: number;
     lowerBound_cycles: number | null;
     impliedScatterFactor: number | null;
     requiredLogStdDev: number | null;

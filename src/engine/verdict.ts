@@ -32,14 +32,16 @@ export function verdictTable(r: CheckResult): { rows: VerdictRow[]; verdict: "pa
   });
   if (r.crack) {
     const c = r.crack;
-    const covers = c.inspectionInterval_cycles >= f.designLife_cycles;
+    const covers = c.inspectionInterval_cycles === null || c.inspectionInterval_cycles >= f.designLife_cycles;
     rows.push({
       id: "crack",
       title: "Crack growth (Paris law)",
       status: covers ? "pass" : "info",
-      detail: covers
-        ? `the crack needs ${fmt(c.cycles)} cycles to reach ${fmt(c.critical_mm)} mm: the interval ${fmt(c.inspectionInterval_cycles)} covers the design life`
-        : `the crack reaches its critical size of ${fmt(c.critical_mm)} mm (${c.criticalBy}) in ${fmt(c.cycles)} cycles: inspect at least every ${fmt(c.inspectionInterval_cycles)} cycles`,
+      detail: c.cycles === null
+        ? "the pressure does not cycle, so the crack does not grow"
+        : covers
+        ? `the crack needs ${fmt(c.cycles)} cycles to reach ${fmt(c.critical_mm)} mm: the interval ${fmt(c.inspectionInterval_cycles ?? 0)} covers the design life`
+        : `the crack reaches its critical size of ${fmt(c.critical_mm)} mm (${c.criticalBy}) in ${fmt(c.cycles)} cycles: inspect at least every ${fmt(c.inspectionInterval_cycles ?? 0)} cycles`,
       margin: null,
     });
     if (c.leakBeforeBreak) {
