@@ -6,13 +6,13 @@ import { crackGrowth } from "./crack.ts";
 import { InputError } from "./errors.ts";
 import { evaluate, evaluationSteps, type Context, type Evaluation } from "./evaluate.ts";
 import { evaluateEvidence } from "./evidence.ts";
-import { resolveLoad } from "./load.ts";
+import { resolveLoad, type Load } from "./load.ts";
 import { CRITERION_LABEL } from "./meanStress.ts";
 import type { CheckResult, CriterionRow } from "./result.ts";
 import { modifyingFactors, VALID_LIFE } from "./sn.ts";
 import { solveFor } from "./solvers.ts";
 import { normalQuantile } from "./special.ts";
-import { fmt, type Step } from "./step.ts";
+import { fmt, step, type Step } from "./step.ts";
 import { verdictTable } from "./verdict.ts";
 import { ENGINE_VERSION } from "./version.ts";
 
@@ -123,7 +123,7 @@ export function runCheck(input: ResolvedCheck): CheckResult {
     steps.push(...s.steps);
     warnings.push(...s.warnings);
   }
-  if (input.crack) addCrack(result, input, e, steps, warnings);
+  if (input.crack) addCrack(result, input, e, load, steps, warnings);
   if (input.evidence) {
     const ev = evaluateEvidence(input.evidence, input.fatigue.designLife_cycles, input.fatigue.scatterFactor);
     result.evidence = {
@@ -147,9 +147,11 @@ export function runCheck(input: ResolvedCheck): CheckResult {
   return result;
 }
 
-function addCrack(result: CheckResult, input: ResolvedCheck, e: Evaluation, steps: Step[], warnings: string[]): void {
+function addCrack(result: CheckResult, input: ResolvedCheck, e: Evaluation, load: Load, steps: Step[], warnings: string[]): void {
   const c = input.crack!;
   const m = input.material;
+  const spectrum = load.isSpectrum ? equivalentRange(load, e, m.parisM!) : null;
+  if (spectrum) steps.push(spectrum.step);
   const holeRadius = c.holeRadius_mm ?? (input.cutout.kind === "circular-hole" ? input.cutout.radius_mm : undefined);
   const g = crackGrowth({
     geometry: c.geometry,
@@ -162,7 +164,7 @@ function addCrack(result: CheckResult, input: ResolvedCheck, e: Evaluation, step
     shellRadius_mm: e.radii.mean_mm,
     thickness_mm: e.thickness_mm,
     hoopMax_MPa: e.hoopMax,
-    hoopMin_MPa: e.hoopMin,
+    hoopMin_MPa: spectrum ? e.hoopMax - spectrum.range_MPa : e.hoopMin,
     yield_MPa: m.yield_MPa,
     parisC: m.parisC!,
     parisM: m.parisM!,
@@ -180,8 +182,33 @@ function addCrack(result: CheckResult, input: ResolvedCheck, e: Evaluation, step
     curve: g.curve,
     leakBeforeBreak: g.leakBeforeBreak ?? null,
   };
+  if (spectrum) {
+    result.crack.passes = g.cycles === null ? null : g.cycles / spectrum.cyclesPerPass;
+    result.crack.inspectionInterval_passes = g.inspectionInterval_cycles === null ? null : g.inspectionInterval_cycles / spectrum.cyclesPerPass;
+    if (c.walkerGamma !== undefined) warnings.push("with a spectrum the crack grows under the damage-equivalent range from the peak down; the R-ratio effect is applied to that one equivalent cycle only");
+  }
   steps.push(...g.steps);
   warnings.push(...g.warnings);
+}
+
+/**
+ * Spectrum crack growth without load-interaction: the Paris-law damage-equivalent range
+ * Δσ_eq = (Σ nᵢ·Δσᵢ^m / Σ nᵢ)^(1/m) grows the crack as the spectrum does cycle for cycle when Y varies
+ * slowly (no retardation; Schijve, Fatigue of Structures and Materials, §11 — from memory).
+ */
+function equivalentRange(load: Load, e: Evaluation, m: number): { range_MPa: number; cyclesPerPass: number; step: Step } {
+  let sum = 0;
+  let n = 0;
+  for (const c of load.cycles) {
+    sum += c.count * (e.unit.hoop * c.range) ** m;
+    n += c.count;
+  }
+  const range_MPa = (sum / n) ** (1 / m);
+  return {
+    range_MPa,
+    cyclesPerPass: n,
+    step: step("crack-equivalent-range", "Damage-equivalent nominal hoop range of the spectrum", "Δσ_eq = (Σ nᵢ·Δσᵢ^m / Σ nᵢ)^(1/m)", `Δσ_eq = (Σ over ${load.cycles.length} cycle groups / ${fmt(n)})^(1/${fmt(m)})`, range_MPa, "MPa", "Paris law without load interaction; Schijve, Fatigue of Structures and Materials (from memory)"),
+  };
 }
 
 /** Life under each criterion at the same thickness, so the user sees how much the choice matters. */

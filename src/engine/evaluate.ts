@@ -7,6 +7,7 @@ import { chooseTheory, membraneSteps, radii, unitStresses, vonMises, THIN_WALL_L
 import { notchFactor, type NotchFactor } from "./notch.ts";
 import { basquinLife, lifeStep, type Curve } from "./sn.ts";
 import { fmt, step, type Step } from "./step.ts";
+import { minerDamage } from "./miner.ts";
 import { weldedLife } from "./welded.ts";
 
 /**
@@ -214,8 +215,13 @@ export function evaluationSteps(ctx: Context, e: Evaluation, criterion: MeanStre
     if (!load.isSpectrum && g.sigmaAr !== null && g.status !== "no-damage") steps.push(lifeStep(g.sigmaAr, ctx.curve, g.life));
   }
   if (load.isSpectrum) {
-    steps.push(step("miner", "Palmgren–Miner damage of one pass", "D = Σ nᵢ/Nᵢ", `D = Σ over ${load.cycles.length} cycle groups`, e.damagePerPass, "per pass", "Palmgren (1924), Miner (1945); Dowling, §9.6"));
-    steps.push(step("passes", "Passes to failure", "N_pass = 1/D", e.damagePerPass > 0 ? `N_pass = 1/${fmt(e.damagePerPass)}` : "D = 0 ⇒ unlimited", e.life, "passes", "Palmgren–Miner rule"));
+    if (e.life === 0) {
+      steps.push(step("miner-damage", "Fatigue damage per pass through the load history", "D = Σ nᵢ/Nᵢ", "a cycle has no answer under the criterion ⇒ no life", null, "—", "Palmgren–Miner rule"));
+    } else {
+      const k = e.notch.kf * e.unit.hoop * e.scale;
+      const lifeOf = (range: number, mean: number) => cycleOutcome(ctx, criterion, (k * range) / 2, k * mean, true).life;
+      steps.push(...minerDamage(load.cycles, lifeOf).steps);
+    }
   } else if (input.fatigue.curve === "welded") {
     steps.push(step("life", "Life from the detail-category curve", "N = 2×10⁶·(Δσ_C/(γMf·Δσ))³ above Δσ_D", `Δσ = ${fmt(2 * g.amplitude)} MPa, Δσ_C = ${fmt(input.fatigue.detailCategory_MPa ?? 0)} MPa`, e.life, "cycles", "EN 1993-1-9 §7, Figure 7.1"));
   }

@@ -88,6 +88,9 @@ export interface CheckResult {
     /** null when the pressure does not cycle (no growth). */
     cycles: number | null;
     inspectionInterval_cycles: number | null;
+    /** With a history or blocks: the same in passes of the spectrum. */
+    passes?: number | null;
+    inspectionInterval_passes?: number | null;
     curve: { a_mm: number; n_cycles: number }[];
     leakBeforeBreak: { leakBeforeBreak: boolean; throughWallHalfLength_mm: number; criticalHalfLength_mm: number } | null;
   };

@@ -23,13 +23,14 @@ export function fmt(x: number, digits = 4): string {
   const ax = Math.abs(x);
   if (ax >= 1e6 || ax < 1e-3) {
     const [m, e] = x.toExponential(digits - 1).split("e");
-    return `${trimZeros(m)}×10^${Number(e)}`;
+    return `${trimZeros(m).replace(/^-/, "−")}×10^${String(Number(e)).replace("-", "−")}`;
   }
-  return trimZeros(x.toPrecision(digits)).replace(/^-/, "−");
+  // Number(...) drops the exponent form toPrecision uses for 60000 ("6.000e+4") and trailing zeros.
+  return String(Number(x.toPrecision(digits))).replace(/^-/, "−");
 }
 
 function trimZeros(s: string): string {
-  return s.includes(".") && !s.includes("e") ? s.replace(/\.?0+$/, "") : s;
+  return s.includes(".") ? s.replace(/\.?0+$/, "") : s;
 }
 
 /** Build a step; keeps call sites short. */

@@ -32,7 +32,10 @@ export function verdictTable(r: CheckResult): { rows: VerdictRow[]; verdict: "pa
   });
   if (r.crack) {
     const c = r.crack;
-    const covers = c.inspectionInterval_cycles === null || c.inspectionInterval_cycles >= f.designLife_cycles;
+    // With a spectrum the design life counts passes, so the interval is compared in passes.
+    const interval = c.inspectionInterval_passes !== undefined ? c.inspectionInterval_passes : c.inspectionInterval_cycles;
+    const within = c.inspectionInterval_passes !== undefined ? `${fmt(c.inspectionInterval_passes ?? 0)} passes` : `${fmt(c.inspectionInterval_cycles ?? 0)} cycles`;
+    const covers = interval === null || interval >= f.designLife_cycles;
     rows.push({
       id: "crack",
       title: "Crack growth (Paris law)",
@@ -40,8 +43,8 @@ export function verdictTable(r: CheckResult): { rows: VerdictRow[]; verdict: "pa
       detail: c.cycles === null
         ? "the pressure does not cycle, so the crack does not grow"
         : covers
-        ? `the crack needs ${fmt(c.cycles)} cycles to reach ${fmt(c.critical_mm)} mm: the interval ${fmt(c.inspectionInterval_cycles ?? 0)} covers the design life`
-        : `the crack reaches its critical size of ${fmt(c.critical_mm)} mm (${c.criticalBy}) in ${fmt(c.cycles)} cycles: inspect at least every ${fmt(c.inspectionInterval_cycles ?? 0)} cycles`,
+        ? `the crack needs ${fmt(c.cycles)} cycles to reach ${fmt(c.critical_mm)} mm: the interval of ${within} covers the design life`
+        : `the crack reaches its critical size of ${fmt(c.critical_mm)} mm (${c.criticalBy}) in ${fmt(c.cycles)} cycles: inspect at least every ${within}`,
       margin: null,
     });
     if (c.leakBeforeBreak) {
