@@ -153,7 +153,7 @@ function addCrack(result: CheckResult, input: ResolvedCheck, e: Evaluation, load
   const spectrum = load.isSpectrum ? equivalentRange(load, e, m.parisM!) : null;
   if (spectrum) steps.push(spectrum.step);
   const holeRadius = c.holeRadius_mm ?? (input.cutout.kind === "circular-hole" ? input.cutout.radius_mm : undefined);
-  const g = crackGrowth({
+  const g = withPressurePath(input, () => crackGrowth({
     geometry: c.geometry,
     initial_mm: c.initial_mm,
     width_mm: c.width_mm,
@@ -171,7 +171,7 @@ function addCrack(result: CheckResult, input: ResolvedCheck, e: Evaluation, load
     toughness_MPaSqrtM: m.toughness_MPaSqrtM!,
     walkerGamma: c.walkerGamma,
     inspectionFactor: c.inspectionFactor,
-  });
+  }));
   result.crack = {
     geometry: c.geometry,
     initial_mm: c.initial_mm,
@@ -189,6 +189,16 @@ function addCrack(result: CheckResult, input: ResolvedCheck, e: Evaluation, load
   }
   steps.push(...g.steps);
   warnings.push(...g.warnings);
+}
+
+/** Pressure given by altitude, history or blocks has no max_MPa/min_MPa field: point at the pressure as a whole. */
+function withPressurePath<T>(input: ResolvedCheck, fn: () => T): T {
+  try {
+    return fn();
+  } catch (err) {
+    if (err instanceof InputError && err.path.startsWith("pressure.") && input.pressure.max_MPa === undefined) throw new InputError("pressure", err.message);
+    throw err;
+  }
 }
 
 /**

@@ -22,7 +22,6 @@
 import {
   accurateLimit_mm,
   bulgingHalfLength_mm,
-  crackedWidth_mm,
   describeFactor,
   foliasFactor,
   geometryFactor,
@@ -160,7 +159,7 @@ function validate(o: CrackInput): void {
     throw new InputError("crack.inspectionFactor", "The inspection factor must be 1 or more, e.g. 2.");
   }
   if (o.walkerGamma !== undefined && !(o.walkerGamma >= 0 && o.walkerGamma <= 1)) {
-    throw new InputError("fatigue.walkerGamma", "Walker's exponent γ must lie between 0 and 1.");
+    throw new InputError("crack.walkerGamma", "Walker's exponent γ must lie between 0 and 1.");
   }
   if (!(Number.isFinite(o.hoopMax_MPa) && o.hoopMax_MPa > 0)) {
     throw new InputError(

@@ -2,7 +2,7 @@ import type { MeanStressCriterion } from "../schema/check.ts";
 import type { ResolvedCheck } from "../schema/resolve.ts";
 import { concentration, type Concentration } from "./concentration.ts";
 import type { Load } from "./load.ts";
-import { CRITERION_LABEL, CRITERION_SOURCE, equivalentAmplitude, type Strengths } from "./meanStress.ts";
+import { CRITERION_LABEL, CRITERION_SOURCE, criterionWorking, equivalentAmplitude, type Strengths } from "./meanStress.ts";
 import { chooseTheory, membraneSteps, radii, unitStresses, vonMises, THIN_WALL_LIMIT, type Radii, type Theory, type UnitStresses } from "./membrane.ts";
 import { notchFactor, type NotchFactor } from "./notch.ts";
 import { basquinLife, lifeStep, type Curve } from "./sn.ts";
@@ -29,8 +29,6 @@ export interface CycleOutcome {
   life: number | null;
   status: "ok" | "no-answer" | "no-damage" | "unlimited";
   reason?: string;
-  equation: string;
-  substituted: string;
 }
 
 export interface Evaluation {
@@ -155,21 +153,13 @@ function cycleOutcome(ctx: Context, criterion: MeanStressCriterion, amplitude: n
   }
   if (input.fatigue.curve === "welded") {
     const w = weldedLife(2 * amplitude, input.fatigue.detailCategory_MPa as number, { variableAmplitude: spectrum, gammaMf: input.fatigue.gammaMf });
-    return {
-      amplitude,
-      mean: m,
-      sigmaAr: amplitude,
-      life: w.life_cycles,
-      status: w.life_cycles === null ? "unlimited" : "ok",
-      equation: "Δσ = 2σa (no mean-stress correction at welds)",
-      substituted: `Δσ = 2 × ${fmt(amplitude)}`,
-    };
+    return { amplitude, mean: m, sigmaAr: amplitude, life: w.life_cycles, status: w.life_cycles === null ? "unlimited" : "ok" };
   }
   const eq = equivalentAmplitude(criterion, amplitude, m, strengths);
-  if (eq.sigmaAr === null) return { amplitude, mean: m, sigmaAr: null, life: 0, status: "no-answer", reason: eq.reason, equation: eq.equation, substituted: eq.substituted };
-  if (eq.noDamage) return { amplitude, mean: m, sigmaAr: 0, life: null, status: "no-damage", reason: eq.reason, equation: eq.equation, substituted: eq.substituted };
+  if (eq.sigmaAr === null) return { amplitude, mean: m, sigmaAr: null, life: 0, status: "no-answer", reason: eq.reason };
+  if (eq.noDamage) return { amplitude, mean: m, sigmaAr: 0, life: null, status: "no-damage", reason: eq.reason };
   const life = basquinLife(eq.sigmaAr, curve);
-  return { amplitude, mean: m, sigmaAr: eq.sigmaAr, life, status: life === null ? "unlimited" : "ok", equation: eq.equation, substituted: eq.substituted };
+  return { amplitude, mean: m, sigmaAr: eq.sigmaAr, life, status: life === null ? "unlimited" : "ok" };
 }
 
 /** The worked steps of one evaluation, in the order a checker redoes them. */
@@ -209,9 +199,10 @@ export function evaluationSteps(ctx: Context, e: Evaluation, criterion: MeanStre
   steps.push(step("amplitude", `Local stress amplitude${label}`, "σa = (σ_max − σ_min)/2", `σa = (${fmt(g.mean + g.amplitude)} − ${fmt(g.mean - g.amplitude)})/2`, g.amplitude, "MPa", "definition (Dowling, §9.2)"));
   steps.push(step("mean", `Local mean stress${label}`, "σm = (σ_max + σ_min)/2", `σm = (${fmt(g.mean + g.amplitude)} + ${fmt(g.mean - g.amplitude)})/2`, g.mean, "MPa", input.fatigue.localYield === "shakedown" && e.localYield ? "shakedown: σm = Sy − σa (Dowling §10.7, from memory)" : "definition (Dowling, §9.2)"));
   if (input.fatigue.curve === "welded") {
-    steps.push(step("weld-range", `Stress range at the weld detail${label}`, g.equation, g.substituted, 2 * g.amplitude, "MPa", "EN 1993-1-9 §7.1: stress range, no mean-stress correction"));
+    steps.push(step("weld-range", `Stress range at the weld detail${label}`, "Δσ = 2σa (no mean-stress correction at welds)", `Δσ = 2 × ${fmt(g.amplitude)}`, 2 * g.amplitude, "MPa", "EN 1993-1-9 §7.1: stress range, no mean-stress correction"));
   } else {
-    steps.push(step("sigma-ar", `Equivalent fully reversed amplitude (${CRITERION_LABEL[criterion]})${label}`, g.equation, g.substituted, g.sigmaAr, "MPa", CRITERION_SOURCE[criterion]));
+    const w = criterionWorking(criterion, g.amplitude, g.mean, ctx.strengths);
+    steps.push(step("sigma-ar", `Equivalent fully reversed amplitude (${CRITERION_LABEL[criterion]})${label}`, w.equation, w.substituted, g.sigmaAr, "MPa", CRITERION_SOURCE[criterion]));
     if (!load.isSpectrum && g.sigmaAr !== null && g.status !== "no-damage") steps.push(lifeStep(g.sigmaAr, ctx.curve, g.life));
   }
   if (load.isSpectrum) {

@@ -1,6 +1,6 @@
 import type { ResolvedCheck } from "../schema/resolve.ts";
 import { cabinDifferential } from "./atmosphere.ts";
-import { countCycles } from "./rainflow.ts";
+import { countHistory } from "./rainflowMatrix.ts";
 import { fmt, step, type Step } from "./step.ts";
 
 /** One pressure cycle (MPa) with how many times it occurs in one pass of the loading. */
@@ -24,22 +24,18 @@ export interface Load {
 /** The pressure loading in MPa, counted into cycles once so solvers can rescale it without recounting. */
 export function resolveLoad(p: ResolvedCheck["pressure"]): Load {
   if (p.history_MPa) {
-    const cycles = countCycles(p.history_MPa);
-    let max = -Infinity;
-    let min = Infinity;
-    for (const x of p.history_MPa) {
-      if (x > max) max = x;
-      if (x < min) min = x;
-    }
+    const counted = countHistory(p.history_MPa);
+    const cycles = counted.cycles;
     const total = cycles.reduce((s, c) => s + c.count, 0);
+    const binned = counted.binWidth > 0 ? `, gathered in bins of ${fmt(counted.binWidth)} MPa (range and mean rounded up)` : "";
     return {
       source: "history",
-      max_MPa: max,
-      min_MPa: min,
+      max_MPa: counted.max,
+      min_MPa: counted.min,
       cycles,
       isSpectrum: true,
       historyPoints: p.history_MPa.length,
-      steps: [step("rainflow", "Rainflow count of the pressure history", "cycles = rainflow(p(t))", `${p.history_MPa.length} points → ${cycles.length} distinct cycles, ${fmt(total)} cycles in all`, total, "cycles", "ASTM E1049-85, §5.4.4 (rainflow counting)")],
+      steps: [step("rainflow", "Rainflow count of the pressure history", "cycles = rainflow(p(t))", `${p.history_MPa.length} points → ${cycles.length} distinct cycles, ${fmt(total)} cycles in all${binned}`, total, "cycles", "ASTM E1049-85, §5.4.4 (rainflow counting)")],
     };
   }
   if (p.blocks) {

@@ -21,8 +21,6 @@ export interface Equivalent {
   sigmaAr: number | null;
   /** Zero damage: no tension in the cycle (SWT, Walker). */
   noDamage: boolean;
-  equation: string;
-  substituted: string;
   reason?: string;
 }
 
@@ -46,47 +44,66 @@ export const CRITERION_SOURCE: Record<MeanStressCriterion, string> = {
   walker: "Dowling, Mechanical Behavior of Materials, §10.6 (Walker 1970)",
 };
 
+/** The equivalent amplitude alone: numbers only, as solvers call it for every counted cycle. */
 export function equivalentAmplitude(c: MeanStressCriterion, amplitude: number, mean: number, s: Strengths): Equivalent {
   const a = amplitude;
   const m = mean;
   const max = m + a;
-  const A = fmt(a);
-  const M = fmt(m);
-  const divide = (limit: number, limitName: string, form: (x: number) => number, eq: string, sub: string): Equivalent => {
-    if (m <= 0) return { sigmaAr: a, noDamage: false, equation: "σar = σa (compressive mean: no credit)", substituted: `σar = ${A}` };
-    const d = form(m / limit);
-    if (!(d > 0))
-      return { sigmaAr: null, noDamage: false, equation: eq, substituted: sub, reason: `the mean stress ${M} MPa reaches ${limitName} (${fmt(limit)} MPa), beyond which ${CRITERION_LABEL[c]} has no answer` };
-    return { sigmaAr: a / d, noDamage: false, equation: eq, substituted: sub };
+  const noAnswer = (limit: number, limitName: string): Equivalent => ({
+    sigmaAr: null,
+    noDamage: false,
+    reason: `the mean stress ${fmt(m)} MPa reaches ${limitName} (${fmt(limit)} MPa), beyond which ${CRITERION_LABEL[c]} has no answer`,
+  });
+  const divide = (limit: number, limitName: string, d: (x: number) => number): Equivalent => {
+    if (m <= 0) return { sigmaAr: a, noDamage: false };
+    const den = d(m / limit);
+    return den > 0 ? { sigmaAr: a / den, noDamage: false } : noAnswer(limit, limitName);
   };
+  const noTension = (): Equivalent => ({ sigmaAr: 0, noDamage: true, reason: `the cycle never reaches tension, so ${CRITERION_LABEL[c]} predicts no fatigue damage` });
   switch (c) {
     case "goodman":
-      return divide(s.ultimate_MPa, "the ultimate strength", (x) => 1 - x, "σar = σa/(1 − σm/Su)", `σar = ${A}/(1 − ${M}/${fmt(s.ultimate_MPa)})`);
+      return divide(s.ultimate_MPa, "the ultimate strength", (x) => 1 - x);
     case "gerber":
-      return divide(s.ultimate_MPa, "the ultimate strength", (x) => 1 - x * x, "σar = σa/(1 − (σm/Su)²)", `σar = ${A}/(1 − (${M}/${fmt(s.ultimate_MPa)})²)`);
+      return divide(s.ultimate_MPa, "the ultimate strength", (x) => 1 - x * x);
     case "soderberg":
-      return divide(s.yield_MPa, "the yield strength", (x) => 1 - x, "σar = σa/(1 − σm/Sy)", `σar = ${A}/(1 − ${M}/${fmt(s.yield_MPa)})`);
+      return divide(s.yield_MPa, "the yield strength", (x) => 1 - x);
     case "asme-elliptic":
-      return divide(s.yield_MPa, "the yield strength", (x) => Math.sqrt(Math.max(0, 1 - x * x)), "σar = σa/√(1 − (σm/Sy)²)", `σar = ${A}/√(1 − (${M}/${fmt(s.yield_MPa)})²)`);
+      return divide(s.yield_MPa, "the yield strength", (x) => (x < 1 ? Math.sqrt(1 - x * x) : 0));
     case "morrow": {
       const f = s.fatigueStrengthCoefficient_MPa;
-      const eq = "σar = σa/(1 − σm/σ'f)";
-      const sub = `σar = ${A}/(1 − ${M}/${fmt(f)})`;
-      if (m >= f) return { sigmaAr: null, noDamage: false, equation: eq, substituted: sub, reason: `the mean stress ${M} MPa reaches σ'f (${fmt(f)} MPa), beyond which Morrow has no answer` };
-      return { sigmaAr: a / (1 - m / f), noDamage: false, equation: eq, substituted: sub };
+      return m >= f ? noAnswer(f, "σ'f") : { sigmaAr: a / (1 - m / f), noDamage: false };
     }
-    case "swt": {
-      const eq = "σar = √(σmax·σa)";
-      const sub = `σar = √(${fmt(max)} × ${A})`;
-      if (max <= 0) return { sigmaAr: 0, noDamage: true, equation: eq, substituted: sub, reason: "the cycle never reaches tension, so SWT predicts no fatigue damage" };
-      return { sigmaAr: Math.sqrt(max * a), noDamage: false, equation: eq, substituted: sub };
-    }
-    case "walker": {
-      const g = s.walkerGamma;
-      const eq = "σar = σmax^(1−γ)·σa^γ";
-      const sub = `σar = ${fmt(max)}^(1 − ${fmt(g)}) × ${A}^${fmt(g)}`;
-      if (max <= 0) return { sigmaAr: 0, noDamage: true, equation: eq, substituted: sub, reason: "the cycle never reaches tension, so Walker predicts no fatigue damage" };
-      return { sigmaAr: max ** (1 - g) * a ** g, noDamage: false, equation: eq, substituted: sub };
-    }
+    case "swt":
+      return max <= 0 ? noTension() : { sigmaAr: Math.sqrt(max * a), noDamage: false };
+    case "walker":
+      return max <= 0 ? noTension() : { sigmaAr: max ** (1 - s.walkerGamma) * a ** s.walkerGamma, noDamage: false };
+  }
+}
+
+/** The criterion's equation in symbols and with the numbers put in, for the worked step. */
+export function criterionWorking(c: MeanStressCriterion, amplitude: number, mean: number, s: Strengths): { equation: string; substituted: string } {
+  const A = fmt(amplitude);
+  const M = fmt(mean);
+  const max = fmt(mean + amplitude);
+  if (mean <= 0 && (c === "goodman" || c === "gerber" || c === "soderberg" || c === "asme-elliptic")) {
+    return { equation: "σar = σa (compressive mean: no credit)", substituted: `σar = ${A}` };
+  }
+  const su = fmt(s.ultimate_MPa);
+  const sy = fmt(s.yield_MPa);
+  switch (c) {
+    case "goodman":
+      return { equation: "σar = σa/(1 − σm/Su)", substituted: `σar = ${A}/(1 − ${M}/${su})` };
+    case "gerber":
+      return { equation: "σar = σa/(1 − (σm/Su)²)", substituted: `σar = ${A}/(1 − (${M}/${su})²)` };
+    case "soderberg":
+      return { equation: "σar = σa/(1 − σm/Sy)", substituted: `σar = ${A}/(1 − ${M}/${sy})` };
+    case "asme-elliptic":
+      return { equation: "σar = σa/√(1 − (σm/Sy)²)", substituted: `σar = ${A}/√(1 − (${M}/${sy})²)` };
+    case "morrow":
+      return { equation: "σar = σa/(1 − σm/σ'f)", substituted: `σar = ${A}/(1 − ${M}/${fmt(s.fatigueStrengthCoefficient_MPa)})` };
+    case "swt":
+      return { equation: "σar = √(σmax·σa)", substituted: `σar = √(${max} × ${A})` };
+    case "walker":
+      return { equation: "σar = σmax^(1−γ)·σa^γ", substituted: `σar = ${max}^(1 − ${fmt(s.walkerGamma)}) × ${A}^${fmt(s.walkerGamma)}` };
   }
 }

@@ -64,13 +64,13 @@ export function weldedLimits(category_MPa: number): { fatigueLimit_MPa: number; 
 export function weldedLife(range_MPa: number, category_MPa: number, options: WeldedOptions): WeldedResult {
   const gammaMf = options.gammaMf ?? 1;
   if (!(Number.isFinite(range_MPa) && range_MPa >= 0)) {
-    throw new InputError("weld.range_MPa", "The stress range at the weld must be zero or positive.");
+    throw new InputError("pressure", "The stress range at the weld must be zero or positive.");
   }
   if (!(Number.isFinite(category_MPa) && category_MPa > 0)) {
-    throw new InputError("weld.detailCategory_MPa", "The detail category must be a positive stress range in MPa, e.g. 71.");
+    throw new InputError("fatigue.detailCategory_MPa", "The detail category must be a positive stress range in MPa, e.g. 71.");
   }
   if (!(Number.isFinite(gammaMf) && gammaMf >= 1)) {
-    throw new InputError("weld.gammaMf", "The partial factor γ_Mf must be 1.0 or more (EN 1993-1-9 Table 3.1 gives 1.0 to 1.35).");
+    throw new InputError("fatigue.gammaMf", "The partial factor γ_Mf must be 1.0 or more (EN 1993-1-9 Table 3.1 gives 1.0 to 1.35).");
   }
   const warnings: string[] = [];
   if (!(DETAIL_CATEGORIES_MPa as readonly number[]).includes(category_MPa)) {

@@ -205,7 +205,7 @@ export const crackSchema = z.strictObject({
   initial_mm: positive("the initial crack size", 1e4),
   width_mm: positive("the panel width", 1e5).optional(),
   holeRadius_mm: positive("the hole radius", 1e4).optional(),
-  cracksAtHole: z.union([z.literal(1), z.literal(2)], { error: "cracksAtHole must be 1 or 2" }).default(1),
+  cracksAtHole: z.union([z.literal(1), z.literal(2)], { error: "cracksAtHole must be 1 or 2" }).default(2).describe("2 (default) is conservative; the one-crack factor is interpolated"),
   inspectionFactor: num("the inspection factor").min(1, { error: "the inspection factor must be at least 1" }).max(100, { error: "the inspection factor must be at most 100" }).default(2),
   bulging: z.boolean({ error: "bulging must be true or false" }).default(false),
   walkerGamma: num("the crack-growth Walker exponent").gt(0, { error: "the crack-growth Walker exponent must be above 0" }).max(1, { error: "the crack-growth Walker exponent must be at most 1" }).optional(),

@@ -18,7 +18,7 @@ describe("check format parsing", () => {
     if (!r.ok) return;
     expect(r.value.fatigue.scatterFactor).toBe(3);
     expect(r.value.static).toBeUndefined();
-    expect(r.value.crack?.cracksAtHole).toBe(1);
+    expect(r.value.crack?.cracksAtHole).toBe(2);
   });
 
   it("names the field and says what is wrong: wrong type, missing, out of range", () => {
@@ -93,7 +93,7 @@ describe("check format parsing", () => {
     const reordered = JSON.parse(JSON.stringify({ fatigue: example.fatigue, ...example }));
     const withDefaults = clone();
     withDefaults.cutout = { kind: "circular-hole" };
-    withDefaults.crack.cracksAtHole = 1;
+    withDefaults.crack.cracksAtHole = 2;
     const b = parseCheck(reordered);
     const c = parseCheck(withDefaults);
     if (!a.ok || !b.ok || !c.ok) throw new Error("parse failed");

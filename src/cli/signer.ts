@@ -1,0 +1,113 @@
+import { defaultDbPath, openDatabase, RecordConflictError, RecordError, type Db, type ScryptCost } from "../store/index.ts";
+import { personNameField, safeParseFields, zodFieldErrors } from "../store/fields.ts";
+import { addSigner, assertNameFree } from "../store/signers.ts";
+
+/** The streams the command talks through; the real process's, or test doubles. */
+export interface SignerIo {
+  stdin: NodeJS.ReadableStream & { setRawMode?: (mode: boolean) => unknown };
+  stdout: NodeJS.WritableStream;
+  stderr: NodeJS.WritableStream;
+  /** Whether standard input is a terminal: then the passphrase is prompted for, without echo, twice. */
+  isTTY: boolean;
+}
+
+export interface SignerCommandOptions {
+  /** The database file; `HOOPWISE_DB` or the default otherwise. */
+  dbPath?: string;
+  passphraseCost?: ScryptCost;
+}
+
+const USAGE = 'usage: signer add NAME   (quote a name with spaces: signer add "Ana Reyes")\n' +
+  "The passphrase is read from standard input when it is piped, or asked for twice without echo in a terminal.\n";
+
+/** Exit codes: 0 registered; 1 the name is already registered or the database failed; 2 a usage or input mistake; 130 cancelled. */
+const EXIT = { ok: 0, refused: 1, usage: 2, cancelled: 130 } as const;
+
+/** The user pressed Ctrl-C or Ctrl-D at a prompt. */
+class Cancelled extends Error {}
+/** A passphrase that cannot be used, told in words for the terminal. */
+class InputMistake extends Error {}
+/** `signer add NAME`: register a person who may sign, with a passphrase kept only as a hash. `args` are the words after `signer add`. */
+export async function signerAddCommand(args: string[], io: SignerIo, options: SignerCommandOptions = {}): Promise<number> {
+  const fail = (code: number, message: string) => {
+    io.stderr.write(`signer add: ${message}\n`);
+    return code;
+  };
+  if (args.length !== 1) return fail(EXIT.usage, args.length === 0 ? `a name is required\n${USAGE}` : `give the name as one argument\n${USAGE}`);
+  const parsedName = safeParseFields(personNameField, args[0]);
+  if (!parsedName.success) return fail(EXIT.usage, `name ${zodFieldErrors(parsedName.error)[0].message}`);
+  const name = parsedName.data;
+
+  let db: Db;
+  try {
+    db = openDatabase(options.dbPath ?? defaultDbPath());
+  } catch (err) {
+    return fail(EXIT.refused, `cannot open the records database: ${(err as Error).message}`);
+  }
+  try {
+    // Say so before asking for a passphrase that could not be used.
+    assertNameFree(db, name);
+    const passphrase = io.isTTY ? await promptTwice(io, name) : await readPiped(io.stdin);
+    await addSigner({ db, now: () => new Date(), passphraseCost: options.passphraseCost }, { name, passphrase });
+    io.stdout.write(`registered signer "${name}"\n`);
+    return EXIT.ok;
+  } catch (err) {
+    if (err instanceof Cancelled) return fail(EXIT.cancelled, "cancelled; nothing was registered");
+    if (err instanceof RecordConflictError) return fail(EXIT.refused, err.message);
+    if (err instanceof RecordError || err instanceof InputMistake) return fail(EXIT.usage, err.message);
+    return fail(EXIT.refused, (err as Error).message);
+  } finally {
+    db.close();
+  }
+}
+
+async function promptTwice(io: SignerIo, name: string): Promise<string> {
+  const first = await promptHidden(io, `Passphrase for ${name}: `);
+  const second = await promptHidden(io, "Same passphrase again: ");
+  if (first !== second) throw new InputMistake("passphrase: the two entries differ; nothing was registered");
+  return first;
+}
+
+/** One line typed with echo off: a passphrase must not stay on the screen or in a terminal log. */
+function promptHidden(io: SignerIo, prompt: string): Promise<string> {
+  const { stdin, stderr } = io;
+  if (!stdin.setRawMode) return Promise.reject(new InputMistake("cannot turn off echo on this terminal; pipe the passphrase on standard input instead"));
+  stderr.write(prompt);
+  stdin.setRawMode(true);
+  stdin.setEncoding("utf8");
+  stdin.resume();
+  return new Promise((resolve, reject) => {
+    let typed = "";
+    const finish = (settle: () => void) => {
+      stdin.removeListener("data", onData);
+      stdin.setRawMode?.(false);
+      stdin.pause();
+      stderr.write("\n");
+      settle();
+    };
+    const onData = (chunk: string | Buffer) => {
+      const text = String(chunk);
+      // An escape sequence is a cursor or function key, not part of a passphrase.
+      if (text.startsWith("\u001b")) return;
+      for (const ch of text) {
+        if (ch === "\r" || ch === "\n") return finish(() => resolve(typed));
+        if (ch === "\u0003") return finish(() => reject(new Cancelled()));
+        if (ch === "\u0004" && typed === "") return finish(() => reject(new Cancelled()));
+        if (ch === "\u007f" || ch === "\b") typed = [...typed].slice(0, -1).join("");
+        else if (ch === "\u0015") typed = "";
+        else if (ch >= " ") typed += ch;
+      }
+    };
+    stdin.on("data", onData);
+  });
+}
+
+/** The passphrase piped in: one line, its line ending dropped. */
+async function readPiped(stdin: NodeJS.ReadableStream): Promise<string> {
+  let text = "";
+  for await (const chunk of stdin) text += String(chunk);
+  const line = text.replace(/\r?\n$/, "");
+  if (line === "") throw new InputMistake("passphrase: standard input is empty; pipe the passphrase in, or run in a terminal to be asked for it");
+  if (/[\r\n]/.test(line)) throw new InputMistake("passphrase: standard input holds more than one line; give the passphrase on a single line");
+  return line;
+}

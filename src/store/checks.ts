@@ -1,0 +1,176 @@
+import { randomUUID } from "node:crypto";
+import { z } from "zod";
+import { canonicalJson, fingerprint } from "../schema/canonical.ts";
+import type { FieldError } from "../engine/errors.ts";
+import type { Db } from "./db.ts";
+import { isoNow, validInput, type StoreContext } from "./context.ts";
+import { InvalidRecordError, RecordConflictError, RecordNotFoundError } from "./errors.ts";
+import { appendEvent } from "./events.ts";
+import { calcNumberField, personNameField, safeParseFields, titleField, zodFieldErrors } from "./fields.ts";
+
+export interface NewCheck {
+  input: unknown;
+  /** Defaults to the input's own title, else "Untitled check". */
+  title?: string;
+  /** Defaults to the input's own calcNumber, else "HW-" and the first eight characters of the check's id. */
+  calcNumber?: string;
+  savedBy?: string;
+}
+
+export interface CreatedCheck {
+  id: string;
+  title: string;
+  calcNumber: string;
+  revision: 1;
+  fingerprint: string;
+}
+
+export interface NewRevision {
+  input: unknown;
+  savedBy?: string;
+}
+
+export interface SavedRevision {
+  revision: number;
+  fingerprint: string;
+  /** True when the input matched the latest revision: nothing was saved and `revision` is that latest one. */
+  unchanged: boolean;
+}
+
+// Strict, so a misspelt field ("calcNumbr") is reported rather than silently dropped.
+// The input is checked by the injected validator; here it only has to be present.
+const newCheckFields = z.strictObject({
+  input: z.unknown(),
+  title: titleField.optional(),
+  calcNumber: calcNumberField.optional(),
+  savedBy: personNameField.optional(),
+});
+const newRevisionFields = z.strictObject({ input: z.unknown(), savedBy: personNameField.optional() });
+
+/** Save a new check as revision 1. */
+export function createCheck(ctx: StoreContext, args: NewCheck): CreatedCheck {
+  const { fields, input } = validate(ctx, newCheckFields, args);
+  const id = randomUUID();
+  const title = fields.title ?? fieldOf(input, "title", titleField) ?? "Untitled check";
+  const fromInput = fields.calcNumber === undefined ? fieldOf(input, "calcNumber", calcNumberField) : undefined;
+  const calcNumber = fields.calcNumber ?? fromInput ?? `HW-${id.slice(0, 8).toUpperCase()}`;
+  const canonical = canonicalJson(input);
+  const fp = fingerprint(input, ctx.engineVersion);
+  const at = isoNow(ctx);
+
+  ctx.db
+    .transaction(() => {
+      assertCalcNumberFree(ctx.db, calcNumber, fromInput ? "input.calcNumber" : "calcNumber");
+      ctx.db.prepare("INSERT INTO checks (id, title, calc_number, created_at) VALUES (?, ?, ?, ?)").run(id, title, calcNumber, at);
+      insertRevision(ctx.db, id, { number: 1, canonical, fingerprint: fp, engineVersion: ctx.engineVersion, savedAt: at, savedBy: fields.savedBy ?? null });
+      appendEvent(ctx.db, id, { at, kind: "saved", revision: 1, actor: fields.savedBy ?? null, detail: { fingerprint: fp } });
+    })
+    .immediate();
+  return { id, title, calcNumber, revision: 1, fingerprint: fp };
+}
+
+/**
+ * Save a changed input as the check's next revision, which supersedes the one
+ * before. An input identical to the latest revision's saves nothing.
+ */
+export function addRevision(ctx: StoreContext, checkId: string, args: NewRevision): SavedRevision {
+  requireCheck(ctx.db, checkId);
+  const { fields, input } = validate(ctx, newRevisionFields, args);
+  const canonical = canonicalJson(input);
+  const fp = fingerprint(input, ctx.engineVersion);
+  const at = isoNow(ctx);
+  const savedBy = fields.savedBy ?? null;
+
+  // IMMEDIATE takes the write lock before reading the latest number, so two
+  // writers (threads or processes) can never both claim the same next number.
+  return ctx.db
+    .transaction((): SavedRevision => {
+      const latest = latestRevision(ctx.db, checkId);
+      if (latest.fingerprint === fp) return { revision: latest.number, fingerprint: fp, unchanged: true };
+      const number = latest.number + 1;
+      insertRevision(ctx.db, checkId, { number, canonical, fingerprint: fp, engineVersion: ctx.engineVersion, savedAt: at, savedBy });
+      appendEvent(ctx.db, checkId, { at, kind: "saved", revision: number, actor: savedBy, detail: { fingerprint: fp } });
+      appendEvent(ctx.db, checkId, { at, kind: "superseded", revision: latest.number, actor: savedBy, detail: { by: number } });
+      return { revision: number, fingerprint: fp, unchanged: false };
+    })
+    .immediate();
+}
+
+export interface CheckRow {
+  id: string;
+  title: string;
+  calcNumber: string;
+  createdAt: string;
+}
+
+export function requireCheck(db: Db, checkId: string): CheckRow {
+  const row = db
+    .prepare("SELECT id, title, calc_number AS calcNumber, created_at AS createdAt FROM checks WHERE id = ?")
+    .get(checkId) as CheckRow | undefined;
+  if (!row) throw new RecordNotFoundError([{ path: "id", message: `no saved check has the id "${checkId}"` }]);
+  return row;
+}
+
+export function latestRevision(db: Db, checkId: string): { number: number; fingerprint: string } {
+  const row = db
+    .prepare("SELECT number, fingerprint FROM revisions WHERE check_id = ? ORDER BY number DESC LIMIT 1")
+    .get(checkId) as { number: number; fingerprint: string } | undefined;
+  // A check is created together with its revision 1 and revisions cannot be deleted.
+  if (!row) throw new Error(`check ${checkId} has no revisions: the database is inconsistent`);
+  return row;
+}
+
+export interface RevisionRow {
+  number: number;
+  canonical: string;
+  fingerprint: string;
+  engineVersion: string;
+  savedAt: string;
+  savedBy: string | null;
+}
+
+export function insertRevision(db: Db, checkId: string, r: RevisionRow): void {
+  db.prepare(
+    "INSERT INTO revisions (check_id, number, input_json, fingerprint, engine_version, saved_at, saved_by) VALUES (?, ?, ?, ?, ?, ?, ?)",
+  ).run(checkId, r.number, r.canonical, r.fingerprint, r.engineVersion, r.savedAt, r.savedBy);
+}
+
+/** Calculation numbers are unique: a sheet's number must name one check. `path` is where the number came from. */
+export function assertCalcNumberFree(db: Db, calcNumber: string, path: string): void {
+  const other = db.prepare("SELECT id FROM checks WHERE calc_number = ?").get(calcNumber) as { id: string } | undefined;
+  if (other) {
+    throw new RecordConflictError([
+      {
+        path,
+        message: `calculation number "${calcNumber}" is already used by check ${other.id}; save a new revision of that check, or give another number`,
+      },
+    ]);
+  }
+}
+
+/**
+ * Check the request's fields and its input together, so every problem is
+ * reported at once. Requests arrive from JSON bodies, so nothing about their
+ * shape is taken on trust from the TypeScript type.
+ */
+function validate<S extends z.ZodType>(ctx: StoreContext, schema: S, args: unknown): { fields: z.output<S>; input: unknown } {
+  const errors: FieldError[] = [];
+  const parsed = safeParseFields(schema, args);
+  if (!parsed.success) errors.push(...zodFieldErrors(parsed.error));
+  if (args === null || typeof args !== "object" || Array.isArray(args)) throw new InvalidRecordError(errors);
+  let value: unknown;
+  try {
+    value = validInput(ctx, (args as { input?: unknown }).input, "input");
+  } catch (err) {
+    if (!(err instanceof InvalidRecordError)) throw err;
+    errors.push(...err.errors);
+  }
+  if (errors.length || !parsed.success) throw new InvalidRecordError(errors);
+  return { fields: parsed.data, input: value };
+}
+
+/** A record field taken from the check document when it holds a usable one. */
+function fieldOf(input: unknown, key: string, schema: z.ZodType<string>): string | undefined {
+  const r = schema.safeParse((input as Record<string, unknown> | null)?.[key]);
+  return r.success ? r.data : undefined;
+}

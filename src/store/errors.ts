@@ -1,0 +1,33 @@
+import type { FieldError } from "../engine/errors.ts";
+
+/**
+ * Every refusal the store makes is one of these, carrying the same
+ * { path, message } entries as the rest of Hoopwise, so a face (HTTP, CLI)
+ * can answer with a clear errors document and never mistake a user's
+ * mistake for a fault of its own.
+ */
+export abstract class RecordError extends Error {
+  constructor(readonly errors: FieldError[]) {
+    super(errors.map((e) => (e.path ? `${e.path}: ${e.message}` : e.message)).join("; "));
+    this.name = new.target.name;
+  }
+}
+
+/** The request itself is malformed or breaks a field rule (HTTP 422). */
+export class InvalidRecordError extends RecordError {}
+
+/** A check or revision that does not exist (HTTP 404). */
+export class RecordNotFoundError extends RecordError {}
+
+/** The request clashes with what is already stored: a taken name, number or id (HTTP 409). */
+export class RecordConflictError extends RecordError {}
+
+/** A sign-off the rules forbid: out of order, on a superseded revision, or the same person twice (HTTP 409). */
+export class SignOffRefusedError extends RecordError {}
+
+/** The passphrase does not match the signer's (HTTP 403). */
+export class WrongPassphraseError extends RecordError {}
+
+export function fieldError(path: string, message: string): FieldError {
+  return { path, message };
+}

@@ -1,0 +1,76 @@
+import { readFileSync } from "node:fs";
+import { performance } from "node:perf_hooks";
+import { DEMOS } from "../../src/demo/index.ts";
+import { checkDocument } from "../../src/engine/index.ts";
+import { minerDamage } from "../../src/engine/miner.ts";
+import { countHistory } from "../../src/engine/rainflowMatrix.ts";
+import { basquinLife } from "../../src/engine/sn.ts";
+
+/** Median of `runs` timings of `fn`, in milliseconds, after a warm-up. */
+export function medianMs(fn: () => void, runs: number, warmup = 5): number {
+  for (let i = 0; i < warmup; i++) fn();
+  const t: number[] = [];
+  for (let i = 0; i < runs; i++) {
+    const s = performance.now();
+    fn();
+    t.push(performance.now() - s);
+  }
+  t.sort((a, b) => a - b);
+  return t[Math.floor(t.length / 2)];
+}
+
+const example = JSON.parse(readFileSync(new URL("../fixtures/format-example.json", import.meta.url), "utf8"));
+
+/** One full check (parse, engine, all seven criteria, life-vs-thickness sweep, crack, evidence). */
+export function engineBench() {
+  const full = medianMs(() => checkDocument(example), 200);
+  const demos = Object.fromEntries(DEMOS.map((d) => [d.id, medianMs(() => checkDocument(d.document), 100)]));
+  const solveDoc = { ...example, crack: undefined, evidence: undefined, solve: { for: "thickness" } };
+  const solved = checkDocument(solveDoc);
+  const evaluations = solved.ok ? solved.result.solution?.evaluations ?? NaN : NaN;
+  return { fullCheck_ms: full, demos_ms: demos, thicknessSolveEvaluations: evaluations };
+}
+
+/**
+ * Rainflow + Miner on a 10⁶-point history against one pass summing the same typed array.
+ * The engine's path: counting into the range–mean matrix, then Miner over its cells. The history is a seeded random sequence with pressure-like levels; peak memory is the growth of
+ * heap plus array buffers over the input's own bytes (run with --expose-gc for a clean baseline).
+ */
+export function rainflowBench(points = 1_000_000) {
+  const history = new Float64Array(points);
+  let seed = 12345;
+  const rand = () => ((seed = (seed * 1103515245 + 12345) & 0x7fffffff) / 0x7fffffff);
+  for (let i = 0; i < points; i++) history[i] = Math.round((0.4 + 0.6 * rand()) * 1000) / 1000;
+  const curve = { coefficient_MPa: 900, exponent: -0.102, factor: 1 };
+  const perMPa = 150;
+  let checksum = 0;
+  const baseline = medianMs(() => {
+    let s = 0;
+    for (let i = 0; i < history.length; i++) s += history[i];
+    checksum += s;
+  }, 9, 2);
+  const gc = (globalThis as { gc?: () => void }).gc;
+  gc?.();
+  const before = process.memoryUsage();
+  let peak = 0;
+  const work = medianMs(() => {
+    const { cycles } = countHistory(history);
+    const d = minerDamage(cycles, (range, mean) => {
+      const a = (perMPa * range) / 2;
+      const m = perMPa * mean;
+      return basquinLife(a / (1 - m / 470), curve);
+    });
+    const now = process.memoryUsage();
+    peak = Math.max(peak, now.heapUsed + now.arrayBuffers - before.heapUsed - before.arrayBuffers);
+    checksum += d.damagePerPass;
+  }, 5, 1);
+  return {
+    points,
+    rainflowMiner_ms: work,
+    onePassSum_ms: baseline,
+    ratio: work / baseline,
+    peakExtraMemory_overInput: peak / history.byteLength,
+    measuredWithGc: Boolean(gc),
+    checksum,
+  };
+}

@@ -1,0 +1,41 @@
+import os from "node:os";
+import { apiBench } from "./api.ts";
+import { engineBench, rainflowBench } from "./engine.ts";
+
+/**
+ * `npm run bench`: every figure as a ratio against a baseline measured in the same run on the
+ * same machine, since absolute times drift. Prints a Markdown table for the README.
+ */
+const rows: [string, string, string][] = [];
+const add = (what: string, value: string, goal: string) => rows.push([what, value, goal]);
+const f = (x: number, d = 2) => x.toFixed(d);
+
+const e = engineBench();
+add("One full check (format example: 7 criteria, sweep, crack, evidence)", `${f(e.fullCheck_ms, 3)} ms median`, "—");
+for (const [id, ms] of Object.entries(e.demos_ms)) add(`One full check, ${id} demo`, `${f(ms, 3)} ms median`, "—");
+add("Thickness solve: engine evaluations per solve (rel. tol. 1e-4)", String(e.thicknessSolveEvaluations), "≤ 60");
+
+const r = rainflowBench();
+add(`Rainflow + Miner on ${r.points.toLocaleString("en")} points / one summing pass`, `${f(r.ratio, 1)} (${f(r.rainflowMiner_ms, 0)} ms / ${f(r.onePassSum_ms, 1)} ms)`, "≤ 8");
+add("Rainflow + Miner peak extra memory / input bytes", f(r.peakExtraMemory_overInput, 2) + (r.measuredWithGc ? "" : " (no --expose-gc)"), "≤ 3");
+
+const a = await apiBench();
+add("JSON API full check / bare /healthz throughput (autocannon, 10 connections)", `${f(a.ratio, 3)} (${f(a.check_rps, 0)} / ${f(a.healthz_rps, 0)} req/s)`, "≥ 0.6");
+
+for (const extra of ["./page.ts", "./sheet.ts"]) {
+  try {
+    const mod = (await import(extra)) as Record<string, () => Promise<Record<string, unknown>>>;
+    for (const [name, fn] of Object.entries(mod)) {
+      if (typeof fn !== "function" || !name.endsWith("Bench")) continue;
+      const out = await fn();
+      for (const [k, v] of Object.entries(out)) add(`${name}: ${k}`, typeof v === "number" ? f(v, 2) : String(v), "—");
+    }
+  } catch (err) {
+    add(`${extra}`, `not run: ${(err as Error).message.split("\n")[0]}`, "—");
+  }
+}
+
+console.log(`Benchmarks, ${new Date().toISOString().slice(0, 10)}, ${os.cpus().length} × ${os.cpus()[0]?.model ?? "cpu"}, Node ${process.version}\n`);
+console.log("| Measure | Result | Goal |\n|---|---|---|");
+for (const [w, v, g] of rows) console.log(`| ${w} | ${v} | ${g} |`);
+process.exit(0);
