@@ -1,6 +1,8 @@
 import { checkCommand } from "./cli/check.ts";
 import { materialsCommand, schemaCommand } from "./cli/info.ts";
 import type { Io } from "./cli/io.ts";
+import { sheetCommand, verifyCommand } from "./cli/sheet.ts";
+import { signerAddCommand } from "./cli/signer.ts";
 
 const HELP = `Hoopwise — fatigue screening of pressurized shell skins
 
@@ -8,6 +10,10 @@ Usage: npm run -s cli -- <command> [options]
 
 Commands:
   check FILE|-                 run a check; prints the result JSON (exit 0), or the errors (exit 2)
+  sheet FILE|- --out SHEET.pdf [--paper A4|Letter]
+                               print the check sheet (PDF, with the input embedded); needs Chromium
+  verify SHEET.pdf [--json]    recompute a sheet from its embedded input; exit 0 when it still matches
+  signer add NAME              register a person who signs (passphrase from standard input or a prompt)
   materials [--json]           list the material library (typical values — verify against certified data)
   schema                       print the check format as JSON Schema
   help                         this text
@@ -21,6 +27,15 @@ type Command = (args: string[], io: Io) => number | Promise<number>;
 
 const COMMANDS: Record<string, Command> = {
   check: checkCommand,
+  sheet: sheetCommand,
+  verify: verifyCommand,
+  signer: (args, io) => {
+    if (args[0] !== "add") {
+      io.stderr.write('usage: signer add NAME\n');
+      return 2;
+    }
+    return signerAddCommand(args.slice(1), { ...io, isTTY: Boolean(io.stdin.isTTY) });
+  },
   materials: materialsCommand,
   schema: schemaCommand,
 };

@@ -1,12 +1,25 @@
 import { serve } from "@hono/node-server";
+import { closeSharedPool } from "./report/browser.ts";
+import { openStore } from "./store/index.ts";
 import { createApp } from "./web/app.ts";
+import { pageRoutes } from "./web/page.tsx";
+import { recordsApi } from "./web/records.ts";
+import { revisionSheetApi } from "./web/revisionSheet.ts";
+import { sheetApi } from "./web/sheet.ts";
+import { seedDemos } from "./web/seed.ts";
 
-/** Serve the checker on HOST:PORT (127.0.0.1:8080 unless told otherwise), with a clean shutdown on SIGTERM/SIGINT. */
+/**
+ * Serve the checker on HOST:PORT (127.0.0.1:8080 unless told otherwise). SIGTERM/SIGINT stop taking
+ * connections, let requests in flight finish, then close Chromium and the database.
+ */
 const host = process.env.HOST ?? "127.0.0.1";
 const port = Number(process.env.PORT ?? 8080);
-const app = createApp();
+const store = openStore();
+const seeded = seedDemos(store);
+const app = createApp({ mounts: [sheetApi(), revisionSheetApi({ store }), recordsApi({ store }), pageRoutes()] });
 
 const server = serve({ fetch: app.fetch, hostname: host, port }, (info) => {
+  if (seeded) console.log(`Saved ${seeded} demo checks in ${process.env.HOOPWISE_DB ?? "data/hoopwise.db"}`);
   console.log(`Hoopwise is serving on http://${host === "0.0.0.0" ? "127.0.0.1" : host}:${info.port}/`);
 });
 
@@ -15,8 +28,13 @@ function shutdown(signal: string) {
   if (closing) return;
   closing = true;
   console.log(`${signal}: finishing requests in flight, then stopping`);
-  server.close(() => process.exit(0));
-  setTimeout(() => process.exit(0), 10_000).unref();
+  const force = setTimeout(() => process.exit(1), 15_000);
+  force.unref();
+  server.close(async () => {
+    await closeSharedPool().catch(() => undefined);
+    store.close();
+    process.exit(0);
+  });
 }
 process.on("SIGTERM", () => shutdown("SIGTERM"));
 process.on("SIGINT", () => shutdown("SIGINT"));

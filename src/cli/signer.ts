@@ -5,8 +5,8 @@ import { addSigner, assertNameFree } from "../store/signers.ts";
 /** The streams the command talks through; the real process's, or test doubles. */
 export interface SignerIo {
   stdin: NodeJS.ReadableStream & { setRawMode?: (mode: boolean) => unknown };
-  stdout: NodeJS.WritableStream;
-  stderr: NodeJS.WritableStream;
+  stdout: { write(s: string): unknown };
+  stderr: { write(s: string): unknown };
   /** Whether standard input is a terminal: then the passphrase is prompted for, without echo, twice. */
   isTTY: boolean;
 }
