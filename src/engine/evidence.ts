@@ -53,9 +53,18 @@ const KNOWN_SIGMA = "One-sided normal tolerance limit with known σ: lower γ-co
 
 /** One-sided lower tolerance factor with σ estimated from n results: t′_γ(n − 1, z_p√n)/√n. */
 export function toleranceFactorSample(n: number, reliability: number, confidence: number): number {
+  const key = `${n}|${reliability}|${confidence}`;
+  const known = factorCache.get(key);
+  if (known !== undefined) return known;
   const delta = normalQuantile(reliability) * Math.sqrt(n);
-  return noncentralTQuantile(confidence, n - 1, delta) / Math.sqrt(n);
+  const k = noncentralTQuantile(confidence, n - 1, delta) / Math.sqrt(n);
+  if (factorCache.size >= 256) factorCache.clear();
+  factorCache.set(key, k);
+  return k;
 }
+
+/** The non-central t quantile costs milliseconds and the same few (n, p, γ) recur as a user types: remember them. */
+const factorCache = new Map<string, number>();
 
 /** One-sided lower tolerance factor with σ known: z_p + z_γ/√n. */
 export function toleranceFactorKnownSigma(n: number, reliability: number, confidence: number): number {

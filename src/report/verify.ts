@@ -1,0 +1,157 @@
+/**
+ * Verify a check sheet from the sheet alone:
+ *
+ *   const report = await verifySheet(pdfBytes);
+ *   report.ok        // the input is intact and this engine gives the recorded results
+ *   report.problems  // why not, in plain words
+ *
+ * 1. The attached input (INPUT_ATTACHMENT) is found and is a valid check.
+ * 2. Its fingerprint, recomputed with the engine version the sheet names, equals the one the
+ *    sheet records: the input has not been changed since the sheet was printed.
+ * 3. This engine, run on that input, gives the verdict and results recorded in the sheet
+ *    (RESULT_ATTACHMENT), to 1 part in 10⁹.
+ *
+ * The fingerprint is a checksum, not a signature: someone who rewrites the input, the record
+ * and the metadata together makes a consistent forgery. The paper is the anchor — the report
+ * gives the fingerprint to compare with the one printed on every page.
+ */
+import { ENGINE_VERSION, InputError, runCheck, type CheckResult } from "../engine/index.ts";
+import type { FieldError } from "../engine/errors.ts";
+import { fingerprint, parseCheck } from "../schema/index.ts";
+import { extractAttachment, INPUT_ATTACHMENT, readSheetInfo, type SheetInfoFound } from "./attach.ts";
+import { compareRecords, readRecord, recordOf, RESULT_ATTACHMENT, type Difference, type SheetRecord } from "./record.ts";
+
+export interface VerifyReport {
+  /** True when the input is intact and this engine reproduces the recorded results. */
+  ok: boolean;
+  input: { found: boolean; valid: boolean; errors: FieldError[] };
+  fingerprint: {
+    /** As recorded in the PDF's document information (and printed on every page). */
+    recorded: string | null;
+    /** Of the attached input, with the engine version the sheet names. */
+    recomputed: string | null;
+    matches: boolean;
+    /** What a sheet printed now, by this engine, would carry. */
+    thisEngine: string | null;
+  };
+  engine: { then: string | null; now: string; same: boolean };
+  results: {
+    /** Whether the sheet carries a results record. */
+    recorded: boolean;
+    verdictThen: "pass" | "fail" | null;
+    verdictNow: "pass" | "fail" | null;
+    matches: boolean;
+    differences: Difference[];
+  };
+  /** Why the sheet does not verify, one sentence each; empty when it does. */
+  problems: string[];
+  /** Things worth knowing that do not fail the sheet. */
+  notes: string[];
+}
+
+/**
+ * A check may carry a pressure history of up to 5 000 000 points (the schema's limit), some
+ * 100 MB of JSON at worst; the cap still refuses a small PDF that inflates without end.
+ */
+const MAX_INPUT_BYTES = 128 * 1024 * 1024;
+
+export async function verifySheet(pdf: Uint8Array): Promise<VerifyReport> {
+  const report: VerifyReport = {
+    ok: false,
+    input: { found: false, valid: false, errors: [] },
+    fingerprint: { recorded: null, recomputed: null, matches: false, thisEngine: null },
+    engine: { then: null, now: ENGINE_VERSION, same: false },
+    results: { recorded: false, verdictThen: null, verdictNow: null, matches: false, differences: [] },
+    problems: [],
+    notes: [],
+  };
+  const problem = (p: string) => report.problems.push(p);
+
+  let info: SheetInfoFound;
+  let inputBytes: Uint8Array | null;
+  try {
+    info = await readSheetInfo(pdf);
+    inputBytes = await extractAttachment(pdf, INPUT_ATTACHMENT, { maxBytes: MAX_INPUT_BYTES });
+  } catch (err) {
+    problem(`The file cannot be read as a PDF: ${(err as Error).message}`);
+    return report;
+  }
+  report.fingerprint.recorded = info.fingerprint ?? null;
+  report.engine.then = info.engineVersion ?? null;
+  report.engine.same = info.engineVersion === ENGINE_VERSION;
+  if (!info.fingerprint) problem("The PDF records no fingerprint: it is not a Hoopwise check sheet, or its document information was rewritten.");
+  if (!info.engineVersion) problem("The PDF does not name the engine version that made it.");
+
+  let record: SheetRecord | null = null;
+  try {
+    record = await readRecord(pdf);
+  } catch (err) {
+    problem((err as Error).message);
+  }
+  report.results.recorded = record !== null;
+  report.results.verdictThen = record?.verdict ?? null;
+  if (!record) problem(`The PDF carries no results record (${RESULT_ATTACHMENT}), so its results cannot be compared.`);
+  else if (info.fingerprint && record.fingerprint !== info.fingerprint) {
+    problem("The results record and the document information carry different fingerprints: one of them was changed.");
+  }
+
+  if (!inputBytes) {
+    problem(`No input is attached (${INPUT_ATTACHMENT}): the sheet cannot be recomputed.`);
+    return report;
+  }
+  report.input.found = true;
+  let json: unknown;
+  try {
+    json = JSON.parse(new TextDecoder("utf-8", { fatal: true }).decode(inputBytes));
+  } catch (err) {
+    problem(`The attached input is not valid JSON: ${(err as Error).message}`);
+    return report;
+  }
+  const parsed = parseCheck(json);
+  if (!parsed.ok) {
+    report.input.errors = parsed.errors;
+    problem(`The attached input is not a valid check (${parsed.errors.length} problem${parsed.errors.length === 1 ? "" : "s"}, listed under input.errors).`);
+    return report;
+  }
+  report.input.valid = true;
+  const document = parsed.value.document;
+  report.fingerprint.thisEngine = fingerprint(document, ENGINE_VERSION);
+  if (info.engineVersion) {
+    report.fingerprint.recomputed = fingerprint(document, info.engineVersion);
+    report.fingerprint.matches = report.fingerprint.recomputed === info.fingerprint;
+    if (info.fingerprint && !report.fingerprint.matches) {
+      problem("The attached input does not match the recorded fingerprint: the input was changed after the sheet was printed.");
+    }
+  }
+
+  let result: CheckResult;
+  try {
+    result = runCheck(parsed.value);
+  } catch (err) {
+    if (!(err instanceof InputError)) throw err;
+    report.input.errors = [{ path: err.path, message: err.message }];
+    problem(`This engine cannot compute the attached input: ${err.message}`);
+    return report;
+  }
+  report.results.verdictNow = result.verdict;
+  if (record) {
+    const differences = compareRecords(record, recordOf(result));
+    report.results.differences = differences;
+    report.results.matches = differences.length === 0;
+    if (!report.results.matches) {
+      problem(
+        report.engine.same
+          ? `This engine gives different results from those recorded (${differences.length} difference${differences.length === 1 ? "" : "s"}): the record was changed.`
+          : `This engine (${ENGINE_VERSION}) gives different results from the one that printed the sheet (${info.engineVersion}): ${differences.length} difference${differences.length === 1 ? "" : "s"}. Re-issue the sheet.`,
+      );
+    }
+  }
+  if (info.engineVersion && !report.engine.same && report.results.matches) {
+    report.notes.push(
+      `Printed by ${info.engineVersion}; this engine is ${ENGINE_VERSION} and gives the same results. A sheet printed now would carry the fingerprint ${report.fingerprint.thisEngine}.`,
+    );
+  }
+  report.notes.push("Compare the fingerprint above with the one printed on every page of the paper copy: the two must be the same.");
+  report.ok = report.problems.length === 0;
+  return report;
+}

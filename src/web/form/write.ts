@@ -1,0 +1,142 @@
+import { blockField, NUMBER_FIELDS, type FormValues, type NumberFieldName } from "./fields.ts";
+import { formatNumberList, parseNumber, parseNumberList } from "./lists.ts";
+import { formNumber, fromSI, toSI, type Quantity, type Units } from "../units.ts";
+
+/**
+ * Check document → form values in the chosen units. The document may come from a link or an
+ * uploaded file and so may be incomplete or wrong: whatever is present is shown (wrong values
+ * as their text), so the user sees it beside the error the schema gives.
+ */
+export function writeForm(doc: unknown, units: Units): FormValues {
+  const v: FormValues = {};
+  const at = (path: string) => valueAt(doc, path);
+  const put = (name: string, path: string) => {
+    const x = at(path);
+    if (typeof x === "string" || typeof x === "number" || typeof x === "boolean") v[name] = String(x);
+  };
+  const putNumber = (name: NumberFieldName) => {
+    const f = NUMBER_FIELDS[name];
+    const x = at(f.path);
+    if (x !== undefined && x !== null) v[name] = shownNumber(x, f.quantity, units);
+  };
+
+  for (const k of ["title", "project", "calcNumber", "notes"]) put(k, k);
+  put("shell.form", "shell.form");
+  put("shell.radiusAt", "shell.radiusAt");
+  put("shell.theory", "shell.theory");
+  putNumber("shell.radius");
+  putNumber("shell.thickness");
+
+  const p = at("pressure");
+  const has = (k: string) => p !== null && typeof p === "object" && k in p;
+  if (has("fromAltitude")) {
+    v["pressure.mode"] = "altitude";
+    putNumber("altitude.flight");
+    putNumber("altitude.cabin");
+    putNumber("altitude.min");
+  } else if (has("history_MPa")) {
+    v["pressure.mode"] = "history";
+    v["history.text"] = listText(at("pressure.history_MPa"), "pressure", units);
+  } else if (has("blocks")) {
+    v["pressure.mode"] = "blocks";
+    const blocks = at("pressure.blocks");
+    (Array.isArray(blocks) ? blocks : []).forEach((b, row) => {
+      const cell = (key: string, q: Quantity) => {
+        const x = valueAt(b, key);
+        return x === undefined || x === null ? "" : shownNumber(x, q, units);
+      };
+      v[blockField(row, "max")] = cell("max_MPa", "pressure");
+      v[blockField(row, "min")] = cell("min_MPa", "pressure");
+      v[blockField(row, "cycles")] = cell("cycles", "plain");
+    });
+  } else {
+    v["pressure.mode"] = "direct";
+    putNumber("pressure.max");
+    putNumber("pressure.min");
+  }
+  putNumber("axial.max");
+  putNumber("axial.min");
+
+  put("cutout.kind", "cutout.kind");
+  const kind = at("cutout.kind");
+  if (kind === "circular-hole") putNumber("circle.radius");
+  if (kind === "elliptical-hole") {
+    putNumber("ellipse.hoop");
+    putNumber("ellipse.axial");
+  }
+  if (kind === "given") {
+    putNumber("given.kt");
+    putNumber("given.rootRadius");
+    put("given.basis", "cutout.basis");
+  }
+
+  put("material.id", "material.id");
+  put("material.name", "material.name");
+  for (const name of Object.keys(NUMBER_FIELDS) as NumberFieldName[]) if (name.startsWith("material.")) putNumber(name);
+
+  put("fatigue.meanStress", "fatigue.meanStress");
+  put("fatigue.curve", "fatigue.curve");
+  put("fatigue.localYield", "fatigue.localYield");
+  put("fatigue.surface", "fatigue.modifiers.surface");
+  for (const name of Object.keys(NUMBER_FIELDS) as NumberFieldName[]) if (name.startsWith("fatigue.")) putNumber(name);
+  const constant = at("fatigue.notchConstant");
+  v["fatigue.notch"] = typeof constant === "string" ? constant : at("fatigue.notchSensitivity") !== undefined ? "q" : "kt";
+  putNumber("static.yieldFactor");
+
+  if (at("crack") !== undefined) {
+    v["crack.on"] = "on";
+    put("crack.geometry", "crack.geometry");
+    put("crack.cracksAtHole", "crack.cracksAtHole");
+    if (at("crack.bulging") === true) v["crack.bulging"] = "on";
+    for (const name of Object.keys(NUMBER_FIELDS) as NumberFieldName[]) if (name.startsWith("crack.")) putNumber(name);
+  }
+  if (at("evidence") !== undefined) {
+    v["evidence.on"] = "on";
+    v["evidence.lives"] = listText(at("evidence.lives_cycles"), "plain", units);
+    for (const name of Object.keys(NUMBER_FIELDS) as NumberFieldName[]) if (name.startsWith("evidence.")) putNumber(name);
+  }
+  return v;
+}
+
+/** A document value shown in a field: numbers converted to the display unit, anything else as its text. */
+function shownNumber(x: unknown, q: Quantity, units: Units): string {
+  return typeof x === "number" ? formNumber(fromSI(x, q, units)) : typeof x === "string" ? x : JSON.stringify(x);
+}
+
+function listText(x: unknown, q: Quantity, units: Units): string {
+  if (!Array.isArray(x)) return x === undefined ? "" : String(x);
+  if (x.every((e) => typeof e === "number")) return formatNumberList(x, (n) => formNumber(fromSI(n, q, units)));
+  return x.map((e) => (typeof e === "number" ? formNumber(fromSI(e, q, units)) : String(e))).join(", ");
+}
+
+export function valueAt(doc: unknown, path: string): unknown {
+  let x: unknown = doc;
+  for (const key of path.split(".")) {
+    if (x === null || typeof x !== "object") return undefined;
+    x = (x as Record<string, unknown>)[key];
+  }
+  return x;
+}
+
+/**
+ * The same values re-expressed in other units, for when the user switches units: each number
+ * that parses is converted exactly and rewritten; anything else is kept as typed.
+ */
+export function convertValues(v: FormValues, from: Units, to: Units): FormValues {
+  const out: FormValues = { ...v };
+  const convert = (text: string, q: Quantity) => {
+    const x = parseNumber(text);
+    return x === undefined ? text : formNumber(fromSI(toSI(x, q, from), q, to));
+  };
+  for (const [name, f] of Object.entries(NUMBER_FIELDS)) if (out[name] !== undefined) out[name] = convert(out[name], f.quantity);
+  for (const name of Object.keys(out)) {
+    const m = /^blocks\.\d+\.(max|min)$/.exec(name);
+    if (m) out[name] = convert(out[name], "pressure");
+  }
+  // A logger's table keeps only its pressure column: the other columns were never read.
+  if (out["history.text"]) {
+    const list = parseNumberList(out["history.text"]).map((x) => (typeof x === "number" ? toSI(x, "pressure", from) : x));
+    out["history.text"] = listText(list, "pressure", to);
+  }
+  return out;
+}

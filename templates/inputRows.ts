@@ -1,0 +1,192 @@
+import type { Quantity } from "../src/web/units.ts";
+import { numberList, percent, sig } from "./format.ts";
+import { CRITERION_NAMES, CUTOUT_NAMES, CRACK_NAMES } from "./names.ts";
+import type { SheetModel } from "./model.ts";
+import { dual } from "./quantities.ts";
+
+/** One input as the sheet lists it: the value in the user's unit, SI beside it, and where it came from. */
+export interface InputRow {
+  label: string;
+  shown: string;
+  si: string;
+  note: string;
+}
+
+export interface InputGroup {
+  title: string;
+  rows: InputRow[];
+}
+
+/** Long lists (blocks, test lives) are cut short on paper; the full input rides in the PDF. */
+const MAX_BLOCK_ROWS = 20;
+
+/** The inputs of the check, grouped as the form asks for them, after defaults were filled in. */
+export function inputGroups(m: SheetModel): InputGroup[] {
+  const d = m.document;
+  const u = m.units;
+  const q = (label: string, x: number | null | undefined, kind: Quantity, note = ""): InputRow => ({ label, ...dual(x, kind, u), note });
+  const t = (label: string, shown: string, note = ""): InputRow => ({ label, shown, si: "", note });
+  const groups: InputGroup[] = [];
+
+  const shell = d.shell;
+  groups.push({
+    title: "Shell",
+    rows: [
+      t("Form", shell.form === "cylinder" ? "cylinder (closed ends)" : "sphere"),
+      q(`Radius, measured at the ${shell.radiusAt} surface`, shell.radius_mm, "length", shell.radiusAt === "mean" ? "" : "mean radius worked out in the calculation"),
+      q("Wall thickness t", shell.thickness_mm, "length"),
+      t("Wall theory asked for", THEORY_ASKED[shell.theory]),
+    ],
+  });
+
+  groups.push({ title: "Pressure (inside minus outside)", rows: pressureRows(m, q, t) });
+
+  const c = d.cutout;
+  const cutoutRows: InputRow[] = [t("Opening", CUTOUT_NAMES[c.kind])];
+  if (c.kind === "circular-hole" && c.radius_mm !== undefined) cutoutRows.push(q("Hole radius", c.radius_mm, "length"));
+  if (c.kind === "elliptical-hole") {
+    cutoutRows.push(q("Half-axis along the hoop direction", c.halfAxisAlongHoop_mm, "length"));
+    cutoutRows.push(q("Half-axis along the axial direction", c.halfAxisAlongAxial_mm, "length"));
+  }
+  if (c.kind === "given") {
+    cutoutRows.push(t("Kt given", sig(c.kt, 4), "referred to the nominal hoop stress"));
+    if (c.rootRadius_mm !== undefined) cutoutRows.push(q("Notch root radius", c.rootRadius_mm, "length"));
+    cutoutRows.push(t("Basis of the given Kt", c.basis ?? "not stated", c.basis ? "as entered" : "state where the value comes from"));
+  }
+  groups.push({ title: "Opening", rows: cutoutRows });
+
+  groups.push({ title: "Material", rows: materialRows(m, q, t) });
+  groups.push({ title: "Fatigue", rows: fatigueRows(m, t, q) });
+  groups.push({ title: "Static strength", rows: [t("Yield factor n_y", sig(d.static?.yieldFactor ?? 1.5, 4), d.static ? "" : "default")] });
+
+  if (d.crack) {
+    const k = d.crack;
+    const rows = [
+      t("Crack", CRACK_NAMES[k.geometry]),
+      q(k.geometry === "center-through" ? "Initial half-length a₀" : "Initial depth a₀", k.initial_mm, "length"),
+    ];
+    if (k.width_mm !== undefined) rows.push(q("Panel width W", k.width_mm, "length", "finite-width correction"));
+    if (k.holeRadius_mm !== undefined) rows.push(q("Hole radius R", k.holeRadius_mm, "length"));
+    if (k.geometry === "hole-through") rows.push(t("Cracks at the hole", String(k.cracksAtHole)));
+    rows.push(t("Inspection factor", sig(k.inspectionFactor, 4)));
+    rows.push(t("Bulging of the curved skin", k.bulging ? "included" : "not included"));
+    if (k.walkerGamma !== undefined) rows.push(t("Crack-growth Walker exponent", sig(k.walkerGamma, 4)));
+    groups.push({ title: "Crack growth", rows });
+  }
+
+  if (d.evidence) {
+    const e = d.evidence;
+    const rows = [
+      t(`Test lives (${e.lives_cycles.length})`, `${numberList(e.lives_cycles)} cycles`),
+      t("Reliability (proportion surviving)", percent(e.reliability)),
+      t("Confidence", percent(e.confidence)),
+    ];
+    if (e.assumedLogStdDev !== undefined) rows.push(t("Assumed log₁₀ standard deviation", sig(e.assumedLogStdDev, 4), "taken as known"));
+    groups.push({ title: "Test evidence", rows });
+  }
+
+  if (d.solve) groups.push({ title: "Solve", rows: [t("Solve for", d.solve.for === "thickness" ? "the least wall thickness" : "the highest pressure")] });
+  return groups;
+}
+
+type Q = (label: string, x: number | null | undefined, kind: Quantity, note?: string) => InputRow;
+type T = (label: string, shown: string, note?: string) => InputRow;
+
+const THEORY_ASKED: Record<"auto" | "thin" | "thick", string> = {
+  auto: "chosen from mean radius ÷ thickness (thick wall below 10)",
+  thin: "thin wall (membrane), as asked",
+  thick: "thick wall (Lamé), as asked",
+};
+
+function pressureRows(m: SheetModel, q: Q, t: T): InputRow[] {
+  const p = m.document.pressure;
+  const rows: InputRow[] = [];
+  if (p.max_MPa !== undefined) {
+    rows.push(q("Highest pressure p_max", p.max_MPa, "pressure"));
+    rows.push(q("Lowest pressure p_min", p.min_MPa ?? 0, "pressure", p.min_MPa === undefined ? "default" : ""));
+  } else if (p.fromAltitude) {
+    rows.push(q("Flight altitude", p.fromAltitude.flight_m, "altitude", "standard atmosphere"));
+    rows.push(q("Cabin altitude", p.fromAltitude.cabin_m, "altitude", "standard atmosphere"));
+    rows.push(q("Lowest pressure p_min", p.min_MPa ?? 0, "pressure", p.min_MPa === undefined ? "default" : ""));
+  } else if (p.history_MPa) {
+    const h = p.history_MPa;
+    let lo = Infinity;
+    let hi = -Infinity;
+    for (const x of h) {
+      lo = Math.min(lo, x);
+      hi = Math.max(hi, x);
+    }
+    rows.push(t("Points in the pressure history", sig(h.length, 7), "rainflow-counted; the full history is in the attached input"));
+    rows.push(q("Highest pressure in the history", hi, "pressure"));
+    rows.push(q("Lowest pressure in the history", lo, "pressure"));
+  } else if (p.blocks) {
+    const u = m.units;
+    p.blocks.slice(0, MAX_BLOCK_ROWS).forEach((b, i) => {
+      const hi = dual(b.max_MPa, "pressure", u);
+      const lo = dual(b.min_MPa, "pressure", u);
+      rows.push({
+        label: `Block ${i + 1}`,
+        shown: `${hi.shown} to ${lo.shown}`,
+        si: hi.si ? `${hi.si} to ${lo.si}` : "",
+        note: `${sig(b.cycles, 6)} cycles per pass`,
+      });
+    });
+    if (p.blocks.length > MAX_BLOCK_ROWS) rows.push(t("Further blocks", `${p.blocks.length - MAX_BLOCK_ROWS} more`, "in the attached input"));
+  }
+  const a = m.document.axialExtra;
+  if (a && (a.max_MPa !== 0 || a.min_MPa !== 0)) {
+    rows.push(q("Extra axial stress at the highest pressure", a.max_MPa, "stress"));
+    rows.push(q("Extra axial stress at the lowest pressure", a.min_MPa, "stress"));
+  }
+  return rows;
+}
+
+function materialRows(m: SheetModel, q: Q, t: T): InputRow[] {
+  const entered = m.document.material as Record<string, unknown>;
+  const fromLibrary = entered.id !== undefined;
+  // A value the user typed beside a library id overrides the library's.
+  const origin = (key: string) => (entered[key] !== undefined ? "entered" : fromLibrary ? "library, typical" : "");
+  const mat = m.material;
+  const rows: InputRow[] = [t("Name", mat.name, entered.name !== undefined ? "as entered" : "")];
+  if (mat.id) rows.push(t("Library entry", mat.id));
+  const num = (label: string, key: keyof typeof mat & string, kind: Quantity) => {
+    const v = mat[key];
+    if (typeof v === "number") rows.push(q(label, v, kind, origin(key)));
+  };
+  num("Ultimate strength Su", "ultimate_MPa", "stress");
+  num("Yield strength Sy", "yield_MPa", "stress");
+  num("Elastic modulus E", "modulus_MPa", "stress");
+  num("Fatigue strength coefficient σ'f", "fatigueStrengthCoefficient_MPa", "stress");
+  if (mat.fatigueStrengthExponent !== undefined) rows.push(t("Basquin exponent b", sig(mat.fatigueStrengthExponent, 4), origin("fatigueStrengthExponent")));
+  num("Endurance limit Se", "enduranceLimit_MPa", "stress");
+  num("Fracture toughness Kc", "toughness_MPaSqrtM", "toughness");
+  if (mat.parisC !== undefined) rows.push(t("Paris coefficient C", sig(mat.parisC, 4), `${origin("parisC")}; da/dN in m/cycle, ΔK in MPa·√m`.replace(/^; /, "")));
+  if (mat.parisM !== undefined) rows.push(t("Paris exponent m", sig(mat.parisM, 4), origin("parisM")));
+  if (mat.coupons) rows.push(t("Coupon results", `${mat.coupons.length} coupons`, "fitted in the calculation; listed in the attached input"));
+  rows.push(t("Source of the values", mat.source));
+  return rows;
+}
+
+function fatigueRows(m: SheetModel, t: T, q: Q): InputRow[] {
+  const f = m.document.fatigue;
+  const lifeUnit = m.result.fatigue.lifeCountedIn;
+  const rows: InputRow[] = [t("Design life", `${sig(f.designLife_cycles, 6)} ${lifeUnit}`), t("Scatter factor on life", sig(f.scatterFactor, 4), f.scatterFactor === 1 ? "no statistical allowance" : "")];
+  if (f.curve === "welded") {
+    rows.push(t("S-N curve", "welded detail category"));
+    rows.push(q("Detail category Δσ_C (at 2 × 10⁶ cycles)", f.detailCategory_MPa, "stress"));
+    rows.push(t("Partial factor γ_Mf", sig(f.gammaMf, 4)));
+  } else {
+    rows.push(t("S-N curve", "material curve (Basquin)"));
+    rows.push(t("Mean-stress criterion", CRITERION_NAMES[f.meanStress]));
+    if (f.meanStress === "walker") rows.push(t("Walker exponent γ", sig(f.walkerGamma, 4)));
+  }
+  if (f.notchSensitivity !== undefined) rows.push(t("Notch sensitivity q", sig(f.notchSensitivity, 4), "as entered"));
+  else if (f.notchConstant !== undefined) rows.push(t("Notch sensitivity q", `from ${f.notchConstant === "peterson" ? "Peterson's" : "Neuber's"} constant`, "worked out in the calculation"));
+  else rows.push(t("Notch sensitivity q", "1 (Kf = Kt)", "default, the cautious choice"));
+  rows.push(t("Local yield at the notch", f.localYield === "shakedown" ? "shakedown allowed" : "elastic"));
+  const mod = f.modifiers;
+  if (mod?.surface) rows.push(t("Surface finish", mod.surface));
+  if (mod?.reliability !== undefined) rows.push(t("Reliability asked of the Marin factor", percent(mod.reliability)));
+  if (mod?.sizeDiameter_mm !== undefined) rows.push(q("Effective size for the size factor", mod.sizeDiameter_mm, "length"));
+  return rows;
+}

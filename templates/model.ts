@@ -1,0 +1,32 @@
+import type { CheckResult } from "../src/engine/index.ts";
+import type { ParsedCheck, ResolvedMaterial } from "../src/schema/index.ts";
+import type { Units } from "../src/web/units.ts";
+
+export type Paper = "A4" | "Letter";
+export type SignOffRole = "prepared" | "checked" | "approved";
+
+/** One sign-off as the records hold it. */
+export interface SignOff {
+  role: SignOffRole;
+  name: string;
+  /** ISO 8601 timestamp as recorded. */
+  signedAt: string;
+}
+
+/** Everything the sheet prints, gathered once so each part of the template reads from one place. */
+export interface SheetModel {
+  /** The parsed check with its defaults filled in: what the fingerprint covers. */
+  document: ParsedCheck;
+  /** The material values the engine used (library values merged with the user's). */
+  material: ResolvedMaterial;
+  result: CheckResult;
+  /** The units the user chose; SI is printed beside them. */
+  units: Units;
+  /** Revision in the records; absent for a check printed without being saved. */
+  revision?: number;
+  signoffs: SignOff[];
+  superseded: boolean;
+  /** The date printed on the sheet. */
+  printedOn: Date;
+  paper: Paper;
+}

@@ -1,0 +1,55 @@
+import { readFileSync } from "node:fs";
+import { raw } from "hono/html";
+import { Cautions } from "./cautions.tsx";
+import { Front } from "./front.tsx";
+import { htmlOf } from "./html.ts";
+import { Inputs } from "./inputs.tsx";
+import { footerHtml, headerHtml } from "./margins.tsx";
+import type { SheetModel } from "./model.ts";
+import { Plots } from "./plots.tsx";
+import { Results } from "./results.tsx";
+import { Scope } from "./scope.tsx";
+import { SignOffBlock } from "./signoff.tsx";
+import { Calculation } from "./steps.tsx";
+
+export type { Paper, SheetModel, SignOff, SignOffRole } from "./model.ts";
+export { CAUTIONS } from "./cautions.tsx";
+export { stepResultText } from "./steps.tsx";
+
+/** Read once: the stylesheet is ours and does not change while the process runs. */
+const STYLE = readFileSync(new URL("./sheet.css", import.meta.url), "utf8");
+
+/** The sheet as Chromium prints it: the page body, and the header and footer for every page. */
+export interface SheetDocument {
+  html: string;
+  headerHtml: string;
+  footerHtml: string;
+}
+
+export function sheetDocument(m: SheetModel): SheetDocument {
+  return { html: "<!doctype html>" + htmlOf(<Sheet m={m} />), headerHtml: headerHtml(m), footerHtml: footerHtml(m) };
+}
+
+function Sheet({ m }: { m: SheetModel }) {
+  return (
+    <html lang="en">
+      <head>
+        <meta charset="utf-8" />
+        <title>{m.document.title ?? "Check sheet"}</title>
+        {/* Our own stylesheet, inlined: the renderer fetches nothing. */}
+        <style>{raw(STYLE)}</style>
+      </head>
+      <body>
+        {m.superseded ? <div class="watermark">SUPERSEDED</div> : null}
+        <Front m={m} />
+        <Scope m={m} num={1} />
+        <Inputs m={m} num={2} />
+        <Calculation m={m} num={3} />
+        <Results m={m} num={4} />
+        <Plots m={m} num={5} />
+        <Cautions num={6} />
+        <SignOffBlock m={m} num={7} />
+      </body>
+    </html>
+  );
+}

@@ -1,0 +1,97 @@
+import { describe, expect, it } from "vitest";
+import { DEMOS } from "../../src/demo/index.ts";
+import { parseCheck } from "../../src/schema/index.ts";
+import { convertValues, parseNumberList, readForm, understand, writeForm } from "../../src/web/form/index.ts";
+import { SI_UNITS, unitsKey, type Units } from "../../src/web/units.ts";
+
+const US: Units = { length: "in", stress: "psi", pressure: "psi", altitude: "ft" };
+
+/** Every number in a document, by path, for comparing two documents to a relative tolerance. */
+function numbers(x: unknown, path = ""): Map<string, number> {
+  const out = new Map<string, number>();
+  if (typeof x === "number") out.set(path, x);
+  else if (x && typeof x === "object") for (const [k, v] of Object.entries(x)) for (const [p, n] of numbers(v, `${path}.${k}`)) out.set(p, n);
+  return out;
+}
+
+function expectSameNumbers(a: unknown, b: unknown, rel = 1e-5) {
+  const na = numbers(a);
+  const nb = numbers(b);
+  expect([...nb.keys()].sort()).toEqual([...na.keys()].sort());
+  for (const [p, x] of na) expect(Math.abs((nb.get(p) as number) - x), p).toBeLessThanOrEqual(rel * Math.max(Math.abs(x), 1e-300));
+}
+
+describe("lists of numbers typed into one field", () => {
+  it("reads numbers separated by spaces, commas, semicolons and new lines, in order", () => {
+    expect(parseNumberList("0 0.8, 0.2;0.9\n0")).toEqual([0, 0.8, 0.2, 0.9, 0]);
+    expect(parseNumberList("1e-3 −2")).toEqual([0.001, -2]);
+  });
+
+  it("reads the last column of a CSV table and skips a header line", () => {
+    expect(parseNumberList("time,pressure\n0,0\n10,0.8\n20,0.1")).toEqual([0, 0.8, 0.1]);
+    expect(parseNumberList("0\t5\n1\t7")).toEqual([5, 7]);
+  });
+
+  it("keeps entries that are not numbers as text, for the schema to point at", () => {
+    expect(parseNumberList("0, 0.8, oops, 0")).toEqual([0, 0.8, "oops", 0]);
+  });
+});
+
+describe("form ↔ check document", () => {
+  it.each(DEMOS.map((d) => [d.id, d.document] as const))("the %s example survives the form in SI units", (_id, doc) => {
+    const back = readForm(writeForm(doc, SI_UNITS), SI_UNITS).document;
+    const parsed = parseCheck(back);
+    expect(parsed.ok).toBe(true);
+    expectSameNumbers({ ...doc, display: SI_UNITS }, back);
+  });
+
+  it.each(DEMOS.map((d) => [d.id, d.document] as const))("the %s example survives the form in US units", (_id, doc) => {
+    const back = readForm(writeForm(doc, US), US).document;
+    expectSameNumbers({ ...doc, display: US }, back);
+  });
+
+  it("gives the same SI document from millimetres and megapascals as from inches and psi", () => {
+    const si = readForm({ "shell.thickness": "1.6", "pressure.mode": "direct", "pressure.max": "0.06", "material.ultimate": "470" }, SI_UNITS).document;
+    const us = readForm({ "shell.thickness": "0.0629921", "pressure.mode": "direct", "pressure.max": "8.70226", "material.ultimate": "68167.7" }, US).document;
+    expectSameNumbers({ ...si, display: {} }, { ...us, display: {} }, 1e-5);
+  });
+
+  it("leaves a blank field out and passes a non-number on as its text", () => {
+    const doc = readForm({ "shell.radius": "", "shell.thickness": "abc" }, SI_UNITS).document as { shell: Record<string, unknown> };
+    expect("radius_mm" in doc.shell).toBe(false);
+    expect(doc.shell.thickness_mm).toBe("abc");
+  });
+
+  it("puts an error on a block back on the row it came from, past blank rows", () => {
+    const read = readForm(
+      { "pressure.mode": "blocks", "blocks.0.max": "", "blocks.0.min": "", "blocks.0.cycles": "", "blocks.1.max": "1", "blocks.1.cycles": "x" },
+      SI_UNITS,
+    );
+    expect((read.document.pressure as { blocks: unknown[] }).blocks).toHaveLength(1);
+    expect(read.fieldFor("pressure.blocks.0.cycles")).toBe("blocks.1.cycles");
+    expect(read.fieldFor("pressure.blocks")).toBe("blocks");
+    expect(read.fieldFor("pressure")).toBe("pressure.mode");
+  });
+
+  it("converts what is on the page when the units change, and keeps what is not a number", () => {
+    const v = convertValues({ "shell.thickness": "25.4", "shell.radius": "big", "history.text": "0 100 0" }, SI_UNITS, { ...US, pressure: "kPa" });
+    expect(v["shell.thickness"]).toBe("1");
+    expect(v["shell.radius"]).toBe("big");
+    expect(v["history.text"]).toBe("0, 100000, 0");
+  });
+
+  it("reads a post in the units it was drawn in, and shows it back in the units now chosen", () => {
+    const p = understand({ "units.shown": unitsKey(SI_UNITS), "units.length": "in", "shell.thickness": "2.54", "pressure.mode": "direct" });
+    expect((p.document.shell as { thickness_mm: number }).thickness_mm).toBeCloseTo(2.54, 12);
+    expect(p.values["shell.thickness"]).toBe("0.1");
+    expect(p.document.display).toEqual({ ...SI_UNITS, length: "in" });
+    expect(p.redraw).toBe(true);
+  });
+
+  it("fills blank material fields from the library entry being left for own values", () => {
+    const p = understand({ "material.shown": "al-2024-t3", "material.id": "", "material.yield": "300" });
+    expect(p.values["material.ultimate"]).toBe("483");
+    expect(p.values["material.yield"]).toBe("300");
+    expect(p.values["material.name"]).toBe("Aluminium 2024-T3 sheet");
+  });
+});

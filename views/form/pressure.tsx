@@ -1,0 +1,137 @@
+import { blockField, errorId, fieldId } from "../../src/web/form/fields.ts";
+import { unitLabel } from "../../src/web/units.ts";
+import { Choice, ErrorSlot, NumberInput, Panel } from "./controls.tsx";
+import type { FormState } from "./state.ts";
+
+/** The pressure cycle, given one of four ways. Pressures are differential: inside minus outside. */
+export function PressureSection({ s }: { s: FormState }) {
+  return (
+    <fieldset class="section" id="sec-pressure">
+      <legend>2 · Pressure cycle</legend>
+      <p class="hint">Differential pressure: inside minus outside.</p>
+      <Choice
+        s={s}
+        name="pressure.mode"
+        legend="Give the pressure as"
+        fallback="direct"
+        options={[
+          { value: "direct", label: "one cycle, highest and lowest" },
+          { value: "altitude", label: "flight and cabin altitudes" },
+          { value: "history", label: "a recorded history" },
+          { value: "blocks", label: "blocks of repeated cycles" },
+        ]}
+      />
+      <Panel name="pressure.mode" value="direct">
+        <div class="grid">
+          <NumberInput s={s} name="pressure.max" label="Highest pressure" />
+          <NumberInput s={s} name="pressure.min" label="Lowest pressure" placeholder="0" />
+        </div>
+      </Panel>
+      <Panel name="pressure.mode" value="altitude">
+        <div class="grid">
+          <NumberInput s={s} name="altitude.flight" label="Flight altitude" />
+          <NumberInput s={s} name="altitude.cabin" label="Cabin altitude" />
+          <NumberInput s={s} name="altitude.min" label="Lowest pressure on the ground" placeholder="0" />
+        </div>
+        <p class="hint">The highest pressure is the standard-atmosphere pressure at the cabin altitude less that at the flight altitude.</p>
+      </Panel>
+      <Panel name="pressure.mode" value="history">
+        <HistoryInput s={s} />
+      </Panel>
+      <Panel name="pressure.mode" value="blocks">
+        <BlockTable s={s} />
+      </Panel>
+    </fieldset>
+  );
+}
+
+function HistoryInput({ s }: { s: FormState }) {
+  const name = "history.text";
+  const errs = s.errors.get(name);
+  const unit = unitLabel("pressure", s.units);
+  return (
+    <div class="grid">
+      <div class="field wide">
+        <label for={fieldId(name)}>
+          Pressure history <span class="unit">({unit})</span>
+        </label>
+        <textarea
+          id={fieldId(name)}
+          name={name}
+          rows={5}
+          spellcheck={false}
+          aria-describedby={`${errorId(name)} ${fieldId(name)}-hint`}
+          aria-invalid={errs ? "true" : undefined}
+        >
+          {s.values[name] ?? ""}
+        </textarea>
+        <p class="hint" id={`${fieldId(name)}-hint`}>
+          Numbers in order, separated by spaces, commas or new lines; or a CSV table, of which the last column is read. It is counted into cycles
+          by rainflow (ASTM E1049); one pass of the history counts as one use against the design life.
+        </p>
+        <ErrorSlot name={name} messages={errs} />
+      </div>
+      <div class="field wide">
+        <label for={fieldId("history.file")}>…or read it from a file (CSV or plain text)</label>
+        <input type="file" id={fieldId("history.file")} name="history.file" accept=".csv,.txt,.tsv,text/csv,text/plain" />
+        <p class="hint">Choosing a file fills the box above; without scripting, press “Work it out” after choosing.</p>
+      </div>
+    </div>
+  );
+}
+
+function BlockTable({ s }: { s: FormState }) {
+  const unit = unitLabel("pressure", s.units);
+  return (
+    <div class="blocks">
+      <table>
+        <caption>
+          Blocks of cycles <span class="hint">— one pass through all blocks counts as one use against the design life</span>
+        </caption>
+        <thead>
+          <tr>
+            <th scope="col">Block</th>
+            <th scope="col">Highest ({unit})</th>
+            <th scope="col">Lowest ({unit})</th>
+            <th scope="col">Cycles</th>
+          </tr>
+        </thead>
+        <tbody>
+          {s.blockRows.map((row) => (
+            <tr>
+              <th scope="row">{row + 1}</th>
+              <BlockCell s={s} row={row} col="max" label={`Block ${row + 1}, highest pressure (${unit})`} />
+              <BlockCell s={s} row={row} col="min" label={`Block ${row + 1}, lowest pressure (${unit})`} />
+              <BlockCell s={s} row={row} col="cycles" label={`Block ${row + 1}, number of cycles`} />
+            </tr>
+          ))}
+        </tbody>
+      </table>
+      <ErrorSlot name="blocks" messages={s.errors.get("blocks")} />
+      <button type="submit" name="blocks.more" value="1" class="secondary" hx-post="/recalc">
+        More rows
+      </button>
+    </div>
+  );
+}
+
+function BlockCell({ s, row, col, label }: { s: FormState; row: number; col: "max" | "min" | "cycles"; label: string }) {
+  const name = blockField(row, col);
+  const errs = s.errors.get(name);
+  return (
+    <td>
+      <input
+        type="text"
+        inputmode="decimal"
+        autocomplete="off"
+        id={fieldId(name)}
+        name={name}
+        value={s.values[name] ?? ""}
+        aria-label={label}
+        aria-describedby={errorId(name)}
+        aria-invalid={errs ? "true" : undefined}
+      />
+      <ErrorSlot name={name} messages={errs} />
+    </td>
+  );
+}

@@ -1,0 +1,37 @@
+import type { CheckResult } from "../../src/engine/index.ts";
+import { margin } from "../format.ts";
+
+const STATUS = { pass: "passes", fail: "fails", info: "note" } as const;
+
+/** Every check the verdict weighs, with its demand against capacity in words. */
+export function VerdictTable({ result }: { result: CheckResult }) {
+  return (
+    <section class="block" aria-labelledby="h-verdict-table">
+      <h3 id="h-verdict-table">Checks weighed</h3>
+      <div class="scroll">
+        <table class="verdict-table">
+          <thead>
+            <tr>
+              <th scope="col">Check</th>
+              <th scope="col">Outcome</th>
+              <th scope="col">Demand against capacity</th>
+              <th scope="col">Reserve</th>
+            </tr>
+          </thead>
+          <tbody>
+            {result.verdictTable.map((r) => (
+              <tr class={`row-${r.status}`}>
+                <th scope="row">{r.title}</th>
+                <td>
+                  <span class={`status status-${r.status}`}>{STATUS[r.status]}</span>
+                </td>
+                <td>{r.detail}</td>
+                <td class="num">{margin(r.margin)}</td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </div>
+    </section>
+  );
+}

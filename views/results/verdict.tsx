@@ -1,0 +1,52 @@
+import type { CheckResult, VerdictRow } from "../../src/engine/index.ts";
+import { cycles, margin, sig } from "../format.ts";
+
+/** The row the verdict rests on: the engine's `governs` text starts with that row's title. */
+export function governingRow(result: CheckResult): VerdictRow | undefined {
+  return result.verdictTable.find((r) => r.status !== "info" && result.governs.startsWith(r.title));
+}
+
+/**
+ * The verdict in a few lines: pass or fail, what governs and by how much, and the fatigue
+ * life against the design life. Read out by screen readers whenever it changes.
+ */
+export function VerdictSummary({ result }: { result: CheckResult }) {
+  const row = governingRow(result);
+  const f = result.fatigue;
+  const unit = f.lifeCountedIn === "passes" ? "passes" : "cycles";
+  return (
+    <div class={`verdict verdict-${result.verdict}`}>
+      <p class="verdict-word">
+        <span class="badge">{result.verdict === "pass" ? "Passes" : "Fails"}</span>
+        <span class="verdict-title">{result.title ?? "this check"}</span>
+      </p>
+      <p class="governs">
+        <strong>Governed by</strong> {result.governs}
+        {row && row.margin !== null ? (
+          <>
+            {" "}
+            — <strong>{row.margin >= 0 ? "reserve" : "shortfall"} {margin(row.margin)}</strong>
+          </>
+        ) : null}
+      </p>
+      <dl class="headline">
+        <div>
+          <dt>Fatigue damage</dt>
+          <dd>{sig(f.damage, 3)}</dd>
+        </div>
+        <div>
+          <dt>Allowable life</dt>
+          <dd data-testid="allowable-life">{cycles(f.allowableLife_cycles, unit)}</dd>
+        </div>
+        <div>
+          <dt>Design life</dt>
+          <dd>{cycles(f.designLife_cycles, unit)}</dd>
+        </div>
+        <div>
+          <dt>Static reserve</dt>
+          <dd>{margin(result.static.margin)}</dd>
+        </div>
+      </dl>
+    </div>
+  );
+}
