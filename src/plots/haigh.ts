@@ -5,7 +5,7 @@
  * distance from the others shows how much the verdict leans on that choice.
  */
 import { scaleLinear } from "d3-scale";
-import { ALL_CRITERIA, amplitudeOnLine, type LineMaterial, type MeanStressCriterion, zeroAmplitudeMean } from "./constantLifeLines.ts";
+import { ALL_CRITERIA, amplitudeOnLine, type LineMaterial, type MeanStressCriterion, zeroAmplitudeMean } from "../engine/constantLife.ts";
 import { formatValue, isFiniteNumber } from "./format.ts";
 import { type Frame, type LegendEntry, makeFrame, notes, OPERATING_LEGEND, operatingPoint } from "./frame.ts";
 import { DASH, marker, type Point, pointsAlong, polyline, type SeriesStyle } from "./marks.ts";

@@ -1,6 +1,6 @@
 /** Server-rendered SVG plots for the web page and the printed check sheet. */
 export { haighDiagram, type HaighData } from "./haigh.ts";
-export type { MeanStressCriterion } from "./constantLifeLines.ts";
+export type { MeanStressCriterion } from "../engine/constantLife.ts";
 export type { PlotOptions, StressUnit, LengthUnit } from "./units.ts";
 export { escapeXml } from "./svgText.ts";
 export { snCurve, type SnData } from "./sn.ts";

@@ -1,16 +1,17 @@
 /**
- * The constant-life lines a Haigh diagram draws, as σa(σm) for σm ≥ 0, each passing
- * through σar at zero mean. Drawing geometry only: the engine's mean-stress module is
- * what turns a load into an equivalent amplitude; these reproduce the same relations so
- * the operating point can be seen against every criterion at once.
+ * Constant-life lines: the inverse of the mean-stress relations in meanStress.ts, σa(σm) for
+ * σm ≥ 0 passing through σar at zero mean — what a Haigh diagram draws so the operating point
+ * can be seen against every criterion at once. Kept beside the forward relations so the two
+ * cannot drift apart (test/engine/constantLife.test.ts checks one against the other).
  * Relations as given in mechanical design and mechanical-behaviour texts (Shigley-style
  * design texts for Goodman, Gerber, Soderberg and ASME elliptic; Dowling for Morrow,
  * Smith–Watson–Topper and Walker).
  */
-import { isFiniteNumber } from "./format.ts";
+import type { MeanStressCriterion } from "../schema/check.ts";
 
-export type MeanStressCriterion = "goodman" | "gerber" | "soderberg" | "asme-elliptic" | "swt" | "morrow" | "walker";
+export type { MeanStressCriterion };
 
+/** Drawing order: the four yield/ultimate lines, then the σ'f and σmax-based ones. */
 export const ALL_CRITERIA: readonly MeanStressCriterion[] = ["goodman", "gerber", "soderberg", "asme-elliptic", "morrow", "swt", "walker"];
 
 export interface LineMaterial {
@@ -66,7 +67,7 @@ export function amplitudeOnLine(c: MeanStressCriterion, sm: number, m: LineMater
  * σm ≥ 0 and equals σar somewhere in (0, σar], so bisection always converges.
  */
 function walkerAmplitude(sm: number, sar: number, gamma: number | undefined): number {
-  if (!isFiniteNumber(gamma) || gamma <= 0 || gamma > 1 || sm < 0 || !(sar > 0)) return NaN;
+  if (gamma === undefined || !Number.isFinite(gamma) || gamma <= 0 || gamma > 1 || sm < 0 || !(sar > 0)) return NaN;
   const f = (sa: number) => (sm + sa) ** (1 - gamma) * sa ** gamma - sar;
   let lo = 0;
   let hi = sar;
