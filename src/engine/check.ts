@@ -96,7 +96,7 @@ export function runCheck(input: ResolvedCheck): CheckResult {
       modifyingFactor: mods.factor,
       curveUsed: { fatigueStrengthCoefficient_MPa: coefficient, fatigueStrengthExponent: exponent, enduranceLimit_MPa: mat.enduranceLimit_MPa ?? null },
       criteria,
-      pass: e.damage <= 1,
+      pass: e.damage !== null && e.damage <= 1,
     },
     lifeVsThickness: lifeVsThickness(ctx, t),
     verdictTable: [],
@@ -280,7 +280,7 @@ function validityWarnings(ctx: Context, e: Evaluation): string[] {
     if (e.life > VALID_LIFE[1] && ctx.curve.enduranceLimit_MPa === undefined) w.push(`the life (${fmt(e.life)} cycles) extrapolates the curve beyond 10⁷ cycles, past typical test data and with no endurance limit given`);
   }
   if (input.fatigue.scatterFactor === 1) w.push("the scatter factor is 1: the life is a median estimate with no statistical allowance for the weaker items of a fleet");
-  if (e.damage > 1 && e.life !== 0) w.push(`the allowable life (${fmt(e.allowable ?? 0)}) is short of the design life (${fmt(input.fatigue.designLife_cycles)})`);
+  if (e.damage !== null && e.damage > 1) w.push(`the allowable life (${fmt(e.allowable ?? 0)}) is short of the design life (${fmt(input.fatigue.designLife_cycles)})`);
   return w;
 }
 

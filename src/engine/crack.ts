@@ -108,6 +108,8 @@ function toughnessSize(start_mm: number, limit_mm: number, K: (a: number) => num
       hi = lo;
       lo /= 1.25;
     } else if (g(hi) < 0) {
+      // A stress so low that K stays below the toughness up to the strip's limit: critical only where it cuts through.
+      if (hi >= top) return top;
       lo = hi;
       hi = Math.min(hi * 1.25, top);
     } else {

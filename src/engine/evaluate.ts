@@ -20,6 +20,26 @@ export interface Context {
   load: Load;
   curve: Curve;
   strengths: Strengths;
+  /** Kt and Kf with their steps by biaxial ratio: λ changes with thickness only when an axial load is added. */
+  notchCache?: Map<number, { conc: Concentration; notch: NotchFactor }>;
+}
+
+function notchAt(ctx: Context, lambda: number): { conc: Concentration; notch: NotchFactor } {
+  ctx.notchCache ??= new Map();
+  const known = ctx.notchCache.get(lambda);
+  if (known) return known;
+  const { input } = ctx;
+  const conc = concentration(input.cutout, lambda);
+  const notch = notchFactor(conc.kt, {
+    q: input.fatigue.notchSensitivity,
+    constant: input.fatigue.notchConstant,
+    rootRadius_mm: conc.rootRadius_mm,
+    family: input.material.family,
+    ultimate_MPa: input.material.ultimate_MPa,
+  });
+  if (ctx.notchCache.size > 64) ctx.notchCache.clear();
+  ctx.notchCache.set(lambda, { conc, notch });
+  return { conc, notch };
 }
 
 export interface CycleOutcome {
@@ -57,9 +77,11 @@ export interface Evaluation {
   governing: CycleOutcome;
   /** Life in cycles (single cycle) or passes (spectrum); null = unlimited; 0 = no answer. */
   life: number | null;
-  damagePerPass: number;
+  /** null when it is beyond what a double holds (then life is 0). */
+  damagePerPass: number | null;
   allowable: number | null;
-  damage: number;
+  /** null where there is no life (life 0): JSON has no infinity, and a checker reads "none" better than a stand-in number. */
+  damage: number | null;
 }
 
 export function evaluate(ctx: Context, thickness_mm: number, scale: number, criterion: MeanStressCriterion = ctx.input.fatigue.meanStress): Evaluation {
@@ -80,14 +102,7 @@ export function evaluate(ctx: Context, thickness_mm: number, scale: number, crit
   const yieldFactor = input.static?.yieldFactor ?? 1.5;
   const staticAllowable = input.material.yield_MPa / yieldFactor;
   const lambda = hoopMax > 0 ? axialMax / hoopMax : 0;
-  const conc = concentration(input.cutout, lambda);
-  const notch = notchFactor(conc.kt, {
-    q: input.fatigue.notchSensitivity,
-    constant: input.fatigue.notchConstant,
-    rootRadius_mm: conc.rootRadius_mm,
-    family: input.material.family,
-    ultimate_MPa: input.material.ultimate_MPa,
-  });
+  const { conc, notch } = notchAt(ctx, lambda);
   const localPerMPa = notch.kf * u.hoop * scale;
   const peakMax = localPerMPa * load.max_MPa;
   const peakMin = localPerMPa * load.min_MPa;
@@ -98,17 +113,20 @@ export function evaluate(ctx: Context, thickness_mm: number, scale: number, crit
   let largestRange = -1;
   for (const c of load.cycles) {
     const o = cycleOutcome(ctx, criterion, localPerMPa * (c.range / 2), localPerMPa * c.mean, load.isSpectrum);
-    if (o.status === "no-answer") noAnswer = true;
+    // A life that underflowed to 0 is no life, as life 0 reads everywhere else.
+    if (o.status === "no-answer" || o.life === 0) noAnswer = true;
     else if (o.life !== null) damagePerPass += c.count / o.life;
     if (c.range > largestRange) {
       largestRange = c.range;
       governing = o;
     }
   }
-  const life = noAnswer ? 0 : damagePerPass > 0 ? 1 / damagePerPass : null;
+  const finiteDamage = Number.isFinite(damagePerPass);
+  const life = noAnswer || !finiteDamage ? 0 : damagePerPass > 0 ? 1 / damagePerPass : null;
   const sf = input.fatigue.scatterFactor;
   const allowable = life === null ? null : life / sf;
-  const damage = allowable === null ? 0 : allowable === 0 ? Infinity : input.fatigue.designLife_cycles / allowable;
+  const ratio = allowable === null ? 0 : input.fatigue.designLife_cycles / allowable;
+  const damage = Number.isFinite(ratio) ? ratio : null;
   return {
     thickness_mm,
     scale,
@@ -133,7 +151,7 @@ export function evaluate(ctx: Context, thickness_mm: number, scale: number, crit
     localYield: peakMax > input.material.yield_MPa,
     governing: governing as CycleOutcome,
     life,
-    damagePerPass,
+    damagePerPass: finiteDamage ? damagePerPass : null,
     allowable,
     damage,
   };

@@ -49,35 +49,37 @@ export function equivalentAmplitude(c: MeanStressCriterion, amplitude: number, m
   const a = amplitude;
   const m = mean;
   const max = m + a;
-  const noAnswer = (limit: number, limitName: string): Equivalent => ({
-    sigmaAr: null,
-    noDamage: false,
-    reason: `the mean stress ${fmt(m)} MPa reaches ${limitName} (${fmt(limit)} MPa), beyond which ${CRITERION_LABEL[c]} has no answer`,
-  });
-  const divide = (limit: number, limitName: string, d: (x: number) => number): Equivalent => {
-    if (m <= 0) return { sigmaAr: a, noDamage: false };
-    const den = d(m / limit);
-    return den > 0 ? { sigmaAr: a / den, noDamage: false } : noAnswer(limit, limitName);
-  };
-  const noTension = (): Equivalent => ({ sigmaAr: 0, noDamage: true, reason: `the cycle never reaches tension, so ${CRITERION_LABEL[c]} predicts no fatigue damage` });
   switch (c) {
     case "goodman":
-      return divide(s.ultimate_MPa, "the ultimate strength", (x) => 1 - x);
+      return m <= 0 ? reversed(a) : ratio(c, a, m, s.ultimate_MPa, "the ultimate strength", 1 - m / s.ultimate_MPa);
     case "gerber":
-      return divide(s.ultimate_MPa, "the ultimate strength", (x) => 1 - x * x);
+      return m <= 0 ? reversed(a) : ratio(c, a, m, s.ultimate_MPa, "the ultimate strength", 1 - (m / s.ultimate_MPa) ** 2);
     case "soderberg":
-      return divide(s.yield_MPa, "the yield strength", (x) => 1 - x);
+      return m <= 0 ? reversed(a) : ratio(c, a, m, s.yield_MPa, "the yield strength", 1 - m / s.yield_MPa);
     case "asme-elliptic":
-      return divide(s.yield_MPa, "the yield strength", (x) => (x < 1 ? Math.sqrt(1 - x * x) : 0));
-    case "morrow": {
-      const f = s.fatigueStrengthCoefficient_MPa;
-      return m >= f ? noAnswer(f, "σ'f") : { sigmaAr: a / (1 - m / f), noDamage: false };
-    }
+      return m <= 0 ? reversed(a) : ratio(c, a, m, s.yield_MPa, "the yield strength", m < s.yield_MPa ? Math.sqrt(1 - (m / s.yield_MPa) ** 2) : 0);
+    case "morrow":
+      return ratio(c, a, m, s.fatigueStrengthCoefficient_MPa, "σ'f", 1 - m / s.fatigueStrengthCoefficient_MPa);
     case "swt":
-      return max <= 0 ? noTension() : { sigmaAr: Math.sqrt(max * a), noDamage: false };
+      return max <= 0 ? noTension(c) : { sigmaAr: Math.sqrt(max * a), noDamage: false };
     case "walker":
-      return max <= 0 ? noTension() : { sigmaAr: max ** (1 - s.walkerGamma) * a ** s.walkerGamma, noDamage: false };
+      return max <= 0 ? noTension(c) : { sigmaAr: max ** (1 - s.walkerGamma) * a ** s.walkerGamma, noDamage: false };
   }
+}
+
+/** Compressive mean under the Shigley four: no credit, σar = σa. */
+function reversed(a: number): Equivalent {
+  return { sigmaAr: a, noDamage: false };
+}
+
+/** σar = σa / denominator, or no answer once the mean reaches the strength the criterion uses. */
+function ratio(c: MeanStressCriterion, a: number, m: number, limit: number, limitName: string, denominator: number): Equivalent {
+  if (denominator > 0) return { sigmaAr: a / denominator, noDamage: false };
+  return { sigmaAr: null, noDamage: false, reason: `the mean stress ${fmt(m)} MPa reaches ${limitName} (${fmt(limit)} MPa), beyond which ${CRITERION_LABEL[c]} has no answer` };
+}
+
+function noTension(c: MeanStressCriterion): Equivalent {
+  return { sigmaAr: 0, noDamage: true, reason: `the cycle never reaches tension, so ${CRITERION_LABEL[c]} predicts no fatigue damage` };
 }
 
 /** The criterion's equation in symbols and with the numbers put in, for the worked step. */

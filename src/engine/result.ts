@@ -8,7 +8,8 @@ export interface CriterionRow {
   equivalentAmplitude_MPa: number | null;
   life_cycles: number | null;
   allowableLife_cycles: number | null;
-  damage: number;
+  /** null where there is no life. */
+  damage: number | null;
   /** "ok" | "no-answer" (mean beyond the criterion's strength) | "no-damage" (never in tension) | "unlimited" */
   status: "ok" | "no-answer" | "no-damage" | "unlimited";
   chosen: boolean;
@@ -72,7 +73,8 @@ export interface CheckResult {
     allowableLife_cycles: number | null;
     designLife_cycles: number;
     scatterFactor: number;
-    damage: number;
+    /** designLife / allowableLife; 0 where the life is unlimited, null where there is no life. */
+    damage: number | null;
     /** "cycles" for a single cycle; "passes" when a history or block spectrum is repeated. */
     lifeCountedIn: "cycles" | "passes";
     modifyingFactor: number;
@@ -117,7 +119,8 @@ export interface CheckResult {
   spectrum?: {
     cycles: SpectrumCycle[];
     totalCycles: number;
-    damagePerPass: number;
+    /** null when beyond what a double holds (no life). */
+    damagePerPass: number | null;
     passesToFailure: number | null;
     historyPoints?: number;
   };

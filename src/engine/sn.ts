@@ -23,7 +23,9 @@ export const VALID_LIFE: readonly [number, number] = [1e3, 1e7];
 export function basquinLife(sigmaAr: number, c: Curve): number | null {
   if (sigmaAr <= 0) return null;
   if (c.enduranceLimit_MPa !== undefined && sigmaAr <= c.enduranceLimit_MPa * c.factor) return null;
-  return 0.5 * (sigmaAr / (c.coefficient_MPa * c.factor)) ** (1 / c.exponent);
+  const life = 0.5 * (sigmaAr / (c.coefficient_MPa * c.factor)) ** (1 / c.exponent);
+  // Past the largest double the life is unlimited for any purpose; Infinity would reach JSON as null unexplained.
+  return Number.isFinite(life) ? life : null;
 }
 
 /** Amplitude the curve allows at N cycles (inverse of basquinLife, ignoring the endurance limit). */

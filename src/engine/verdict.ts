@@ -27,8 +27,8 @@ export function verdictTable(r: CheckResult): { rows: VerdictRow[]; verdict: "pa
         ? `unlimited life against a design life of ${fmt(f.designLife_cycles)} ${unit}`
         : f.life_cycles === 0
           ? "no life: the mean stress is beyond the criterion's range"
-          : `allowable ${fmt(f.allowableLife_cycles ?? 0)} ${unit} against a design life of ${fmt(f.designLife_cycles)} ${unit} (damage ${fmt(f.damage, 3)})`,
-    margin: f.life_cycles === null ? null : f.damage > 0 && Number.isFinite(f.damage) ? 1 / f.damage - 1 : -1,
+          : `allowable ${fmt(f.allowableLife_cycles ?? 0)} ${unit} against a design life of ${fmt(f.designLife_cycles)} ${unit} (damage ${fmt(f.damage ?? Infinity, 3)})`,
+    margin: f.life_cycles === null ? null : f.damage !== null && f.damage > 0 ? 1 / f.damage - 1 : -1,
   });
   if (r.crack) {
     const c = r.crack;
