@@ -1,15 +1,5 @@
-import type { MeanStressCriterion } from "../src/schema/index.ts";
-
-/** Names as the sheet prints them. */
-export const CRITERION_NAMES: Record<MeanStressCriterion, string> = {
-  goodman: "Goodman (modified)",
-  gerber: "Gerber",
-  soderberg: "Soderberg",
-  "asme-elliptic": "ASME elliptic",
-  swt: "Smith–Watson–Topper",
-  morrow: "Morrow",
-  walker: "Walker",
-};
+/** Criterion names as the engine words them, so page, sheet and results read alike. */
+export { CRITERION_LABEL as CRITERION_NAMES } from "../src/engine/meanStress.ts";
 
 export const CUTOUT_NAMES = {
   none: "none: plain skin, Kt = 1",

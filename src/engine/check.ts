@@ -126,19 +126,10 @@ export function runCheck(input: ResolvedCheck): CheckResult {
   if (input.crack) addCrack(result, input, e, load, steps, warnings);
   if (input.evidence) {
     const ev = evaluateEvidence(input.evidence, input.fatigue.designLife_cycles, input.fatigue.scatterFactor);
-    result.evidence = {
-      n: ev.n,
-      logMean: ev.logMean,
-      logStdDev: ev.logStdDev,
-      logStdDevFrom: ev.logStdDevFrom,
-      toleranceFactor: ev.toleranceFactor,
-      lowerBound_cycles: ev.lowerBound_cycles,
-      impliedScatterFactor: ev.impliedScatterFactor,
-      requiredLogStdDev: ev.requiredLogStdDev,
-      supportsDesignLife: ev.supportsDesignLife,
-    };
-    steps.push(...ev.steps);
-    warnings.push(...ev.warnings);
+    const { steps: evidenceSteps, warnings: evidenceWarnings, ...evidence } = ev;
+    result.evidence = evidence;
+    steps.push(...evidenceSteps);
+    warnings.push(...evidenceWarnings);
   }
   const table = verdictTable(result);
   result.verdictTable = table.rows;

@@ -1,4 +1,5 @@
 import type { MeanStressCriterion } from "../schema/check.ts";
+import type { EvidenceResult } from "./evidence.ts";
 import type { Step } from "./step.ts";
 
 /** The result document, format "hoopwise.result/1". Keys listed in the check format never change meaning. */
@@ -96,17 +97,7 @@ export interface CheckResult {
     curve: { a_mm: number; n_cycles: number }[];
     leakBeforeBreak: { leakBeforeBreak: boolean; throughWallHalfLength_mm: number; criticalHalfLength_mm: number } | null;
   };
-  evidence?: {
-    n: number;
-    logMean: number;
-    logStdDev: number | null;
-    logStdDevFrom: "sample" | "assumed" | null;
-    toleranceFactor: number;
-    lowerBound_cycles: number | null;
-    impliedScatterFactor: number | null;
-    requiredLogStdDev: number | null;
-    supportsDesignLife: boolean | null;
-  };
+  evidence?: Omit<EvidenceResult, "steps" | "warnings">;
   materialFit?: {
     fatigueStrengthCoefficient_MPa: number;
     fatigueStrengthExponent: number;

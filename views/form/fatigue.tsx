@@ -1,16 +1,7 @@
+import { CRITERION_LABEL } from "../../src/engine/meanStress.ts";
 import { MEAN_STRESS_CRITERIA } from "../../src/schema/check.ts";
 import { Choice, NumberInput, Panel, Select } from "./controls.tsx";
 import type { FormState } from "./state.ts";
-
-export const CRITERION_NAMES: Record<(typeof MEAN_STRESS_CRITERIA)[number], string> = {
-  goodman: "Goodman",
-  gerber: "Gerber",
-  soderberg: "Soderberg",
-  "asme-elliptic": "ASME elliptic",
-  swt: "Smith–Watson–Topper",
-  morrow: "Morrow",
-  walker: "Walker",
-};
 
 /** Fatigue settings: how mean stress, the notch, the design life and the statistics are treated. */
 export function FatigueSection({ s }: { s: FormState }) {
@@ -24,7 +15,7 @@ export function FatigueSection({ s }: { s: FormState }) {
           label="Mean-stress criterion"
           fallback="goodman"
           hint="All seven are worked side by side in the result; this one decides the verdict."
-          options={MEAN_STRESS_CRITERIA.map((c) => ({ value: c, label: CRITERION_NAMES[c] }))}
+          options={MEAN_STRESS_CRITERIA.map((c) => ({ value: c, label: CRITERION_LABEL[c] }))}
         />
         <div class="when-walker">
           <NumberInput s={s} name="fatigue.walkerGamma" label="Walker exponent γ" placeholder="0.5" />
