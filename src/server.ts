@@ -4,6 +4,7 @@ import { openStore } from "./store/index.ts";
 import { createApp } from "./web/app.ts";
 import { pageRoutes } from "./web/page.tsx";
 import { recordsApi } from "./web/records.ts";
+import { recordsPages } from "./web/recordsPage.tsx";
 import { revisionSheetApi } from "./web/revisionSheet.ts";
 import { sheetApi } from "./web/sheet.ts";
 import { seedDemos } from "./web/seed.ts";
@@ -16,7 +17,7 @@ const host = process.env.HOST ?? "127.0.0.1";
 const port = Number(process.env.PORT ?? 8080);
 const store = openStore();
 const seeded = seedDemos(store);
-const app = createApp({ mounts: [sheetApi(), revisionSheetApi({ store }), recordsApi({ store }), pageRoutes()] });
+const app = createApp({ mounts: [sheetApi(), revisionSheetApi({ store }), recordsApi({ store }), recordsPages({ store }), pageRoutes()] });
 
 const server = serve({ fetch: app.fetch, hostname: host, port }, (info) => {
   if (seeded) console.log(`Saved ${seeded} demo checks in ${process.env.HOOPWISE_DB ?? "data/hoopwise.db"}`);

@@ -30,6 +30,9 @@ export function Page({ title, notice, children }: { title?: string; notice?: str
             <span class="name">Hoopwise</span>
             <span class="tagline">Pressure-cycle fatigue check of a shell skin</span>
           </p>
+          <nav class="nav" aria-label="Hoopwise">
+            <a href="/records">Saved checks</a>
+          </nav>
           <div class="tools">
             <form method="get" action="/" class="tool">
               <label for="demo-pick">Start from an example</label>
@@ -63,8 +66,8 @@ export function Page({ title, notice, children }: { title?: string; notice?: str
         {children}
         <footer class="foot">
           <p>
-            Hoopwise works every check in SI and shows each line with its published source. Nothing you type is stored on the server; the link under
-            the result carries the inputs.
+            Hoopwise works every check in SI and shows each line with its published source. Nothing you type is stored on the server until you save it to
+            the records; the link under the result carries the inputs.
           </p>
         </footer>
       </body>

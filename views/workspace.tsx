@@ -39,7 +39,7 @@ export function Workspace({ s, o }: { s: FormState; o: Outcome }) {
             {o.view ? <VerdictSummary result={o.view.result} /> : null}
           </div>
           <CautionStrip />
-          <OutcomeActions />
+          <OutcomeActions s={s} />
         </div>
         <div id="results">{o.view ? <ResultTop v={o.view} canUsePressure={o.canUsePressure} /> : null}</div>
         <div id="plots">{o.view ? <Plots v={o.view} /> : null}</div>

@@ -1,4 +1,5 @@
 import { deflateRawSync, inflateRawSync } from "node:zlib";
+import { MAX_JSON_DEPTH, tooDeepAt } from "./depth.ts";
 
 /**
  * A link that reproduces a check: the check JSON, deflated (raw DEFLATE, RFC 1951) and written
@@ -7,7 +8,7 @@ import { deflateRawSync, inflateRawSync } from "node:zlib";
  */
 
 /** Longest encoded text accepted from a URL; browsers and proxies start refusing URLs past ~64 KiB. */
-const MAX_LINK_CHARS = 60_000;
+export const MAX_LINK_CHARS = 60_000;
 /** Largest JSON a link may inflate to, so a small hostile link cannot expand into a huge one. */
 const MAX_INFLATED_BYTES = 4 * 1024 * 1024;
 
@@ -27,9 +28,12 @@ export function decodeCheck(encoded: string): Decoded {
   } catch {
     return { ok: false, message: "the link's check could not be unpacked; was it copied in full?" };
   }
+  let value: unknown;
   try {
-    return { ok: true, value: JSON.parse(text) };
+    value = JSON.parse(text);
   } catch {
     return { ok: false, message: "the link's check is not valid JSON; was it copied in full?" };
   }
+  if (tooDeepAt(value) !== undefined) return { ok: false, message: `the link's check nests deeper than ${MAX_JSON_DEPTH} levels, which no check does` };
+  return { ok: true, value };
 }

@@ -14,6 +14,7 @@ import { MAX_JSON_BYTES } from "./api.ts";
 import { sheetResponse } from "./sheet.ts";
 import { assetRoutes } from "./assets.ts";
 import { readForm, readPosted, SPARE_BLOCK_ROWS, valueAt, writeForm, type FormValues, type Posted } from "./form/index.ts";
+import { MAX_JSON_DEPTH, tooDeepAt } from "./depth.ts";
 import { decodeCheck, encodeCheck } from "./link.ts";
 import { unitsFrom, type Units } from "./units.ts";
 
@@ -71,7 +72,8 @@ function work(document: Record<string, unknown>, solve: Posted["solve"], form: {
 function workDocument(doc: unknown, query: Record<string, string | undefined>, solve?: Posted["solve"]): Worked {
   const display = valueAt(doc, "display") as Record<string, unknown> | undefined;
   const units = unitsFrom({ ...display, ...pickDefined(query, ["length", "stress", "pressure", "altitude"]) });
-  const values = writeForm(doc, units);
+  // `record` names the saved check a document was opened from, so saving it adds a revision there.
+  const values = { ...writeForm(doc, units), ...pickDefined(query, ["record"]) };
   const blocks = valueAt(doc, "pressure.blocks");
   const rows = Array.from({ length: Math.max(3, (Array.isArray(blocks) ? blocks.length : 0) + SPARE_BLOCK_ROWS) }, (_, i) => i);
   // The document itself is checked, not the form read back from it, so a link reproduces its numbers exactly.
@@ -83,7 +85,7 @@ function pickDefined(q: Record<string, string | undefined>, keys: string[]): Rec
   return Object.fromEntries(keys.filter((k) => q[k] !== undefined).map((k) => [k, q[k] as string]));
 }
 
-async function fullPage(c: Context, w: Worked, status: 200 | 422, notice?: string) {
+async function fullPage(c: Context, w: Worked, status: 200 | 403 | 404 | 409 | 422, notice?: string) {
   const title = w.state.values.title;
   const page = (
     <Page title={title} notice={notice}>
@@ -91,6 +93,17 @@ async function fullPage(c: Context, w: Worked, status: 200 | 422, notice?: strin
     </Page>
   );
   return c.html(`<!doctype html>${await page.toString()}`, status);
+}
+
+/**
+ * The checker page for a posted form that another route (saving to the records) did not act on:
+ * the reason as a notice, and that route's own messages beside the fields they are about.
+ */
+export async function showPosted(c: Context, posted: Posted, notice: string, status: 403 | 404 | 409 | 422 = 422, beside: Record<string, string[]> = {}) {
+  const w = work(posted.document, undefined, posted);
+  const errors = new Map(w.state.errors);
+  for (const [name, messages] of Object.entries(beside)) errors.set(name, [...(errors.get(name) ?? []), ...messages]);
+  return fullPage(c, { ...w, state: { ...w.state, errors } }, status, notice);
 }
 
 /** GET / and GET /recalc: a link (`?c=`), an example (`?demo=`), or the cabin example on a first visit. */
@@ -193,6 +206,7 @@ export function pageRoutes(): Hono {
     } catch (err) {
       return retry(`“${file.name}” is not valid JSON (${(err as Error).message}).`);
     }
+    if (tooDeepAt(doc) !== undefined) return retry(`“${file.name}” nests deeper than ${MAX_JSON_DEPTH} levels, which no check does.`);
     const w = workDocument(doc, {});
     return fullPage(c, w, w.outcome.view ? 200 : 422, w.outcome.view ? undefined : `“${file.name}” was opened, but it needs correcting before it can be worked out.`);
   });

@@ -24,7 +24,7 @@ export function recordsErrorResponse(err: Error, c: Context): Response {
   return c.json(errorsDoc("(server)", "the server met an unexpected problem; nothing saved was lost — please report it"), 500);
 }
 
-function statusOf(err: RecordError): 403 | 404 | 409 | 422 {
+export function statusOf(err: RecordError): 403 | 404 | 409 | 422 {
   if (err instanceof RecordNotFoundError) return 404;
   if (err instanceof WrongPassphraseError) return 403;
   if (err instanceof RecordConflictError || err instanceof SignOffRefusedError) return 409;
@@ -32,7 +32,7 @@ function statusOf(err: RecordError): 403 | 404 | 409 | 422 {
   throw new Error(`no HTTP status for ${err.name}`);
 }
 
-function isDatabaseBusy(err: Error): boolean {
+export function isDatabaseBusy(err: Error): boolean {
   const code = (err as { code?: unknown }).code;
   return code === "SQLITE_BUSY" || code === "SQLITE_LOCKED";
 }

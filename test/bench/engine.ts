@@ -31,6 +31,31 @@ export function engineBench() {
   return { fullCheck_ms: full, demos_ms: demos, thicknessSolveEvaluations: evaluations };
 }
 
+/** Worst case for counting: every point is a fresh random level, so two points in three reverse. */
+function randomHistory(points: number): Float64Array {
+  const h = new Float64Array(points);
+  let seed = 12345;
+  const rand = () => ((seed = (seed * 1103515245 + 12345) & 0x7fffffff) / 0x7fffffff);
+  for (let i = 0; i < points; i++) h[i] = Math.round((0.4 + 0.6 * rand()) * 1000) / 1000;
+  return h;
+}
+
+/**
+ * A recorded-looking cabin history: 500-point flights (climb, cruise with a small ripple, descent)
+ * sampled finely, as a pressure logger would, so reversals are few beside the points.
+ */
+function flightHistory(points: number): Float64Array {
+  const h = new Float64Array(points);
+  for (let i = 0; i < points; i++) {
+    const k = i % 500;
+    const flight = Math.floor(i / 500);
+    const top = 0.055 + 0.004 * Math.sin(flight * 1.7);
+    const level = k < 100 ? (top * k) / 100 : k < 400 ? top + 0.0008 * Math.sin(k / 7) : (top * (500 - k)) / 100;
+    h[i] = Math.round(level * 1e5) / 1e5;
+  }
+  return h;
+}
+
 /** Peak resident memory of this process so far (Linux /proc), in bytes. */
 function highWater_bytes(): number {
   const m = /VmHWM:\s+(\d+) kB/.exec(readFileSync("/proc/self/status", "utf8"));
@@ -42,11 +67,8 @@ function highWater_bytes(): number {
  * The engine's path: counting into the range–mean matrix, then Miner over its cells. The history is a seeded random sequence with pressure-like levels; peak memory is the growth of
  * heap plus array buffers over the input's own bytes (run with --expose-gc for a clean baseline).
  */
-export function rainflowBench(points = 1_000_000) {
-  const history = new Float64Array(points);
-  let seed = 12345;
-  const rand = () => ((seed = (seed * 1103515245 + 12345) & 0x7fffffff) / 0x7fffffff);
-  for (let i = 0; i < points; i++) history[i] = Math.round((0.4 + 0.6 * rand()) * 1000) / 1000;
+export function rainflowBench(points = 1_000_000, shape: "random" | "flights" = "random") {
+  const history = shape === "random" ? randomHistory(points) : flightHistory(points);
   const curve = { coefficient_MPa: 900, exponent: -0.102, factor: 1 };
   const perMPa = 150;
   let checksum = 0;
@@ -67,7 +89,7 @@ export function rainflowBench(points = 1_000_000) {
       return basquinLife(a / (1 - m / 470), curve);
     });
     checksum += d.damagePerPass;
-  }, 5, 1);
+  }, 7, 3);
   const peak = highWater_bytes() - before;
   return {
     points,

@@ -107,5 +107,6 @@ export const CHOICE_FIELDS = [
 /** Every error slot the form shows for these block rows: a recalculation refreshes each, so an error put right disappears. */
 export function errorSlotNames(rows: readonly number[]): string[] {
   const cells = rows.flatMap((r) => (Object.keys(BLOCK_COLUMNS) as BlockColumn[]).map((c) => blockField(r, c)));
-  return [...TEXT_FIELDS, ...CHOICE_FIELDS, ...Object.keys(NUMBER_FIELDS), "blocks", ...cells];
+  // "savedBy" sits with the save button, outside the form but posted with it.
+  return [...TEXT_FIELDS, ...CHOICE_FIELDS, ...Object.keys(NUMBER_FIELDS), "blocks", "savedBy", ...cells];
 }

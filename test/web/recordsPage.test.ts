@@ -1,0 +1,296 @@
+import { describe, expect, it } from "vitest";
+import { findDemo } from "../../src/demo/index.ts";
+import { validateCheckDocument } from "../../src/store/check-validator.ts";
+import { createApp } from "../../src/web/app.ts";
+import { unitsFrom, unitsKey } from "../../src/web/units.ts";
+import { writeForm } from "../../src/web/form/index.ts";
+import { pageRoutes } from "../../src/web/page.tsx";
+import { recordsApi } from "../../src/web/records.ts";
+import { recordsPages } from "../../src/web/recordsPage.tsx";
+import { seedDemos } from "../../src/web/seed.ts";
+import { testStore } from "../store/helpers.ts";
+
+/** Invented people; their passphrases must never come back in any answer. */
+const MIRA = { name: "Mira Castellanos-Ode", passphrase: "lantern over the saltmarsh" };
+const TEO = { name: "Teo Vantongeren", passphrase: "blue heron at low tide" };
+const SECRETS = [MIRA.passphrase, TEO.passphrase, "wrong but long enough"];
+
+const cabin = findDemo("cabin")!.document;
+
+/** The fields a browser posts for the cabin example as the checker shows it. */
+function cabinForm(changes: Record<string, string> = {}): Record<string, string> {
+  const units = unitsFrom(cabin.display);
+  return {
+    ...writeForm(cabin, units),
+    "units.shown": unitsKey(units),
+    "units.length": units.length,
+    "units.stress": units.stress,
+    "units.pressure": units.pressure,
+    "units.altitude": units.altitude,
+    "material.shown": cabin.material.id ?? "",
+    ...changes,
+  };
+}
+
+/** The records pages over a fresh database with the real check validator; every body read is kept for the passphrase sweep. */
+function site(seed = false) {
+  const store = testStore({ validate: validateCheckDocument });
+  if (seed) seedDemos(store);
+  const app = createApp({ mounts: [recordsApi({ store }), recordsPages({ store }), pageRoutes()] });
+  const bodies: string[] = [];
+  const request = async (path: string, init?: RequestInit) => {
+    const res = await app.request(path, { redirect: "manual", ...init });
+    const html = await res.text();
+    bodies.push(html, res.headers.get("location") ?? "");
+    return { status: res.status, location: res.headers.get("location") ?? "", html };
+  };
+  const get = (path: string) => request(path);
+  const post = (path: string, fields: Record<string, string>) => request(path, { method: "POST", body: new URLSearchParams(fields) });
+  return { store, get, post, bodies };
+}
+
+type Site = ReturnType<typeof site>;
+
+/** The text of the element with this id (no nested elements). */
+function textOf(html: string, id: string): string | undefined {
+  return new RegExp(`id="${id}"[^>]*>([^<]*)<`).exec(html)?.[1];
+}
+
+/** The state badge of revision n on a check page. */
+function stateOf(html: string, n: number): string | undefined {
+  return new RegExp(`<tr id="revision-${n}"[^>]*data-state="([a-z]+)"`).exec(html)?.[1];
+}
+
+async function saveCabin(s: Site, changes: Record<string, string> = {}) {
+  const res = await s.post("/records/save", cabinForm(changes));
+  expect(res.status).toBe(303);
+  return { ...res, id: /^\/records\/([^?]+)\?/.exec(res.location)![1] };
+}
+
+async function register(s: Site, person: { name: string; passphrase: string }) {
+  const res = await s.post("/records/signers", { name: person.name, passphrase: person.passphrase, again: person.passphrase });
+  expect(res.status).toBe(303);
+}
+
+const sign = (s: Site, id: string, revision: number, role: string, who: { name: string; passphrase: string }) =>
+  s.post(`/records/${id}/sign`, { revision: String(revision), role, name: who.name, passphrase: who.passphrase });
+
+describe("the list of saved checks", () => {
+  it("lists the seeded checks with their number, title, latest revision and state, under the caution", async () => {
+    const s = site(true);
+    const { status, html } = await s.get("/records");
+    expect(status).toBe(200);
+    for (const c of s.store.listChecks()) {
+      const row = new RegExp(`<tr data-check="${c.id}">[\\s\\S]*?</tr>`).exec(html)?.[0] ?? "";
+      expect(row).toContain(`href="/records/${c.id}"`);
+      expect(row).toContain(c.calcNumber);
+      expect(row).toContain(c.title);
+      expect(row).toMatch(/<td class="num">1<\/td>/);
+      expect(row).toContain('data-state="draft"');
+      expect(row).toContain(`/api/v1/checks/${c.id}/revisions/1/sheet`);
+    }
+    expect(s.store.listChecks().map((c) => c.calcNumber).sort()).toEqual(["AR500-SHELL-003", "L30-FUS-017"]);
+    expect(html).toContain("not a code-compliance certificate");
+    expect(html).toContain("licensed or authorized engineer");
+    expect(html).not.toMatch(/\sstyle="|<script(?![^>]*\ssrc=)/);
+  });
+
+  it("answers an unknown check with a 404 page, not a server error", async () => {
+    const s = site();
+    const res = await s.get("/records/no-such-check");
+    expect(res.status).toBe(404);
+    expect(res.html).toContain("no saved check has the id &quot;no-such-check&quot;");
+    expect(res.html).toContain("not a code-compliance certificate");
+  });
+});
+
+describe("saving from the checker", () => {
+  it("saves revision 1, then a changed thickness as revision 2 that supersedes it; an unchanged input saves nothing", async () => {
+    const s = site();
+    const first = await saveCabin(s, { savedBy: "Mira Castellanos-Ode" });
+    expect(first.location).toBe(`/records/${first.id}?saved=1`);
+    const page1 = await s.get(first.location);
+    expect(page1.html).toContain("Saved as revision 1");
+    expect(page1.html).toContain("L30-FUS-017");
+    expect(stateOf(page1.html, 1)).toBe("draft");
+    expect(s.store.getCheck(first.id).revisions[0].savedBy).toBe("Mira Castellanos-Ode");
+
+    // Opened from the records, the checker carries the check's id, so saving adds a revision to it.
+    const open = await s.get(`/records/${first.id}/revisions/1/open`);
+    expect(open.status).toBe(303);
+    expect(open.location).toMatch(new RegExp(`^/\\?c=[A-Za-z0-9_-]+&record=${first.id}$`));
+    const checker = await s.get(open.location);
+    expect(checker.html).toContain(`name="record" value="${first.id}"`);
+    expect(checker.html).toContain("Save as a new revision");
+
+    const second = await saveCabin(s, { record: first.id, "shell.thickness": "1.2" });
+    expect(second.location).toBe(`/records/${first.id}?saved=2`);
+    const page2 = await s.get(second.location);
+    expect(page2.html).toContain("Saved as revision 2");
+    expect(stateOf(page2.html, 1)).toBe("superseded");
+    expect(stateOf(page2.html, 2)).toBe("draft");
+    expect(page2.html).toMatch(/Superseded<\/strong> revision 1 by revision 2/);
+
+    const input = await s.get(`/records/${first.id}/revisions/2/input`);
+    expect(input.status).toBe(200);
+    expect(JSON.parse(input.html)).toEqual(s.store.getCheck(first.id).revisions[1].input);
+    expect((await s.get(`/records/${first.id}/revisions/x/input`)).status).toBe(404);
+
+    const again = await saveCabin(s, { record: first.id, "shell.thickness": "1.2" });
+    expect(again.location).toBe(`/records/${first.id}?unchanged=2`);
+    expect((await s.get(again.location)).html).toContain("Nothing changed since revision 2");
+    expect(s.store.getCheck(first.id).revisions).toHaveLength(2);
+  });
+
+  it("asks before saving onto a calculation number already in the records, and saves the revision once confirmed", async () => {
+    const s = site(true);
+    const existing = s.store.listChecks().find((c) => c.calcNumber === "L30-FUS-017")!;
+    const ask = await s.post("/records/save", cabinForm({ "shell.thickness": "1.1" }));
+    expect(ask.status).toBe(409);
+    expect(ask.html).toContain("Save as revision 2 of L30-FUS-017");
+    expect(s.store.getCheck(existing.id).revisions).toHaveLength(1);
+    const document = /name="document" value="([^"]*)"/.exec(ask.html)![1].replace(/&quot;/g, '"').replace(/&amp;/g, "&");
+    const done = await s.post(`/records/${existing.id}/revisions`, { document });
+    expect(done.location).toBe(`/records/${existing.id}?saved=2`);
+    expect((s.store.getCheck(existing.id).revisions[1].input as { shell: { thickness_mm: number } }).shell.thickness_mm).toBeCloseTo(1.1, 12);
+  });
+
+  it("sends a check with mistakes back to the checker with the message beside the field, and saves nothing", async () => {
+    const s = site();
+    const res = await s.post("/records/save", cabinForm({ "shell.thickness": "abc" }));
+    expect(res.status).toBe(422);
+    expect(res.html).toContain("Not saved: correct the marked fields first.");
+    expect(textOf(res.html, "e-shell-thickness")).toBe("the wall thickness must be a number");
+    expect(s.store.listChecks()).toEqual([]);
+  });
+
+  it("answers a save onto a check that does not exist with the checker and the reason, and a 404 page for a confirmed one", async () => {
+    const s = site();
+    const res = await s.post("/records/save", cabinForm({ record: "gone-check" }));
+    expect(res.status).toBe(404);
+    expect(res.html).toContain("Not saved: no saved check has the id &quot;gone-check&quot;");
+    expect(res.html).toContain('name="shell.thickness" value="1"');
+    const confirmed = await s.post("/records/gone-check/revisions", { document: JSON.stringify(cabin) });
+    expect(confirmed.status).toBe(404);
+    expect(confirmed.html).toContain("<h1>Not found</h1>");
+    expect(s.store.listChecks()).toEqual([]);
+  });
+
+  it("puts a refused saver's name beside its field and keeps the checker's input", async () => {
+    const s = site();
+    const res = await s.post("/records/save", cabinForm({ savedBy: "x".repeat(101), "shell.thickness": "1.3" }));
+    expect(res.status).toBe(422);
+    expect(textOf(res.html, "e-savedBy")).toBe("must be at most 100 characters");
+    expect(res.html).toContain('name="shell.thickness" value="1.3"');
+    expect(s.store.listChecks()).toEqual([]);
+  });
+});
+
+describe("people who sign, and signing", () => {
+  it("registers a signer, refusing mismatched, short and taken passphrases and names beside the field", async () => {
+    const s = site();
+    const mismatch = await s.post("/records/signers", { name: MIRA.name, passphrase: MIRA.passphrase, again: TEO.passphrase });
+    expect(mismatch.status).toBe(422);
+    expect(textOf(mismatch.html, "signer-again-error")).toMatch(/does not match/);
+    expect(mismatch.html).toContain(`value="${MIRA.name}"`);
+    const short = await s.post("/records/signers", { name: TEO.name, passphrase: "short", again: "short" });
+    expect(textOf(short.html, "signer-passphrase-error")).toBe("must be at least 12 characters");
+    await register(s, MIRA);
+    const list = await s.get("/records/signers?added=" + encodeURIComponent(MIRA.name));
+    expect(list.html).toContain(`${MIRA.name} is registered and can now sign.`);
+    const taken = await s.post("/records/signers", { name: MIRA.name.toUpperCase(), passphrase: TEO.passphrase, again: TEO.passphrase });
+    expect(taken.status).toBe(409);
+    expect(textOf(taken.html, "signer-name-error")).toMatch(/already registered/);
+    expect(s.store.listSigners().map((p) => p.name)).toEqual([MIRA.name]);
+    for (const secret of [...SECRETS, "short"]) for (const body of s.bodies) expect(body).not.toContain(secret);
+  });
+
+  it("signs prepared, checked and approved by two people; refuses the four-eyes breach and a wrong passphrase beside the field", async () => {
+    const s = site();
+    const { id } = await saveCabin(s);
+    const second = await saveCabin(s, { record: id, "shell.thickness": "1.2" });
+    expect(second.location).toContain("saved=2");
+    await register(s, MIRA);
+    await register(s, TEO);
+
+    const prepared = await sign(s, id, 2, "prepared", MIRA);
+    expect(prepared).toMatchObject({ status: 303, location: `/records/${id}?signed=2&role=prepared` });
+    expect((await s.get(prepared.location)).html).toContain(`Revision 2 signed as prepared by ${MIRA.name}.`);
+
+    const fourEyes = await sign(s, id, 2, "checked", MIRA);
+    expect(fourEyes.status).toBe(409);
+    expect(textOf(fourEyes.html, "sign-name-error")).toContain("may not also check it (four-eyes rule)");
+    expect(fourEyes.html).toContain("Not signed");
+
+    const wrong = await sign(s, id, 2, "checked", { name: TEO.name, passphrase: "wrong but long enough" });
+    expect(wrong.status).toBe(403);
+    expect(textOf(wrong.html, "sign-passphrase-error")).toContain("is not the one registered");
+    // The choices come back; the passphrase field is always empty.
+    expect(wrong.html).toMatch(/<option value="checked" selected/);
+    expect(wrong.html).toMatch(/<input type="password" id="sign-passphrase" name="passphrase" autocomplete="current-password" required=""/);
+
+    const outOfOrder = await sign(s, id, 1, "approved", TEO);
+    expect(outOfOrder.status).toBe(409);
+    expect(textOf(outOfOrder.html, "sign-revision-error")).toContain("superseded by revision 2");
+
+    expect((await sign(s, id, 2, "checked", TEO)).status).toBe(303);
+    expect((await sign(s, id, 2, "approved", MIRA)).status).toBe(303);
+
+    const page = await s.get(`/records/${id}`);
+    expect(stateOf(page.html, 2)).toBe("approved");
+    expect(stateOf(page.html, 1)).toBe("superseded");
+    expect(page.html).toContain("Revision 2 is approved");
+    expect(page.html).not.toContain('action="/records/' + id + '/sign"');
+    const log = /<ol class="log">([\s\S]*?)<\/ol>/.exec(page.html)![1];
+    expect(log.match(/<strong>Signed<\/strong>/g)).toHaveLength(3);
+    for (const secret of SECRETS) for (const body of s.bodies) expect(body).not.toContain(secret);
+  });
+});
+
+describe("comparing two revisions", () => {
+  it("lists shell.thickness_mm as changed, with its unit, and marks the life as changed", async () => {
+    const s = site();
+    const { id } = await saveCabin(s);
+    await saveCabin(s, { record: id, "shell.thickness": "1.2" });
+    const { status, html } = await s.get(`/records/${id}/compare?from=1&to=2`);
+    expect(status).toBe(200);
+    const thickness = /<tr class="diff-(\w+)" data-path="shell\.thickness_mm">([\s\S]*?)<\/tr>/.exec(html);
+    expect(thickness?.[1]).toBe("changed");
+    expect(thickness?.[2]).toMatch(/<td>mm<\/td><td class="before">1<\/td><td class="after">1\.2<\/td>/);
+    // Only the thickness was changed in the form.
+    expect(html.match(/data-path=/g)).toHaveLength(1);
+    const life = /<tr class="(diff-changed|same)" data-figure="life">([\s\S]*?)<\/tr>/.exec(html);
+    expect(life?.[1]).toBe("diff-changed");
+    // A thicker skin carries less stress per cycle: the life rises, and the change says so.
+    expect(life?.[2]).toMatch(/<td class="change">\+[0-9., ]+%<\/td>/);
+    expect(/<tr class="(diff-changed|same)" data-figure="hoop">/.exec(html)?.[1]).toBe("diff-changed");
+    expect(/<tr class="(diff-changed|same)" data-figure="kt">/.exec(html)?.[1]).toBe("same");
+    expect(html).toContain("not a code-compliance certificate");
+  });
+
+  it("says beside the field when a revision asked for does not exist", async () => {
+    const s = site();
+    const { id } = await saveCabin(s);
+    const res = await s.get(`/records/${id}/compare?from=1&to=7`);
+    expect(res.status).toBe(422);
+    expect(textOf(res.html, "cmp-to-error")).toBe("there is no revision “7”; this check has revisions 1 to 1");
+  });
+});
+
+describe("hostile text", () => {
+  it("escapes a hostile title and signer name wherever they are shown", async () => {
+    const s = site();
+    const hostile = `<script>alert("t")</script><img src=x onerror=alert(1)>`;
+    const { id } = await saveCabin(s, { title: hostile });
+    await saveCabin(s, { record: id, "shell.thickness": "1.2" });
+    await register(s, { name: hostile.slice(0, 90), passphrase: MIRA.passphrase });
+    const added = `/records/signers?added=${encodeURIComponent(hostile.slice(0, 90))}`;
+    for (const path of ["/records", `/records/${id}`, `/records/${id}/compare`, "/records/signers", added]) {
+      const { html } = await s.get(path);
+      expect(html, path).not.toContain("<script>alert");
+      expect(html, path).not.toContain("<img src=x");
+      expect(html, path).not.toMatch(/\sstyle="|<script(?![^>]*\ssrc=)|\son[a-z]+="/);
+    }
+    expect((await s.get("/records")).html).toContain("&lt;script&gt;alert(");
+  });
+});
