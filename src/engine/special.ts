@@ -296,7 +296,8 @@ export function noncentralTCdf(t: number, df: number, delta: number): number {
   if (t === -Infinity) return 0;
   const halfNu = 0.5 * df;
   const logNorm = Math.LN2 + halfNu * Math.log(halfNu) - lnGamma(halfNu);
-  const logDensity = (s: number) => logNorm + (df - 1) * Math.log(s) - 0.5 * df * s * s;
+  // s^(ν−1) is 1 for ν = 1, s = 0 included (0·log 0 would be NaN where a break lands a panel on s = 0).
+  const logDensity = (s: number) => logNorm + (df === 1 ? 0 : (df - 1) * Math.log(s)) - 0.5 * df * s * s;
   // f_S peaks at √((ν−1)/ν); for ν = 1 (the half-normal) it peaks at s = 0 with value e^logNorm.
   const mode = Math.sqrt((df - 1) / df);
   const cutoff = (df > 1 ? logDensity(mode) : logNorm) - 60;

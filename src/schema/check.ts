@@ -7,12 +7,37 @@ import { z } from "zod";
  */
 
 const num = (what: string) => z.number({ error: `${what} must be a number` });
-const positive = (what: string, max: number) =>
-  num(what).positive({ error: `${what} must be greater than 0` }).max(max, { error: `${what} must be at most ${max}` });
+
+/**
+ * Smallest magnitudes the check takes. No real shell, material or test comes near them; below
+ * them a value only drives the arithmetic into underflow (a crack that cannot grow, a life of
+ * 10^400 cycles), and the answer would be noise or no number at all.
+ */
+const FLOORS = {
+  length: { min: 0.001, words: "0.001 mm (1 µm)" },
+  strength: { min: 1, words: "1 MPa" },
+  toughness: { min: 0.1, words: "0.1 MPa·√m" },
+  parisC: { min: 1e-20, words: "1e-20 (da/dN in m/cycle, ΔK in MPa·√m)" },
+  cycles: { min: 1, words: "1 cycle" },
+  blockCycles: { min: 0.001, words: "0.001 cycles" },
+  pressure_MPa: 1e-6,
+} as const;
+type Floor = { min: number; words: string };
+
+/** Above zero and at most `max`; with a floor, also at least that (zero and below keep the plainer message). */
+const positive = (what: string, max: number, floor?: Floor) => {
+  const p = num(what).positive({ error: `${what} must be greater than 0` }).max(max, { error: `${what} must be at most ${max}` });
+  return floor ? p.refine((x) => x <= 0 || x >= floor.min, { error: `${what} must be at least ${floor.words}` }) : p;
+};
+/** A probability for a lower bound: below one half it would bound the better half of the items, not the weaker. */
 const fraction = (what: string) =>
   num(what)
     .gt(0, { error: `${what} must be between 0 and 1 (exclusive)` })
-    .lt(1, { error: `${what} must be between 0 and 1 (exclusive)` });
+    .lt(1, { error: `${what} must be between 0 and 1 (exclusive)` })
+    .refine((x) => x <= 0 || x >= 0.5, { error: `${what} must be at least 0.5 for a lower bound on life` });
+/** A stress or pressure of either sign, within what any shell sees. */
+const signedStress = (what: string) =>
+  num(what).min(-1e4, { error: `${what} must be at least −10 000 MPa` }).max(1e4, { error: `${what} must be at most 10 000 MPa` });
 const text = (what: string, max: number) => z.string({ error: `${what} must be text` }).max(max, { error: `${what} must be at most ${max} characters` });
 
 export const MEAN_STRESS_CRITERIA = ["goodman", "gerber", "soderberg", "asme-elliptic", "swt", "morrow", "walker"] as const;
@@ -22,9 +47,9 @@ export const MATERIAL_FAMILIES = ["aluminium", "steel", "stainless", "titanium",
 export const shellSchema = z
   .strictObject({
     form: z.enum(["cylinder", "sphere"], { error: 'shell form must be "cylinder" or "sphere"' }),
-    radius_mm: positive("the radius", 1e5).describe("Shell radius in mm, measured where radiusAt says"),
+    radius_mm: positive("the radius", 1e5, FLOORS.length).describe("Shell radius in mm, measured where radiusAt says"),
     radiusAt: z.enum(["inner", "mean", "outer"], { error: 'radiusAt must be "inner", "mean" or "outer"' }).default("mean"),
-    thickness_mm: positive("the wall thickness", 1e4).describe("Skin or wall thickness in mm"),
+    thickness_mm: positive("the wall thickness", 1e4, FLOORS.length).describe("Skin or wall thickness in mm"),
     theory: z
       .enum(["auto", "thin", "thick"], { error: 'theory must be "auto", "thin" or "thick"' })
       .default("auto")
@@ -58,9 +83,9 @@ const altitudeSchema = z
 
 const blockSchema = z
   .strictObject({
-    max_MPa: num("the block's maximum pressure").max(1e4, { error: "the block's maximum pressure must be at most 10 000 MPa" }),
-    min_MPa: num("the block's minimum pressure").default(0),
-    cycles: positive("the block's cycle count", 1e12),
+    max_MPa: signedStress("the block's maximum pressure"),
+    min_MPa: signedStress("the block's minimum pressure").default(0),
+    cycles: positive("the block's cycle count", 1e12, FLOORS.blockCycles),
   })
   .superRefine((b, ctx) => {
     if (b.min_MPa > b.max_MPa) ctx.addIssue({ code: "custom", path: ["min_MPa"], message: "the block's minimum pressure must not exceed its maximum" });
@@ -68,10 +93,10 @@ const blockSchema = z
 
 export const pressureSchema = z
   .strictObject({
-    max_MPa: num("the maximum pressure").max(1e4, { error: "the maximum pressure must be at most 10 000 MPa" }).optional(),
-    min_MPa: num("the minimum pressure").optional(),
+    max_MPa: signedStress("the maximum pressure").optional(),
+    min_MPa: signedStress("the minimum pressure").optional(),
     fromAltitude: altitudeSchema.optional(),
-    history_MPa: z.array(num("each pressure in the history"), { error: "the pressure history must be a list of numbers" }).max(5_000_000, {
+    history_MPa: z.array(signedStress("each pressure in the history"), { error: "the pressure history must be a list of numbers" }).max(5_000_000, {
       error: "the pressure history may hold at most 5 000 000 points",
     }).optional(),
     blocks: z.array(blockSchema, { error: "the blocks must be a list" }).min(1, { error: "give at least one block" }).max(10000, {
@@ -94,6 +119,8 @@ export const pressureSchema = z
         path: ["max_MPa"],
         message: "the maximum pressure must be greater than 0 (inside above outside); an outside pressure needs a buckling check, which this tool does not make",
       });
+    } else if (p.max_MPa !== undefined && p.max_MPa < FLOORS.pressure_MPa) {
+      ctx.addIssue({ code: "custom", path: ["max_MPa"], message: `the maximum pressure must be at least ${FLOORS.pressure_MPa} MPa (1 Pa)` });
     }
     const top = p.max_MPa ?? Infinity;
     if (p.min_MPa !== undefined && p.min_MPa > top) ctx.addIssue({ code: "custom", path: ["min_MPa"], message: "the minimum pressure must not exceed the maximum" });
@@ -103,11 +130,16 @@ export const pressureSchema = z
     if (p.history_MPa && p.history_MPa.length < 2) {
       ctx.addIssue({ code: "custom", path: ["history_MPa"], message: "the pressure history needs at least two points to make a cycle" });
     }
-    if (p.history_MPa && p.history_MPa.length >= 2 && Math.max(...sampleMax(p.history_MPa)) <= 0) {
+    const historyTop = p.history_MPa && p.history_MPa.length >= 2 ? Math.max(...sampleMax(p.history_MPa)) : undefined;
+    if (historyTop !== undefined && historyTop <= 0) {
       ctx.addIssue({ code: "custom", path: ["history_MPa"], message: "the pressure history never rises above 0: the shell is never pressurized" });
+    } else if (historyTop !== undefined && historyTop < FLOORS.pressure_MPa) {
+      ctx.addIssue({ code: "custom", path: ["history_MPa"], message: `the pressure history never reaches ${FLOORS.pressure_MPa} MPa (1 Pa): the shell is hardly pressurized` });
     }
     if (p.blocks && p.blocks.every((b) => b.max_MPa <= 0)) {
       ctx.addIssue({ code: "custom", path: ["blocks"], message: "no block rises above 0 MPa: the shell is never pressurized" });
+    } else if (p.blocks && p.blocks.every((b) => b.max_MPa < FLOORS.pressure_MPa)) {
+      ctx.addIssue({ code: "custom", path: ["blocks"], message: `no block reaches ${FLOORS.pressure_MPa} MPa (1 Pa): the shell is hardly pressurized` });
     }
   });
 
@@ -124,17 +156,17 @@ export const cutoutSchema = z.discriminatedUnion(
     z.strictObject({ kind: z.literal("none") }),
     z.strictObject({
       kind: z.literal("circular-hole"),
-      radius_mm: positive("the hole radius", 1e4).optional().describe("Needed only for notch sensitivity from the root radius"),
+      radius_mm: positive("the hole radius", 1e4, FLOORS.length).optional().describe("Needed only for notch sensitivity from the root radius"),
     }),
     z.strictObject({
       kind: z.literal("elliptical-hole"),
-      halfAxisAlongHoop_mm: positive("the half-axis along the hoop direction", 1e4),
-      halfAxisAlongAxial_mm: positive("the half-axis along the axial direction", 1e4),
+      halfAxisAlongHoop_mm: positive("the half-axis along the hoop direction", 1e4, FLOORS.length),
+      halfAxisAlongAxial_mm: positive("the half-axis along the axial direction", 1e4, FLOORS.length),
     }),
     z.strictObject({
       kind: z.literal("given"),
       kt: num("Kt").min(1, { error: "Kt must be at least 1" }).max(20, { error: "Kt must be at most 20" }),
-      rootRadius_mm: positive("the notch root radius", 1e4).optional(),
+      rootRadius_mm: positive("the notch root radius", 1e4, FLOORS.length).optional(),
       basis: text("the basis of Kt", 500).optional().describe("Where the given Kt comes from (chart, FE model, test)"),
     }),
   ],
@@ -142,8 +174,8 @@ export const cutoutSchema = z.discriminatedUnion(
 );
 
 const couponSchema = z.strictObject({
-  amplitude_MPa: positive("the coupon stress amplitude", 1e4),
-  life_cycles: positive("the coupon life", 1e12),
+  amplitude_MPa: positive("the coupon stress amplitude", 1e4, FLOORS.strength),
+  life_cycles: positive("the coupon life", 1e12, FLOORS.cycles),
   runout: z.boolean({ error: "runout must be true or false" }).default(false),
 });
 
@@ -151,17 +183,18 @@ export const materialSchema = z.strictObject({
   id: text("the material id", 100).optional().describe("A library material; values given beside it override the library's"),
   name: text("the material name", 200).optional(),
   family: z.enum(MATERIAL_FAMILIES, { error: `family must be one of ${MATERIAL_FAMILIES.join(", ")}` }).optional(),
-  ultimate_MPa: positive("the ultimate strength", 1e4).optional(),
-  yield_MPa: positive("the yield strength", 1e4).optional(),
-  modulus_MPa: positive("the elastic modulus", 1e7).optional(),
-  fatigueStrengthCoefficient_MPa: positive("the fatigue strength coefficient σ'f", 1e5).optional(),
+  ultimate_MPa: positive("the ultimate strength", 1e4, FLOORS.strength).optional(),
+  yield_MPa: positive("the yield strength", 1e4, FLOORS.strength).optional(),
+  modulus_MPa: positive("the elastic modulus", 1e7, FLOORS.strength).optional(),
+  fatigueStrengthCoefficient_MPa: positive("the fatigue strength coefficient σ'f", 1e5, FLOORS.strength).optional(),
   fatigueStrengthExponent: num("the Basquin exponent b")
     .lt(0, { error: "the Basquin exponent b must be negative (strength falls as life rises); typical values lie between −0.05 and −0.15" })
     .gt(-1, { error: "the Basquin exponent b must be above −1" })
+    .refine((b) => b >= 0 || b <= -0.01, { error: "the Basquin exponent b must be −0.01 or below; typical values lie between −0.05 and −0.15" })
     .optional(),
-  enduranceLimit_MPa: positive("the endurance limit", 1e4).optional(),
-  toughness_MPaSqrtM: positive("the fracture toughness", 1e4).optional(),
-  parisC: positive("the Paris coefficient C", 1).optional(),
+  enduranceLimit_MPa: positive("the endurance limit", 1e4, FLOORS.strength).optional(),
+  toughness_MPaSqrtM: positive("the fracture toughness", 1e4, FLOORS.toughness).optional(),
+  parisC: positive("the Paris coefficient C", 1, FLOORS.parisC).optional(),
   parisM: num("the Paris exponent m").min(1, { error: "the Paris exponent m must be between 1 and 10" }).max(10, { error: "the Paris exponent m must be between 1 and 10" }).optional(),
   coupons: z.array(couponSchema, { error: "coupons must be a list" }).max(10000, { error: "at most 10 000 coupons" }).optional(),
   source: text("the material source", 500).optional(),
@@ -173,10 +206,10 @@ export const fatigueSchema = z
     walkerGamma: num("the Walker exponent γ").gt(0, { error: "the Walker exponent γ must be above 0" }).max(1, { error: "the Walker exponent γ must be at most 1" }).default(0.5),
     notchSensitivity: num("the notch sensitivity q").min(0, { error: "the notch sensitivity q must be between 0 and 1" }).max(1, { error: "the notch sensitivity q must be between 0 and 1" }).optional(),
     notchConstant: z.enum(["peterson", "neuber"], { error: 'notchConstant must be "peterson" or "neuber"' }).optional(),
-    designLife_cycles: positive("the design life", 1e12),
+    designLife_cycles: positive("the design life", 1e12, FLOORS.cycles),
     scatterFactor: num("the scatter factor").min(1, { error: "the scatter factor must be at least 1" }).max(100, { error: "the scatter factor must be at most 100" }).default(1),
     curve: z.enum(["basquin", "welded"], { error: 'curve must be "basquin" or "welded"' }).default("basquin"),
-    detailCategory_MPa: positive("the detail category", 1000).optional(),
+    detailCategory_MPa: positive("the detail category", 1000, FLOORS.strength).optional(),
     gammaMf: num("the partial factor γMf").min(1, { error: "γMf must be at least 1" }).max(2, { error: "γMf must be at most 2" }).default(1),
     localYield: z.enum(["elastic", "shakedown"], { error: 'localYield must be "elastic" or "shakedown"' }).default("elastic"),
     modifiers: z
@@ -202,9 +235,9 @@ export const fatigueSchema = z
 
 export const crackSchema = z.strictObject({
   geometry: z.enum(["center-through", "edge-through", "hole-through"], { error: 'crack geometry must be "center-through", "edge-through" or "hole-through"' }),
-  initial_mm: positive("the initial crack size", 1e4),
-  width_mm: positive("the panel width", 1e5).optional(),
-  holeRadius_mm: positive("the hole radius", 1e4).optional(),
+  initial_mm: positive("the initial crack size", 1e4, FLOORS.length),
+  width_mm: positive("the panel width", 1e5, FLOORS.length).optional(),
+  holeRadius_mm: positive("the hole radius", 1e4, FLOORS.length).optional(),
   cracksAtHole: z.union([z.literal(1), z.literal(2)], { error: "cracksAtHole must be 1 or 2" }).default(2).describe("2 (default) is conservative; the one-crack factor is interpolated"),
   inspectionFactor: num("the inspection factor").min(1, { error: "the inspection factor must be at least 1" }).max(100, { error: "the inspection factor must be at most 100" }).default(2),
   bulging: z.boolean({ error: "bulging must be true or false" }).default(false),
@@ -213,7 +246,7 @@ export const crackSchema = z.strictObject({
 
 export const evidenceSchema = z.strictObject({
   lives_cycles: z
-    .array(positive("each test life", 1e12), { error: "the test lives must be a list of numbers" })
+    .array(positive("each test life", 1e12, FLOORS.cycles), { error: "the test lives must be a list of numbers" })
     .min(1, { error: "give at least one test life" })
     .max(10000, { error: "at most 10 000 test lives" }),
   reliability: fraction("the reliability").default(0.9),
@@ -240,7 +273,7 @@ export const checkSchema = z.strictObject({
   shell: shellSchema,
   pressure: pressureSchema,
   axialExtra: z
-    .strictObject({ max_MPa: num("the extra axial stress at maximum").default(0), min_MPa: num("the extra axial stress at minimum").default(0) })
+    .strictObject({ max_MPa: signedStress("the extra axial stress at maximum").default(0), min_MPa: signedStress("the extra axial stress at minimum").default(0) })
     .optional(),
   cutout: cutoutSchema.default({ kind: "none" }),
   material: materialSchema,

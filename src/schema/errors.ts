@@ -12,7 +12,9 @@ export function toFieldErrors(issues: readonly z.core.$ZodIssue[], raw: unknown,
     const base = [prefix, issue.path.map(String).join(".")].filter(Boolean).join(".");
     if (issue.code === "unrecognized_keys") {
       for (const key of issue.keys) {
-        out.push({ path: base ? `${base}.${key}` : key, message: `"${key}" is not a field of the check format here; check its spelling` });
+        // A key may be empty or blank; a path of spaces names nothing, so it names the object that holds the key.
+        if (key.trim() === "") out.push({ path: base || "(document)", message: `a field with a blank name (${JSON.stringify(key)}) is not part of the check format` });
+        else out.push({ path: base ? `${base}.${key}` : key, message: `"${key}" is not a field of the check format here; check its spelling` });
       }
       continue;
     }

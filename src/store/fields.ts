@@ -64,7 +64,11 @@ export function zodFieldErrors(error: z.ZodError, prefix = ""): FieldError[] {
   for (const issue of error.issues) {
     const at = joinPath(prefix, issue.path.map(String).join("."));
     if (issue.code === "unrecognized_keys") {
-      for (const key of issue.keys) out.push(entry(joinPath(at, key), "is not a field this record takes"));
+      for (const key of issue.keys) {
+        // A blank key would make a path of spaces, which names nothing: name the record that holds it.
+        if (key.trim() === "") out.push(entry(at, `holds a field with a blank name (${JSON.stringify(key)}), which this record does not take`));
+        else out.push(entry(joinPath(at, key), "is not a field this record takes"));
+      }
     } else {
       out.push(entry(at, issue.message));
     }
