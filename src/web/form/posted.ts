@@ -121,6 +121,8 @@ function rowsToShow(values: FormValues, more: boolean): number[] {
   const posted = blockRows(values);
   const filled = posted.filter((r) => (Object.keys(BLOCK_COLUMNS) as BlockColumn[]).some((c) => (values[blockField(r, c)] ?? "").trim() !== ""));
   const lastFilled = filled.length ? filled[filled.length - 1] : -1;
-  const n = Math.max(posted.length ? posted[posted.length - 1] + 1 : 0, lastFilled + 1 + SPARE_BLOCK_ROWS, 3) + (more ? 3 : 0);
+  // Rows follow what is filled in, not the highest row number posted: an empty field named
+  // blocks.9999 must not make the page draw ten thousand rows.
+  const n = Math.max(lastFilled + 1 + SPARE_BLOCK_ROWS, 3) + (more ? 3 : 0);
   return Array.from({ length: Math.min(n, 10_000) }, (_, i) => i);
 }
