@@ -1,13 +1,8 @@
 import { serve } from "@hono/node-server";
 import { closeSharedPool } from "./report/browser.ts";
 import { openStore } from "./store/index.ts";
-import { createApp } from "./web/app.ts";
-import { pageRoutes } from "./web/page.tsx";
-import { recordsApi } from "./web/records.ts";
-import { recordsPages } from "./web/recordsPage.tsx";
-import { revisionSheetApi } from "./web/revisionSheet.ts";
-import { sheetApi } from "./web/sheet.ts";
 import { seedDemos } from "./web/seed.ts";
+import { wholeApp } from "./web/whole.ts";
 
 /**
  * Serve the checker on HOST:PORT (127.0.0.1:8080 unless told otherwise). SIGTERM/SIGINT stop taking
@@ -17,7 +12,7 @@ const host = process.env.HOST ?? "127.0.0.1";
 const port = Number(process.env.PORT ?? 8080);
 const store = openStore();
 const seeded = seedDemos(store);
-const app = createApp({ mounts: [sheetApi(), revisionSheetApi({ store }), recordsApi({ store }), recordsPages({ store }), pageRoutes()] });
+const app = wholeApp(store);
 
 const server = serve({ fetch: app.fetch, hostname: host, port }, (info) => {
   if (seeded) console.log(`Saved ${seeded} demo checks in ${process.env.HOOPWISE_DB ?? "data/hoopwise.db"}`);
