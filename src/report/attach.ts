@@ -51,8 +51,10 @@ const ENGINE_KEY = PDFName.of("HoopwiseEngine");
  * `sha256:<fingerprint>` so ordinary viewers show it) and the fingerprint fields. Returns the new
  * PDF; the bytes passed in are not changed.
  */
-export async function attachInput(pdf: Uint8Array, inputJson: string, info: SheetInfo): Promise<Uint8Array> {
+export async function attachInput(pdf: Uint8Array, inputJson: string, info: SheetInfo, more?: (doc: PDFDocument) => Promise<void>): Promise<Uint8Array> {
   const doc = await PDFDocument.load(pdf);
+  // Further attachments go in the same load/save pass: each pass re-parses and re-writes the whole PDF.
+  await more?.(doc);
   const now = new Date();
   await doc.attach(new TextEncoder().encode(inputJson), INPUT_ATTACHMENT, {
     mimeType: "application/json",

@@ -113,9 +113,8 @@ export function compareRecords(then: SheetRecord, now: SheetRecord): Difference[
   return out;
 }
 
-/** Attach the record; the bytes passed in are not changed. The document information is left as attachInput set it. */
-export async function attachRecord(pdf: Uint8Array, record: SheetRecord, createdAt: Date): Promise<Uint8Array> {
-  const doc = await PDFDocument.load(pdf, { updateMetadata: false });
+/** Attach the record to a loaded document (within attachInput's pass). */
+export async function attachRecord(doc: PDFDocument, record: SheetRecord, createdAt: Date): Promise<void> {
   await doc.attach(new TextEncoder().encode(JSON.stringify(record)), RESULT_ATTACHMENT, {
     mimeType: "application/json",
     description: "The verdict and results this sheet was printed with, for verification.",
@@ -123,7 +122,6 @@ export async function attachRecord(pdf: Uint8Array, record: SheetRecord, created
     modificationDate: createdAt,
     afRelationship: AFRelationship.Supplement,
   });
-  return doc.save();
 }
 
 /** The record in a sheet: null when there is none; throws with a plain message when it cannot be read. */

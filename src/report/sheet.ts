@@ -85,12 +85,16 @@ export async function renderSheet(json: unknown, opts: SheetOptions = {}): Promi
     requestLog: opts.requestLog,
     timeout_ms: opts.timeout_ms,
   });
-  const withInput = await attachInput(printed, sheet.canonicalInput, {
-    title: model.document.title ?? "Check sheet",
-    subject: `Pressure-cycle check of a ${model.document.shell.form === "cylinder" ? "cylindrical" : "spherical"} shell skin`,
-    fingerprint: result.fingerprint,
-    engineVersion: result.engine,
-  });
-  const pdf = await attachRecord(withInput, recordOf(result), model.printedOn);
+  const pdf = await attachInput(
+    printed,
+    sheet.canonicalInput,
+    {
+      title: model.document.title ?? "Check sheet",
+      subject: `Pressure-cycle check of a ${model.document.shell.form === "cylinder" ? "cylindrical" : "spherical"} shell skin`,
+      fingerprint: result.fingerprint,
+      engineVersion: result.engine,
+    },
+    (doc) => attachRecord(doc, recordOf(result), model.printedOn),
+  );
   return { ok: true, pdf, result, fingerprint: result.fingerprint };
 }
