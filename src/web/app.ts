@@ -1,6 +1,7 @@
 import { Hono } from "hono";
 import { secureHeaders } from "hono/secure-headers";
 import { checkApi, errorsDoc } from "./api.ts";
+import { refuseCrossSite } from "./crossSite.ts";
 
 export interface AppOptions {
   /** Extra sub-apps mounted at the root (sheet, records, page). */
@@ -33,6 +34,7 @@ export function createApp(opts: AppOptions = {}): Hono {
       xFrameOptions: "DENY",
     }),
   );
+  app.use("*", refuseCrossSite());
   app.get("/healthz", (c) => c.json({ status: "ok" }));
   app.route("/", checkApi());
   for (const m of opts.mounts ?? []) app.route("/", m);
