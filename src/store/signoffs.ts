@@ -2,11 +2,12 @@ import { z } from "zod";
 import type { FieldError } from "../engine/errors.ts";
 import type { Db } from "./db.ts";
 import { isoNow, type StoreContext } from "./context.ts";
-import { RecordNotFoundError, SignOffRefusedError } from "./errors.ts";
+import { clearFailures, noteFailure, refuseWhileLocked } from "./attempts.ts";
+import { RecordNotFoundError, SignOffRefusedError, WrongPassphraseError } from "./errors.ts";
 import { appendEvent } from "./events.ts";
 import { latestRevision, requireCheck } from "./checks.ts";
 import { offeredPassphraseField, parseFields, personNameField, revisionNumberField, roleField } from "./fields.ts";
-import { verifySigner } from "./signers.ts";
+import { nameKey, verifySigner } from "./signers.ts";
 import { ROLES, revisionState, type RevisionState, type Role } from "./state.ts";
 
 export interface SignOffRequest {
@@ -49,7 +50,13 @@ export async function signOff(ctx: StoreContext, checkId: string, request: SignO
   const req = parseFields(signOffFields, request);
   requireCheck(ctx.db, checkId);
   requireRevision(ctx.db, checkId, req.revision);
-  const signer = await verifySigner(ctx.db, req.name, req.passphrase);
+  const key = nameKey(req.name);
+  refuseWhileLocked(ctx, key, req.name.trim());
+  const signer = await verifySigner(ctx.db, req.name, req.passphrase).catch((err: unknown) => {
+    if (err instanceof WrongPassphraseError) noteFailure(ctx, key);
+    throw err;
+  });
+  clearFailures(ctx, key);
   const signedAt = isoNow(ctx);
 
   // The rules are judged inside the write transaction, after the (slow)
