@@ -15,6 +15,7 @@ import { sheetResponse } from "./sheet.ts";
 import { assetRoutes } from "./assets.ts";
 import { readForm, readPosted, SPARE_BLOCK_ROWS, valueAt, writeForm, type FormValues, type Posted } from "./form/index.ts";
 import { MAX_JSON_DEPTH, tooDeepAt } from "./depth.ts";
+import { unshownParts } from "./form/carry.ts";
 import { decodeCheck, encodeCheck } from "./link.ts";
 import { unitsFrom, type Units } from "./units.ts";
 
@@ -73,7 +74,8 @@ function workDocument(doc: unknown, query: Record<string, string | undefined>, s
   const display = valueAt(doc, "display") as Record<string, unknown> | undefined;
   const units = unitsFrom({ ...display, ...pickDefined(query, ["length", "stress", "pressure", "altitude"]) });
   // `record` names the saved check a document was opened from, so saving it adds a revision there.
-  const values = { ...writeForm(doc, units), ...pickDefined(query, ["record"]) };
+  const carried = unshownParts(doc, units);
+  const values = { ...writeForm(doc, units), ...pickDefined(query, ["record"]), ...(carried ? { carry: JSON.stringify(carried) } : {}) };
   const blocks = valueAt(doc, "pressure.blocks");
   const rows = Array.from({ length: Math.max(3, (Array.isArray(blocks) ? blocks.length : 0) + SPARE_BLOCK_ROWS) }, (_, i) => i);
   // The document itself is checked, not the form read back from it, so a link reproduces its numbers exactly.

@@ -16,6 +16,7 @@ export function UnitsSection({ s }: { s: FormState }) {
     <fieldset class="section" id="sec-units">
       <legend>Units</legend>
       <input type="hidden" name="units.shown" value={unitsKey(u)} />
+      {s.values.carry ? <input type="hidden" name="carry" value={s.values.carry} /> : null}
       <div class="grid four">
         <Select s={v} name="units.length" label="Lengths" options={opts(LENGTH_UNITS)} />
         <Select s={v} name="units.stress" label="Stresses" options={opts(STRESS_UNITS)} />

@@ -1,6 +1,7 @@
 import { findMaterial } from "../../materials/library.ts";
 import { fromSI, formNumber, parseUnitsKey, sameUnits, unitsFrom, type Units } from "../units.ts";
 import { BLOCK_COLUMNS, blockField, MATERIAL_VALUE_FIELDS, NUMBER_FIELDS, SPARE_BLOCK_ROWS, type BlockColumn, type FormValues } from "./fields.ts";
+import { applyCarried } from "./carry.ts";
 import { blockRows, readForm, type ReadForm } from "./read.ts";
 import { convertValues } from "./write.ts";
 
@@ -86,6 +87,7 @@ export function understand(posted: FormValues, historyFile?: string): Posted {
   }
 
   const read = readForm(values, shown);
+  applyCarried(read.document, values.carry);
   read.document.display = { ...chosen };
   const show = sameUnits(shown, chosen) ? values : convertValues(values, shown, chosen);
   const solve = values.solve === "thickness" || values.solve === "pressure" ? values.solve : undefined;
