@@ -31,7 +31,7 @@ export function solveFor(ctx: Context, target: "thickness" | "pressure"): { solu
     if (!root.found) warnings.push(root.side === "above-max" ? "no wall thickness meets the design life and the static check for this radius" : "even a wall far thinner than the given one meets the checks; the solve stopped at 1/10 000 of it");
     const stepOut = step(
       "solve-thickness",
-      "Minimum wall thickness",
+      "Minimum wall thickness for the fatigue and static checks (crack growth and test evidence are not re-solved)",
       "t_min: min(log₁₀(N_allow/N_design), log₁₀(σ_allow/σvm)) = 0",
       `t_min = ${fmt(root.x)} mm (${governs} governs; ${root.evaluations} evaluations)`,
       root.x,
@@ -49,7 +49,7 @@ export function solveFor(ctx: Context, target: "thickness" | "pressure"): { solu
   const pMax = ctx.load.max_MPa * s;
   const stepOut = step(
     "solve-pressure",
-    "Maximum pressure (all pressures scaled together)",
+    "Maximum pressure for the fatigue and static checks (all pressures scaled together; crack growth and test evidence are not re-solved)",
     "p_max: min(log₁₀(N_allow/N_design), log₁₀(σ_allow/σvm)) = 0",
     `p_max = ${fmt(ctx.load.max_MPa)} × ${fmt(s)} (${governs} governs; ${root.evaluations} evaluations)`,
     pMax,
