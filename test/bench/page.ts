@@ -1,12 +1,11 @@
+import { postedForm } from "../web/postedForm.ts";
 import { get } from "node:http";
 import type { AddressInfo } from "node:net";
 import { performance } from "node:perf_hooks";
 import { serve } from "@hono/node-server";
 import { findDemo } from "../../src/demo/index.ts";
 import { createApp } from "../../src/web/app.ts";
-import { writeForm } from "../../src/web/form/index.ts";
 import { pageRoutes } from "../../src/web/page.tsx";
-import { unitsFrom, unitsKey } from "../../src/web/units.ts";
 
 function median(xs: number[]): number {
   const s = [...xs].sort((a, b) => a - b);
@@ -37,16 +36,7 @@ export async function pageBench(requests = 50) {
   const base = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
   try {
     const cabin = findDemo("cabin")!.document;
-    const units = unitsFrom(cabin.display);
-    const fields: Record<string, string> = {
-      ...writeForm(cabin, units),
-      "units.shown": unitsKey(units),
-      "units.length": units.length,
-      "units.stress": units.stress,
-      "units.pressure": units.pressure,
-      "units.altitude": units.altitude,
-      "material.shown": cabin.material.id ?? "",
-    };
+    const fields = postedForm(cabin);
     const edit = async (i: number) => {
       const body = new URLSearchParams({ ...fields, "shell.thickness": (0.8 + (i % 10) * 0.05).toFixed(2) });
       const t = performance.now();

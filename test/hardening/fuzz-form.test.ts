@@ -3,12 +3,12 @@
  * 1 000 generated posts, files and links. Every answer is a page (or fragment, or a redirect after
  * a save) — a result, or the message beside the field — and never a 5xx.
  */
+import { postedForm } from "../web/postedForm.ts";
 import { deflateRawSync } from "node:zlib";
 import fc from "fast-check";
 import { afterAll, describe, expect, it } from "vitest";
 import { DEMOS } from "../../src/demo/index.ts";
-import { NUMBER_FIELDS, writeForm } from "../../src/web/form/index.ts";
-import { unitsFrom, unitsKey } from "../../src/web/units.ts";
+import { NUMBER_FIELDS } from "../../src/web/form/index.ts";
 import { bounded, expectErrorsDoc } from "./answers.ts";
 import { wholeApp } from "./app.ts";
 import { BASES, bodyOf, documentOf, hostileValue, plan } from "./hostile.ts";
@@ -18,12 +18,7 @@ const { app } = whole;
 const saved = whole.store.createCheck({ input: DEMOS[0].document, calcNumber: "FORM-FUZZ-1" });
 afterAll(() => whole.close());
 
-/** The form as the page draws it for a base document, units fields included. */
-function formOf(doc: unknown): Record<string, string> {
-  const units = unitsFrom((doc as { display?: Record<string, string> }).display);
-  const unitFields = { "units.length": units.length, "units.stress": units.stress, "units.pressure": units.pressure, "units.altitude": units.altitude, "units.shown": unitsKey(units) };
-  return { ...writeForm(doc, units), ...unitFields };
-}
+const formOf = (doc: unknown) => postedForm(doc);
 
 const NAMES = [
   ...Object.keys(NUMBER_FIELDS),

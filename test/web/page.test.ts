@@ -1,29 +1,18 @@
+import { postedForm } from "./postedForm.ts";
 import { gunzipSync } from "node:zlib";
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { DEMOS, findDemo } from "../../src/demo/index.ts";
 import { createApp } from "../../src/web/app.ts";
-import { writeForm } from "../../src/web/form/index.ts";
 import { decodeCheck, encodeCheck } from "../../src/web/link.ts";
 import { pageRoutes } from "../../src/web/page.tsx";
-import { unitsFrom, unitsKey, type Units } from "../../src/web/units.ts";
+import { unitsFrom, type Units } from "../../src/web/units.ts";
 
 const app = createApp({ mounts: [pageRoutes()] });
 const cabin = findDemo("cabin")!.document;
 const receiver = findDemo("receiver")!.document;
 
-/** The fields a browser would post for a document shown in these units. */
-function formFor(doc: unknown, units: Units): Record<string, string> {
-  return {
-    ...writeForm(doc, units),
-    "units.shown": unitsKey(units),
-    "units.length": units.length,
-    "units.stress": units.stress,
-    "units.pressure": units.pressure,
-    "units.altitude": units.altitude,
-    "material.shown": (doc as { material: { id?: string } }).material.id ?? "",
-  };
-}
+const formFor = postedForm;
 
 const cabinUnits = unitsFrom(cabin.display);
 const cabinForm = formFor(cabin, cabinUnits);

@@ -1,9 +1,8 @@
+import { postedForm } from "./postedForm.ts";
 import { describe, expect, it } from "vitest";
 import { findDemo } from "../../src/demo/index.ts";
 import { validateCheckDocument } from "../../src/store/check-validator.ts";
 import { createApp } from "../../src/web/app.ts";
-import { unitsFrom, unitsKey } from "../../src/web/units.ts";
-import { writeForm } from "../../src/web/form/index.ts";
 import { pageRoutes } from "../../src/web/page.tsx";
 import { recordsApi } from "../../src/web/records.ts";
 import { recordsPages } from "../../src/web/recordsPage.tsx";
@@ -19,17 +18,7 @@ const cabin = findDemo("cabin")!.document;
 
 /** The fields a browser posts for the cabin example as the checker shows it. */
 function cabinForm(changes: Record<string, string> = {}): Record<string, string> {
-  const units = unitsFrom(cabin.display);
-  return {
-    ...writeForm(cabin, units),
-    "units.shown": unitsKey(units),
-    "units.length": units.length,
-    "units.stress": units.stress,
-    "units.pressure": units.pressure,
-    "units.altitude": units.altitude,
-    "material.shown": cabin.material.id ?? "",
-    ...changes,
-  };
+  return { ...postedForm(cabin), ...changes };
 }
 
 /** The records pages over a fresh database with the real check validator; every body read is kept for the passphrase sweep. */

@@ -1,0 +1,15 @@
+import { writeForm } from "../../src/web/form/index.ts";
+import { unitsFrom, unitsKey, type Units } from "../../src/web/units.ts";
+
+/** The fields a browser posts for a check as the checker draws it: its values plus the hidden units and material markers. */
+export function postedForm(doc: unknown, units: Units = unitsFrom((doc as { display?: Record<string, string> }).display)): Record<string, string> {
+  return {
+    ...writeForm(doc, units),
+    "units.shown": unitsKey(units),
+    "units.length": units.length,
+    "units.stress": units.stress,
+    "units.pressure": units.pressure,
+    "units.altitude": units.altitude,
+    "material.shown": (doc as { material?: { id?: string } }).material?.id ?? "",
+  };
+}
