@@ -3,7 +3,8 @@ import type { AddressInfo } from "node:net";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { serve, type ServerType } from "@hono/node-server";
-import puppeteer, { type Browser, type Page } from "puppeteer-core";
+import type { Browser, Page } from "puppeteer-core";
+import { launchTestBrowser } from "./browser.ts";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { createApp } from "../../src/web/app.ts";
 import { pageRoutes } from "../../src/web/page.tsx";
@@ -24,19 +25,7 @@ beforeAll(async () => {
   });
   base = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
   profile = mkdtempSync(join(tmpdir(), "hoopwise-e2e-"));
-  browser = await puppeteer.launch({
-    executablePath: process.env.CHROME_PATH ?? "/usr/bin/chromium",
-    headless: true,
-    args: [
-      "--no-sandbox",
-      "--disable-gpu",
-      "--disable-quic",
-      "--disable-component-update",
-      "--no-first-run",
-      "--disable-background-networking",
-      `--user-data-dir=${profile}`,
-    ],
-  });
+  browser = await launchTestBrowser(profile);
 }, TIMEOUT);
 
 afterAll(async () => {

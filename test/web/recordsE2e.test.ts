@@ -3,7 +3,8 @@ import type { AddressInfo } from "node:net";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { serve, type ServerType } from "@hono/node-server";
-import puppeteer, { type Browser, type Page } from "puppeteer-core";
+import type { Browser, Page } from "puppeteer-core";
+import { launchTestBrowser } from "./browser.ts";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { closeSharedPool } from "../../src/report/browser.ts";
 import { openStore, type Store } from "../../src/store/index.ts";
@@ -36,11 +37,7 @@ beforeAll(async () => {
     server = serve({ fetch: app.fetch, hostname: "127.0.0.1", port: 0 }, () => resolve());
   });
   base = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
-  browser = await puppeteer.launch({
-    executablePath: process.env.CHROME_PATH ?? "/usr/bin/chromium",
-    headless: true,
-    args: ["--no-sandbox", "--disable-gpu", "--no-first-run", "--disable-background-networking", `--user-data-dir=${join(dir, "profile")}`],
-  });
+  browser = await launchTestBrowser(join(dir, "profile"));
 }, TIMEOUT);
 
 afterAll(async () => {
