@@ -1,4 +1,4 @@
-import { MEAN_STRESS_CRITERIA, type MeanStressCriterion } from "../schema/check.ts";
+import { MEAN_STRESS_CRITERIA } from "../schema/check.ts";
 import { fingerprint } from "../schema/canonical.ts";
 import type { ResolvedCheck } from "../schema/resolve.ts";
 import { fitCoupons } from "./coupons.ts";
@@ -56,7 +56,7 @@ export function runCheck(input: ResolvedCheck): CheckResult {
   steps.push(...evaluationSteps(ctx, e, criterion));
   warnings.push(...e.conc.warnings, ...e.notch.warnings, ...validityWarnings(ctx, e));
 
-  const criteria = input.fatigue.curve === "welded" ? [] : compareCriteria(ctx, t, criterion);
+  const criteria = input.fatigue.curve === "welded" ? [] : compareCriteria(ctx, e);
 
   const result: CheckResult = {
     format: "hoopwise.result/1",
@@ -213,9 +213,11 @@ function equivalentRange(load: Load, e: Evaluation, m: number): { range_MPa: num
 }
 
 /** Life under each criterion at the same thickness, so the user sees how much the choice matters. */
-function compareCriteria(ctx: Context, t: number, chosen: MeanStressCriterion): CriterionRow[] {
+function compareCriteria(ctx: Context, chosenEvaluation: Evaluation): CriterionRow[] {
+  const chosen = ctx.input.fatigue.meanStress;
   return MEAN_STRESS_CRITERIA.map((c) => {
-    const e = evaluate(ctx, t, 1, c);
+    // The chosen criterion was evaluated already for the check itself.
+    const e = c === chosen ? chosenEvaluation : evaluate(ctx, chosenEvaluation.thickness_mm, 1, c);
     return {
       criterion: c,
       label: CRITERION_LABEL[c],
