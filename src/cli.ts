@@ -31,7 +31,7 @@ const COMMANDS: Record<string, Command> = {
   verify: verifyCommand,
   signer: (args, io) => {
     if (args[0] !== "add") {
-      io.stderr.write('usage: signer add NAME\n');
+      io.stderr.write("usage: signer add NAME\n");
       return 2;
     }
     return signerAddCommand(args.slice(1), { ...io, isTTY: Boolean(io.stdin.isTTY) });

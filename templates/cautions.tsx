@@ -11,7 +11,8 @@ export const CAUTIONS = [
 ] as const;
 
 /** One line for page 1 and the footer of every page. */
-export const CAUTION_SHORT = "Screening check — not a certificate of compliance. The governing code and a licensed or authorized engineer decide.";
+export const CAUTION_SHORT =
+  "Screening check — not a certificate of compliance. The governing code and a licensed or authorized engineer decide.";
 
 export function Cautions({ num }: { num: number }) {
   return (

@@ -82,7 +82,10 @@ export function signedAtText(signedAt: string): string {
 
 /** A list of numbers, cut short after `max` with a count of the rest (the whole list rides in the PDF). */
 export function numberList(xs: readonly number[], max = 12, digits = 4): string {
-  const shown = xs.slice(0, max).map((x) => sig(x, digits)).join("; ");
+  const shown = xs
+    .slice(0, max)
+    .map((x) => sig(x, digits))
+    .join("; ");
   return xs.length > max ? `${shown}; … and ${xs.length - max} more` : shown;
 }
 

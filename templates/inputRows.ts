@@ -33,7 +33,12 @@ export function inputGroups(m: SheetModel): InputGroup[] {
     title: "Shell",
     rows: [
       t("Form", shell.form === "cylinder" ? "cylinder (closed ends)" : "sphere"),
-      q(`Radius, measured at the ${shell.radiusAt} surface`, shell.radius_mm, "length", shell.radiusAt === "mean" ? "" : "mean radius worked out in the calculation"),
+      q(
+        `Radius, measured at the ${shell.radiusAt} surface`,
+        shell.radius_mm,
+        "length",
+        shell.radiusAt === "mean" ? "" : "mean radius worked out in the calculation",
+      ),
       q("Wall thickness t", shell.thickness_mm, "length"),
       t("Wall theory asked for", THEORY_ASKED[shell.theory]),
     ],
@@ -85,7 +90,11 @@ export function inputGroups(m: SheetModel): InputGroup[] {
     groups.push({ title: "Test evidence", rows });
   }
 
-  if (d.solve) groups.push({ title: "Solve", rows: [t("Solve for", d.solve.for === "thickness" ? "the least wall thickness" : "the highest pressure")] });
+  if (d.solve)
+    groups.push({
+      title: "Solve",
+      rows: [t("Solve for", d.solve.for === "thickness" ? "the least wall thickness" : "the highest pressure")],
+    });
   return groups;
 }
 
@@ -131,7 +140,8 @@ function pressureRows(m: SheetModel, q: Q, t: T): InputRow[] {
         note: `${sig(b.cycles, 6)} cycles per pass`,
       });
     });
-    if (p.blocks.length > MAX_BLOCK_ROWS) rows.push(t("Further blocks", `${p.blocks.length - MAX_BLOCK_ROWS} more`, "in the attached input"));
+    if (p.blocks.length > MAX_BLOCK_ROWS)
+      rows.push(t("Further blocks", `${p.blocks.length - MAX_BLOCK_ROWS} more`, "in the attached input"));
   }
   const a = m.document.axialExtra;
   if (a && (a.max_MPa !== 0 || a.min_MPa !== 0)) {
@@ -157,12 +167,15 @@ function materialRows(m: SheetModel, q: Q, t: T): InputRow[] {
   num("Yield strength Sy", "yield_MPa", "stress");
   num("Elastic modulus E", "modulus_MPa", "stress");
   num("Fatigue strength coefficient σ'f", "fatigueStrengthCoefficient_MPa", "stress");
-  if (mat.fatigueStrengthExponent !== undefined) rows.push(t("Basquin exponent b", sig(mat.fatigueStrengthExponent, 4), origin("fatigueStrengthExponent")));
+  if (mat.fatigueStrengthExponent !== undefined)
+    rows.push(t("Basquin exponent b", sig(mat.fatigueStrengthExponent, 4), origin("fatigueStrengthExponent")));
   num("Endurance limit Se", "enduranceLimit_MPa", "stress");
   num("Fracture toughness Kc", "toughness_MPaSqrtM", "toughness");
-  if (mat.parisC !== undefined) rows.push(t("Paris coefficient C", sig(mat.parisC, 4), `${origin("parisC")}; da/dN in m/cycle, ΔK in MPa·√m`.replace(/^; /, "")));
+  if (mat.parisC !== undefined)
+    rows.push(t("Paris coefficient C", sig(mat.parisC, 4), `${origin("parisC")}; da/dN in m/cycle, ΔK in MPa·√m`.replace(/^; /, "")));
   if (mat.parisM !== undefined) rows.push(t("Paris exponent m", sig(mat.parisM, 4), origin("parisM")));
-  if (mat.coupons) rows.push(t("Coupon results", `${mat.coupons.length} coupons`, "fitted in the calculation; listed in the attached input"));
+  if (mat.coupons)
+    rows.push(t("Coupon results", `${mat.coupons.length} coupons`, "fitted in the calculation; listed in the attached input"));
   rows.push(t("Source of the values", mat.source));
   return rows;
 }
@@ -170,7 +183,10 @@ function materialRows(m: SheetModel, q: Q, t: T): InputRow[] {
 function fatigueRows(m: SheetModel, t: T, q: Q): InputRow[] {
   const f = m.document.fatigue;
   const lifeUnit = m.result.fatigue.lifeCountedIn;
-  const rows: InputRow[] = [t("Design life", `${sig(f.designLife_cycles, 6)} ${lifeUnit}`), t("Scatter factor on life", sig(f.scatterFactor, 4), f.scatterFactor === 1 ? "no statistical allowance" : "")];
+  const rows: InputRow[] = [
+    t("Design life", `${sig(f.designLife_cycles, 6)} ${lifeUnit}`),
+    t("Scatter factor on life", sig(f.scatterFactor, 4), f.scatterFactor === 1 ? "no statistical allowance" : ""),
+  ];
   if (f.curve === "welded") {
     rows.push(t("S-N curve", "welded detail category"));
     rows.push(q("Detail category Δσ_C (at 2 × 10⁶ cycles)", f.detailCategory_MPa, "stress"));
@@ -181,7 +197,14 @@ function fatigueRows(m: SheetModel, t: T, q: Q): InputRow[] {
     if (f.meanStress === "walker") rows.push(t("Walker exponent γ", sig(f.walkerGamma, 4)));
   }
   if (f.notchSensitivity !== undefined) rows.push(t("Notch sensitivity q", sig(f.notchSensitivity, 4), "as entered"));
-  else if (f.notchConstant !== undefined) rows.push(t("Notch sensitivity q", `from ${f.notchConstant === "peterson" ? "Peterson's" : "Neuber's"} constant`, "worked out in the calculation"));
+  else if (f.notchConstant !== undefined)
+    rows.push(
+      t(
+        "Notch sensitivity q",
+        `from ${f.notchConstant === "peterson" ? "Peterson's" : "Neuber's"} constant`,
+        "worked out in the calculation",
+      ),
+    );
   else rows.push(t("Notch sensitivity q", "1 (Kf = Kt)", "default, the cautious choice"));
   rows.push(t("Local yield at the notch", f.localYield === "shakedown" ? "shakedown allowed" : "elastic"));
   const mod = f.modifiers;

@@ -23,7 +23,9 @@ export function headerHtml(m: SheetModel): string {
   const mark = statusMark(m.signoffs, m.superseded);
   const rev = m.revision !== undefined ? `Rev. ${m.revision}` : "Rev. — (not saved)";
   return htmlOf(
-    <div style={`width:100%;box-sizing:border-box;padding:${SIDE};font-family:${FONT};font-size:7.4pt;color:#111;-webkit-print-color-adjust:exact`}>
+    <div
+      style={`width:100%;box-sizing:border-box;padding:${SIDE};font-family:${FONT};font-size:7.4pt;color:#111;-webkit-print-color-adjust:exact`}
+    >
       <div style="display:flex;align-items:flex-end;gap:4mm;border-bottom:0.8pt solid #111;padding-bottom:1.2mm">
         <div style="flex:1;min-width:0">
           <div style={`${ONE_LINE};color:#444`}>{d.project ?? "Project not named"}</div>

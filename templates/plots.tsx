@@ -24,7 +24,8 @@ export function figures(m: SheetModel): Figure[] {
   const out: Figure[] = [];
   if (basquin && singleCycle && f.equivalentAmplitude_MPa !== null) {
     out.push({
-      caption: "Haigh diagram: the constant-life line of each mean-stress criterion through the same equivalent amplitude, with the local cycle at the notch.",
+      caption:
+        "Haigh diagram: the constant-life line of each mean-stress criterion through the same equivalent amplitude, with the local cycle at the notch.",
       svg: haighDiagram(
         {
           operating: { mean_MPa: f.mean_MPa, amplitude_MPa: f.amplitude_MPa },
@@ -75,13 +76,21 @@ export function figures(m: SheetModel): Figure[] {
     out.push({
       caption: "Crack size against pressure cycles (Paris law), with the critical size and the inspections.",
       svg: crackGrowthPlot(
-        { curve: r.crack.curve, critical_mm: r.crack.critical_mm, inspectionInterval_cycles: r.crack.inspectionInterval_cycles, initial_mm: r.crack.initial_mm },
+        {
+          curve: r.crack.curve,
+          critical_mm: r.crack.critical_mm,
+          inspectionInterval_cycles: r.crack.inspectionInterval_cycles,
+          initial_mm: r.crack.initial_mm,
+        },
         opts,
       ),
     });
   }
   if (r.spectrum) {
-    out.push({ caption: "The counted cycles of one pass, by range of the nominal hoop stress.", svg: spectrumPlot({ cycles: r.spectrum.cycles }, opts) });
+    out.push({
+      caption: "The counted cycles of one pass, by range of the nominal hoop stress.",
+      svg: spectrumPlot({ cycles: r.spectrum.cycles }, opts),
+    });
   }
   return out;
 }

@@ -155,14 +155,16 @@ function CriteriaTable({ m, num }: { m: SheetModel; num: string }) {
     <div class="keep">
       <h3>{num} The mean-stress criteria compared</h3>
       <p class="note">
-        The same local cycle (σ<sub>a</sub> = {dualText(f.amplitude_MPa, "stress", m.units)}, σ<sub>m</sub> = {dualText(f.mean_MPa, "stress", m.units)}) under
-        each criterion; the one this check uses is marked.
+        The same local cycle (σ<sub>a</sub> = {dualText(f.amplitude_MPa, "stress", m.units)}, σ<sub>m</sub> ={" "}
+        {dualText(f.mean_MPa, "stress", m.units)}) under each criterion; the one this check uses is marked.
       </p>
       <table class="criteria">
         <thead>
           <tr>
             <th>Criterion</th>
-            <th class="n">σ<sub>ar</sub></th>
+            <th class="n">
+              σ<sub>ar</sub>
+            </th>
             <th class="n">Life ({unit})</th>
             <th class="n">Allowable (÷ {sig(f.scatterFactor, 3)})</th>
             <th class="n">Damage</th>

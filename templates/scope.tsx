@@ -13,7 +13,12 @@ export function Scope({ m, num }: { m: SheetModel; num: number }) {
   const r = m.result;
   const f = r.fatigue;
   const shape = d.shell.form === "cylinder" ? "cylindrical shell with closed ends" : "spherical shell";
-  const checks = ["static strength", "fatigue life at the opening", r.crack ? "crack growth and the inspection interval" : "", r.evidence ? "the test evidence" : ""].filter(Boolean);
+  const checks = [
+    "static strength",
+    "fatigue life at the opening",
+    r.crack ? "crack growth and the inspection interval" : "",
+    r.evidence ? "the test evidence" : "",
+  ].filter(Boolean);
   return (
     <section>
       <h2>
@@ -24,8 +29,8 @@ export function Scope({ m, num }: { m: SheetModel; num: number }) {
           <b>What is checked.</b> The skin of a {shape} under a cycling internal pressure differential: {listWords(checks)}.
         </li>
         <li>
-          <b>Membrane theory.</b> Stresses are the membrane stresses of an unstiffened shell of uniform wall. Bending at frames, stiffeners, heads,
-          nozzles and joints is not part of the calculation.
+          <b>Membrane theory.</b> Stresses are the membrane stresses of an unstiffened shell of uniform wall. Bending at frames, stiffeners,
+          heads, nozzles and joints is not part of the calculation.
         </li>
         <li>
           <b>Shell theory.</b> {typeset(capitalise(r.membrane.theoryReason))}.{" "}
@@ -37,8 +42,8 @@ export function Scope({ m, num }: { m: SheetModel; num: number }) {
           <b>Load.</b> {LOAD_WORDS[r.load.source]}
         </li>
         <li>
-          <b>Stress concentration.</b> {ktWords(m)} It governs {typeset(r.notch.ktGoverns)}; the biaxial ratio σ<sub>x</sub>/σ<sub>θ</sub> is{" "}
-          {sig(r.notch.biaxialRatio, 3)}. {qWords(m)}
+          <b>Stress concentration.</b> {ktWords(m)} It governs {typeset(r.notch.ktGoverns)}; the biaxial ratio σ<sub>x</sub>/σ<sub>θ</sub>{" "}
+          is {sig(r.notch.biaxialRatio, 3)}. {qWords(m)}
         </li>
         <li>
           <b>Fatigue criterion.</b>{" "}
@@ -47,28 +52,33 @@ export function Scope({ m, num }: { m: SheetModel; num: number }) {
             : `Mean stress by the ${CRITERION_NAMES[f.criterion]} criterion on the material's Basquin curve; the other criteria are compared in section 4.`}
         </li>
         <li>
-          <b>Scatter factor.</b> The life read from the curve is divided by {sig(f.scatterFactor, 3)} to allow for the spread of lives between
-          nominally equal items.{" "}
-          {f.scatterFactor === 1 ? "With 1 there is no such allowance: the life is a median estimate." : "The code or the authority that governs the item sets the factor to use."}
+          <b>Scatter factor.</b> The life read from the curve is divided by {sig(f.scatterFactor, 3)} to allow for the spread of lives
+          between nominally equal items.{" "}
+          {f.scatterFactor === 1
+            ? "With 1 there is no such allowance: the life is a median estimate."
+            : "The code or the authority that governs the item sets the factor to use."}
         </li>
         {r.crack ? (
           <li>
-            <b>Crack growth.</b> Paris law driven by the nominal hoop stress range, the crack lying along the axis; the inspection interval is the
-            growth life to the critical size divided by the inspection factor.
+            <b>Crack growth.</b> Paris law driven by the nominal hoop stress range, the crack lying along the axis; the inspection interval
+            is the growth life to the critical size divided by the inspection factor.
           </li>
         ) : null}
         {r.evidence ? (
           <li>
-            <b>Test evidence.</b> Test lives are taken as lognormal; the lower bound is the one-sided tolerance limit at the stated reliability and
-            confidence.
+            <b>Test evidence.</b> Test lives are taken as lognormal; the lower bound is the one-sided tolerance limit at the stated
+            reliability and confidence.
           </li>
         ) : null}
         <li>
-          <b>Material.</b> <span class="user">{m.material.name}</span>: {m.result.material.typical ? "typical values — verify against certified data." : "values as entered — verify against certified data."}
+          <b>Material.</b> <span class="user">{m.material.name}</span>:{" "}
+          {m.result.material.typical
+            ? "typical values — verify against certified data."
+            : "values as entered — verify against certified data."}
         </li>
         <li>
-          <b>Units.</b> Inputs and results are printed in the units chosen for this check with SI beside them; the calculation is worked in N, mm,
-          MPa and cycles.
+          <b>Units.</b> Inputs and results are printed in the units chosen for this check with SI beside them; the calculation is worked in
+          N, mm, MPa and cycles.
         </li>
       </ul>
       {d.notes ? (
@@ -85,7 +95,8 @@ const LOAD_WORDS = {
   direct: "One pressure cycle between the lowest and the highest differential given, repeated for the design life.",
   altitude:
     "One cycle per flight: the differential between the cabin and the outside pressure of the ICAO standard atmosphere, from the lowest pressure given to that differential.",
-  history: "The pressure history is counted into cycles by rainflow (ASTM E1049); one pass of the history is one unit of life, and the damage of its cycles is summed (Palmgren–Miner).",
+  history:
+    "The pressure history is counted into cycles by rainflow (ASTM E1049); one pass of the history is one unit of life, and the damage of its cycles is summed (Palmgren–Miner).",
   blocks: "Blocks of cycles make up one pass, the unit of life; the damage of the blocks is summed (Palmgren–Miner).",
 } as const;
 
@@ -107,7 +118,8 @@ function qWords(m: SheetModel): string {
   const f = m.document.fatigue;
   const q = sig(m.result.notch.q, 3);
   if (f.notchSensitivity !== undefined) return `Fatigue notch factor Kf = 1 + q·(Kt − 1) with q = ${q} as entered.`;
-  if (f.notchConstant !== undefined) return `Fatigue notch factor Kf = 1 + q·(Kt − 1) with q = ${q} from ${f.notchConstant === "peterson" ? "Peterson's" : "Neuber's"} constant.`;
+  if (f.notchConstant !== undefined)
+    return `Fatigue notch factor Kf = 1 + q·(Kt − 1) with q = ${q} from ${f.notchConstant === "peterson" ? "Peterson's" : "Neuber's"} constant.`;
   return "Fatigue notch factor Kf = Kt (q = 1, the cautious default).";
 }
 

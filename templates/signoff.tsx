@@ -37,8 +37,8 @@ export function SignOffBlock({ m, num }: { m: SheetModel; num: number }) {
       </p>
       {m.superseded ? (
         <p>
-          <b>This revision is superseded.</b> A later revision of this calculation exists in the records; this sheet is kept for the record only and
-          must not be used.
+          <b>This revision is superseded.</b> A later revision of this calculation exists in the records; this sheet is kept for the record
+          only and must not be used.
         </p>
       ) : null}
       <table class="signoff">
@@ -68,9 +68,9 @@ export function SignOffBlock({ m, num }: { m: SheetModel; num: number }) {
         </tbody>
       </table>
       <p class="note">
-        The input of this sheet is attached to the PDF as <span class="mono">{INPUT_ATTACHMENT}</span>. To check that the paper still matches its input
-        and this engine, run <span class="mono">npm run -s cli -- verify SHEET.pdf</span> and compare the fingerprint it reports with the one printed
-        on every page.
+        The input of this sheet is attached to the PDF as <span class="mono">{INPUT_ATTACHMENT}</span>. To check that the paper still
+        matches its input and this engine, run <span class="mono">npm run -s cli -- verify SHEET.pdf</span> and compare the fingerprint it
+        reports with the one printed on every page.
       </p>
     </section>
   );

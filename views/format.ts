@@ -4,7 +4,19 @@ import { fromSI, type Quantity, type Units, unitLabel } from "../src/web/units.t
  * Numbers as the page shows them: four significant figures, a true minus sign, powers of ten
  * written out (1.23 × 10⁶) rather than computer notation, thin spaces between thousands.
  */
-const SUPERSCRIPT: Record<string, string> = { "-": "⁻", "0": "⁰", "1": "¹", "2": "²", "3": "³", "4": "⁴", "5": "⁵", "6": "⁶", "7": "⁷", "8": "⁸", "9": "⁹" };
+const SUPERSCRIPT: Record<string, string> = {
+  "-": "⁻",
+  "0": "⁰",
+  "1": "¹",
+  "2": "²",
+  "3": "³",
+  "4": "⁴",
+  "5": "⁵",
+  "6": "⁶",
+  "7": "⁷",
+  "8": "⁸",
+  "9": "⁹",
+};
 
 export function sig(x: number | null | undefined, digits = 4): string {
   if (x === null || x === undefined || Number.isNaN(x)) return "—";

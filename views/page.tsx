@@ -66,8 +66,8 @@ export function Page({ title, notice, children }: { title?: string; notice?: str
         {children}
         <footer class="foot">
           <p>
-            Hoopwise works every check in SI and shows each line with its published source. Nothing you type is stored on the server until you save it to
-            the records; the link under the result carries the inputs.
+            Hoopwise works every check in SI and shows each line with its published source. Nothing you type is stored on the server until
+            you save it to the records; the link under the result carries the inputs.
           </p>
         </footer>
       </body>

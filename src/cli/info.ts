@@ -22,6 +22,12 @@ export function materialsCommand(args: string[], io: Io): number {
 /** `schema`: the check format as JSON Schema, generated from the zod schema (the one definition). */
 export function schemaCommand(_args: string[], io: Io): number {
   const schema = z.toJSONSchema(checkSchema, { io: "input", unrepresentable: "any" });
-  io.stdout.write(JSON.stringify({ $id: "https://hoopwise.invalid/schema/check-1.json", title: "Hoopwise check, format hoopwise.check/1", ...schema }, null, 2) + "\n");
+  io.stdout.write(
+    JSON.stringify(
+      { $id: "https://hoopwise.invalid/schema/check-1.json", title: "Hoopwise check, format hoopwise.check/1", ...schema },
+      null,
+      2,
+    ) + "\n",
+  );
   return 0;
 }

@@ -13,13 +13,19 @@ export async function readAll(stream: NodeJS.ReadableStream): Promise<string> {
 }
 
 /** Read a JSON document from a file or "-" (standard input); problems come back as an errors document. */
-export async function readJsonArg(file: string | undefined, io: Io): Promise<{ ok: true; value: unknown } | { ok: false; errors: { path: string; message: string }[] }> {
+export async function readJsonArg(
+  file: string | undefined,
+  io: Io,
+): Promise<{ ok: true; value: unknown } | { ok: false; errors: { path: string; message: string }[] }> {
   if (!file) return { ok: false, errors: [{ path: "(file)", message: "give a check file, or - to read standard input" }] };
   let text: string;
   try {
     text = file === "-" ? await readAll(io.stdin) : readFileSync(file, "utf8");
   } catch (err) {
-    return { ok: false, errors: [{ path: "(file)", message: `cannot read ${file}: ${(err as NodeJS.ErrnoException).code ?? (err as Error).message}` }] };
+    return {
+      ok: false,
+      errors: [{ path: "(file)", message: `cannot read ${file}: ${(err as NodeJS.ErrnoException).code ?? (err as Error).message}` }],
+    };
   }
   try {
     return { ok: true, value: JSON.parse(text) };

@@ -30,7 +30,9 @@ export async function sheetCommand(args: string[], io: Io): Promise<number> {
     if (!sheet.ok) return fail(io, sheet.errors);
     if (out === "-") io.stdout.write(sheet.pdf);
     else writeAtomically(out!, sheet.pdf);
-    io.stderr.write(`wrote ${out === "-" ? "the sheet to standard output" : out}: verdict ${sheet.result.verdict}, fingerprint ${sheet.fingerprint}\n`);
+    io.stderr.write(
+      `wrote ${out === "-" ? "the sheet to standard output" : out}: verdict ${sheet.result.verdict}, fingerprint ${sheet.fingerprint}\n`,
+    );
     return 0;
   } catch (err) {
     if (isRenderError(err)) {
@@ -103,7 +105,12 @@ function usage(io: Io, errors: ArgErrors): number {
 }
 
 function isRenderError(err: unknown): err is Error {
-  return err instanceof BrowserUnavailableError || err instanceof PoolBusyError || err instanceof RenderTimeoutError || err instanceof BrowserCrashedError;
+  return (
+    err instanceof BrowserUnavailableError ||
+    err instanceof PoolBusyError ||
+    err instanceof RenderTimeoutError ||
+    err instanceof BrowserCrashedError
+  );
 }
 
 /** Write beside the target and rename, so an interrupted run never leaves half a PDF under the name asked for. */

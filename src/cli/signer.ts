@@ -17,7 +17,8 @@ export interface SignerCommandOptions {
   passphraseCost?: ScryptCost;
 }
 
-const USAGE = 'usage: signer add NAME   (quote a name with spaces: signer add "Ana Reyes")\n' +
+const USAGE =
+  'usage: signer add NAME   (quote a name with spaces: signer add "Ana Reyes")\n' +
   "The passphrase is read from standard input when it is piped, or asked for twice without echo in a terminal.\n";
 
 /** Exit codes: 0 registered; 1 the name is already registered or the database failed; 2 a usage or input mistake; 130 cancelled. */
@@ -33,7 +34,8 @@ export async function signerAddCommand(args: string[], io: SignerIo, options: Si
     io.stderr.write(`signer add: ${message}\n`);
     return code;
   };
-  if (args.length !== 1) return fail(EXIT.usage, args.length === 0 ? `a name is required\n${USAGE}` : `give the name as one argument\n${USAGE}`);
+  if (args.length !== 1)
+    return fail(EXIT.usage, args.length === 0 ? `a name is required\n${USAGE}` : `give the name as one argument\n${USAGE}`);
   const parsedName = safeParseFields(personNameField, args[0]);
   if (!parsedName.success) return fail(EXIT.usage, `name ${zodFieldErrors(parsedName.error)[0].message}`);
   const name = parsedName.data;
@@ -71,7 +73,8 @@ async function promptTwice(io: SignerIo, name: string): Promise<string> {
 /** One line typed with echo off: a passphrase must not stay on the screen or in a terminal log. */
 function promptHidden(io: SignerIo, prompt: string): Promise<string> {
   const { stdin, stderr } = io;
-  if (!stdin.setRawMode) return Promise.reject(new InputMistake("cannot turn off echo on this terminal; pipe the passphrase on standard input instead"));
+  if (!stdin.setRawMode)
+    return Promise.reject(new InputMistake("cannot turn off echo on this terminal; pipe the passphrase on standard input instead"));
   stderr.write(prompt);
   stdin.setRawMode(true);
   stdin.setEncoding("utf8");
@@ -107,7 +110,9 @@ async function readPiped(stdin: NodeJS.ReadableStream): Promise<string> {
   let text = "";
   for await (const chunk of stdin) text += String(chunk);
   const line = text.replace(/\r?\n$/, "");
-  if (line === "") throw new InputMistake("passphrase: standard input is empty; pipe the passphrase in, or run in a terminal to be asked for it");
-  if (/[\r\n]/.test(line)) throw new InputMistake("passphrase: standard input holds more than one line; give the passphrase on a single line");
+  if (line === "")
+    throw new InputMistake("passphrase: standard input is empty; pipe the passphrase in, or run in a terminal to be asked for it");
+  if (/[\r\n]/.test(line))
+    throw new InputMistake("passphrase: standard input holds more than one line; give the passphrase on a single line");
   return line;
 }

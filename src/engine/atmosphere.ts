@@ -25,8 +25,24 @@ const ISA = "ICAO Standard Atmosphere (ICAO Doc 7488 / ISO 2533), geopotential a
 function pressureStep(id: string, what: string, h: number): Step {
   const p = isaPressure_Pa(h);
   return h <= H_TROPOPAUSE_M
-    ? step(id, `Standard-atmosphere pressure at ${what}`, "p = p₀·(1 − L·h/T₀)^(g₀/(R·L))", `p = 101325 × (1 − 0.0065 × ${fmt(h)}/288.15)^5.2559`, p, "Pa", ISA)
-    : step(id, `Standard-atmosphere pressure at ${what}`, "p = p₁₁·exp(−g₀·(h − 11000)/(R·T₁₁))", `p = ${fmt(P11_PA, 6)} × exp(−9.80665 × (${fmt(h)} − 11000)/(287.05 × 216.65))`, p, "Pa", ISA);
+    ? step(
+        id,
+        `Standard-atmosphere pressure at ${what}`,
+        "p = p₀·(1 − L·h/T₀)^(g₀/(R·L))",
+        `p = 101325 × (1 − 0.0065 × ${fmt(h)}/288.15)^5.2559`,
+        p,
+        "Pa",
+        ISA,
+      )
+    : step(
+        id,
+        `Standard-atmosphere pressure at ${what}`,
+        "p = p₁₁·exp(−g₀·(h − 11000)/(R·T₁₁))",
+        `p = ${fmt(P11_PA, 6)} × exp(−9.80665 × (${fmt(h)} − 11000)/(287.05 × 216.65))`,
+        p,
+        "Pa",
+        ISA,
+      );
 }
 
 /** Cabin-minus-outside differential (MPa) with its steps. */
@@ -39,7 +55,15 @@ export function cabinDifferential(flight_m: number, cabin_m: number): { differen
     steps: [
       pressureStep("isa-flight", `the flight altitude (${fmt(flight_m)} m)`, flight_m),
       pressureStep("isa-cabin", `the cabin altitude (${fmt(cabin_m)} m)`, cabin_m),
-      step("differential", "Cabin pressure differential", "Δp = p_cabin − p_outside", `Δp = (${fmt(cabin, 6)} − ${fmt(outside, 6)}) / 10⁶`, differential_MPa, "MPa", ISA),
+      step(
+        "differential",
+        "Cabin pressure differential",
+        "Δp = p_cabin − p_outside",
+        `Δp = (${fmt(cabin, 6)} − ${fmt(outside, 6)}) / 10⁶`,
+        differential_MPa,
+        "MPa",
+        ISA,
+      ),
     ],
   };
 }

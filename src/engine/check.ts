@@ -26,7 +26,10 @@ export function runCheck(input: ResolvedCheck): CheckResult {
   const warnings: string[] = [];
   const load = resolveLoad(input.pressure);
   if (!load.isSpectrum && load.min_MPa >= load.max_MPa) {
-    throw new InputError("pressure.min_MPa", `the minimum pressure (${fmt(load.min_MPa)} MPa) must be below the maximum (${fmt(load.max_MPa)} MPa)`);
+    throw new InputError(
+      "pressure.min_MPa",
+      `the minimum pressure (${fmt(load.min_MPa)} MPa) must be below the maximum (${fmt(load.max_MPa)} MPa)`,
+    );
   }
   steps.push(...load.steps);
 
@@ -39,7 +42,8 @@ export function runCheck(input: ResolvedCheck): CheckResult {
   }
   const coefficient = mat.fatigueStrengthCoefficient_MPa ?? fit?.fatigueStrengthCoefficient_MPa ?? NaN;
   const exponent = mat.fatigueStrengthExponent ?? fit?.fatigueStrengthExponent ?? NaN;
-  if (fit && mat.fatigueStrengthCoefficient_MPa !== undefined) warnings.push("coupons were given but σ'f and b were given too; the given σ'f and b are used and the fit is shown for comparison");
+  if (fit && mat.fatigueStrengthCoefficient_MPa !== undefined)
+    warnings.push("coupons were given but σ'f and b were given too; the given σ'f and b are used and the fit is shown for comparison");
   const mods = modifyingFactors(input.fatigue.modifiers, mat.ultimate_MPa, normalQuantile);
   steps.push(...mods.steps);
   warnings.push(...mods.warnings);
@@ -48,7 +52,12 @@ export function runCheck(input: ResolvedCheck): CheckResult {
     input,
     load,
     curve: { coefficient_MPa: coefficient, exponent, enduranceLimit_MPa: mat.enduranceLimit_MPa, factor: mods.factor },
-    strengths: { ultimate_MPa: mat.ultimate_MPa, yield_MPa: mat.yield_MPa, fatigueStrengthCoefficient_MPa: coefficient, walkerGamma: input.fatigue.walkerGamma },
+    strengths: {
+      ultimate_MPa: mat.ultimate_MPa,
+      yield_MPa: mat.yield_MPa,
+      fatigueStrengthCoefficient_MPa: coefficient,
+      walkerGamma: input.fatigue.walkerGamma,
+    },
   };
   const criterion = input.fatigue.meanStress;
   const t = input.shell.thickness_mm;
@@ -79,8 +88,23 @@ export function runCheck(input: ResolvedCheck): CheckResult {
       radialMax_MPa: e.radialMax,
       vonMisesMax_MPa: e.vonMisesMax,
     },
-    static: { yieldFactor: input.static?.yieldFactor ?? 1.5, allowable_MPa: e.staticAllowable, vonMisesMax_MPa: e.vonMisesMax, margin: e.staticMargin, pass: e.staticMargin >= 0 },
-    notch: { kt: e.conc.kt, ktGoverns: e.conc.governs, biaxialRatio: e.lambda, q: e.notch.q, kf: e.notch.kf, peakMax_MPa: e.peakMax, peakMin_MPa: e.peakMin, localYield: e.localYield },
+    static: {
+      yieldFactor: input.static?.yieldFactor ?? 1.5,
+      allowable_MPa: e.staticAllowable,
+      vonMisesMax_MPa: e.vonMisesMax,
+      margin: e.staticMargin,
+      pass: e.staticMargin >= 0,
+    },
+    notch: {
+      kt: e.conc.kt,
+      ktGoverns: e.conc.governs,
+      biaxialRatio: e.lambda,
+      q: e.notch.q,
+      kf: e.notch.kf,
+      peakMax_MPa: e.peakMax,
+      peakMin_MPa: e.peakMin,
+      localYield: e.localYield,
+    },
     fatigue: {
       criterion,
       curve: input.fatigue.curve,
@@ -94,7 +118,11 @@ export function runCheck(input: ResolvedCheck): CheckResult {
       damage: e.damage,
       lifeCountedIn: load.isSpectrum ? "passes" : "cycles",
       modifyingFactor: mods.factor,
-      curveUsed: { fatigueStrengthCoefficient_MPa: coefficient, fatigueStrengthExponent: exponent, enduranceLimit_MPa: mat.enduranceLimit_MPa ?? null },
+      curveUsed: {
+        fatigueStrengthCoefficient_MPa: coefficient,
+        fatigueStrengthExponent: exponent,
+        enduranceLimit_MPa: mat.enduranceLimit_MPa ?? null,
+      },
       criteria,
       pass: e.damage !== null && e.damage <= 1,
     },
@@ -144,25 +172,27 @@ function addCrack(result: CheckResult, input: ResolvedCheck, e: Evaluation, load
   const spectrum = load.isSpectrum ? equivalentRange(load, e, m.parisM!) : null;
   if (spectrum) steps.push(spectrum.step);
   const holeRadius = c.holeRadius_mm ?? (input.cutout.kind === "circular-hole" ? input.cutout.radius_mm : undefined);
-  const g = withPressurePath(input, () => crackGrowth({
-    geometry: c.geometry,
-    initial_mm: c.initial_mm,
-    width_mm: c.width_mm,
-    holeRadius_mm: holeRadius,
-    cracksAtHole: c.cracksAtHole,
-    bulging: c.bulging,
-    form: input.shell.form,
-    shellRadius_mm: e.radii.mean_mm,
-    thickness_mm: e.thickness_mm,
-    hoopMax_MPa: e.hoopMax,
-    hoopMin_MPa: spectrum ? e.hoopMax - spectrum.range_MPa : e.hoopMin,
-    yield_MPa: m.yield_MPa,
-    parisC: m.parisC!,
-    parisM: m.parisM!,
-    toughness_MPaSqrtM: m.toughness_MPaSqrtM!,
-    walkerGamma: c.walkerGamma,
-    inspectionFactor: c.inspectionFactor,
-  }));
+  const g = withPressurePath(input, () =>
+    crackGrowth({
+      geometry: c.geometry,
+      initial_mm: c.initial_mm,
+      width_mm: c.width_mm,
+      holeRadius_mm: holeRadius,
+      cracksAtHole: c.cracksAtHole,
+      bulging: c.bulging,
+      form: input.shell.form,
+      shellRadius_mm: e.radii.mean_mm,
+      thickness_mm: e.thickness_mm,
+      hoopMax_MPa: e.hoopMax,
+      hoopMin_MPa: spectrum ? e.hoopMax - spectrum.range_MPa : e.hoopMin,
+      yield_MPa: m.yield_MPa,
+      parisC: m.parisC!,
+      parisM: m.parisM!,
+      toughness_MPaSqrtM: m.toughness_MPaSqrtM!,
+      walkerGamma: c.walkerGamma,
+      inspectionFactor: c.inspectionFactor,
+    }),
+  );
   result.crack = {
     geometry: c.geometry,
     initial_mm: c.initial_mm,
@@ -175,8 +205,12 @@ function addCrack(result: CheckResult, input: ResolvedCheck, e: Evaluation, load
   };
   if (spectrum) {
     result.crack.passes = g.cycles === null ? null : g.cycles / spectrum.cyclesPerPass;
-    result.crack.inspectionInterval_passes = g.inspectionInterval_cycles === null ? null : g.inspectionInterval_cycles / spectrum.cyclesPerPass;
-    if (c.walkerGamma !== undefined) warnings.push("with a spectrum the crack grows under the damage-equivalent range from the peak down; the R-ratio effect is applied to that one equivalent cycle only");
+    result.crack.inspectionInterval_passes =
+      g.inspectionInterval_cycles === null ? null : g.inspectionInterval_cycles / spectrum.cyclesPerPass;
+    if (c.walkerGamma !== undefined)
+      warnings.push(
+        "with a spectrum the crack grows under the damage-equivalent range from the peak down; the R-ratio effect is applied to that one equivalent cycle only",
+      );
   }
   steps.push(...g.steps);
   warnings.push(...g.warnings);
@@ -187,7 +221,8 @@ function withPressurePath<T>(input: ResolvedCheck, fn: () => T): T {
   try {
     return fn();
   } catch (err) {
-    if (err instanceof InputError && err.path.startsWith("pressure.") && input.pressure.max_MPa === undefined) throw new InputError("pressure", err.message);
+    if (err instanceof InputError && err.path.startsWith("pressure.") && input.pressure.max_MPa === undefined)
+      throw new InputError("pressure", err.message);
     throw err;
   }
 }
@@ -208,7 +243,15 @@ function equivalentRange(load: Load, e: Evaluation, m: number): { range_MPa: num
   return {
     range_MPa,
     cyclesPerPass: n,
-    step: step("crack-equivalent-range", "Damage-equivalent nominal hoop range of the spectrum", "Δσ_eq = (Σ nᵢ·Δσᵢ^m / Σ nᵢ)^(1/m)", `Δσ_eq = (Σ over ${load.cycles.length} cycle groups / ${fmt(n)})^(1/${fmt(m)})`, range_MPa, "MPa", "Paris law without load interaction; Schijve, Fatigue of Structures and Materials (from memory)"),
+    step: step(
+      "crack-equivalent-range",
+      "Damage-equivalent nominal hoop range of the spectrum",
+      "Δσ_eq = (Σ nᵢ·Δσᵢ^m / Σ nᵢ)^(1/m)",
+      `Δσ_eq = (Σ over ${load.cycles.length} cycle groups / ${fmt(n)})^(1/${fmt(m)})`,
+      range_MPa,
+      "MPa",
+      "Paris law without load interaction; Schijve, Fatigue of Structures and Materials (from memory)",
+    ),
   };
 }
 
@@ -236,7 +279,8 @@ function lifeVsThickness(ctx: Context, t: number): CheckResult["lifeVsThickness"
   const points: CheckResult["lifeVsThickness"] = [];
   for (let i = 0; i <= 20; i++) {
     const ti = t * (0.6 + i * 0.05);
-    const inner = shell.radiusAt === "inner" ? shell.radius_mm : shell.radiusAt === "mean" ? shell.radius_mm - ti / 2 : shell.radius_mm - ti;
+    const inner =
+      shell.radiusAt === "inner" ? shell.radius_mm : shell.radiusAt === "mean" ? shell.radius_mm - ti / 2 : shell.radius_mm - ti;
     if (inner <= 0) continue;
     points.push({ thickness_mm: ti, life_cycles: evaluate(ctx, ti, 1).life });
   }
@@ -245,7 +289,8 @@ function lifeVsThickness(ctx: Context, t: number): CheckResult["lifeVsThickness"
 
 function theoryReason(requested: string, e: Evaluation): string {
   const ratio = fmt(e.radii.mean_mm / e.thickness_mm);
-  if (requested === "auto") return e.theory === "thin" ? `thin-wall theory: r_m/t = ${ratio} ≥ 10` : `thick-wall (Lamé) theory: r_m/t = ${ratio} < 10`;
+  if (requested === "auto")
+    return e.theory === "thin" ? `thin-wall theory: r_m/t = ${ratio} ≥ 10` : `thick-wall (Lamé) theory: r_m/t = ${ratio} < 10`;
   return `${e.theory}-wall theory as requested (r_m/t = ${ratio})`;
 }
 
@@ -255,25 +300,38 @@ function validityWarnings(ctx: Context, e: Evaluation): string[] {
   const ratio = e.radii.mean_mm / e.thickness_mm;
   if (e.theory === "thin" && ratio < 10) {
     const thick = evaluateThick(ctx, e);
-    w.push(`thin-wall theory was asked for at r_m/t = ${fmt(ratio)}, below 10: it under-estimates the inner-surface hoop stress by ${fmt(100 * (thick / e.hoopMax - 1), 2)} %; use "auto" or "thick"`);
+    w.push(
+      `thin-wall theory was asked for at r_m/t = ${fmt(ratio)}, below 10: it under-estimates the inner-surface hoop stress by ${fmt(100 * (thick / e.hoopMax - 1), 2)} %; use "auto" or "thick"`,
+    );
   }
   if (e.localYield) {
     w.push(
       `the elastic local stress at the notch (${fmt(e.peakMax)} MPa) exceeds the yield strength (${fmt(input.material.yield_MPa)} MPa): the notch yields on the first cycle. ` +
         (input.fatigue.localYield === "shakedown"
           ? "The local mean stress is reduced to Sy − σa (shakedown); a strain-life analysis would be more exact."
-          : "The elastic stresses are kept, which over-states the mean stress (conservative); choose localYield \"shakedown\" or make a strain-life analysis for a closer answer."),
+          : 'The elastic stresses are kept, which over-states the mean stress (conservative); choose localYield "shakedown" or make a strain-life analysis for a closer answer.'),
     );
   }
-  if (2 * e.governing.amplitude > 2 * input.material.yield_MPa) w.push("the local stress range exceeds twice the yield strength: the notch yields in every cycle (reversed plasticity); stress-life results are not valid there");
+  if (2 * e.governing.amplitude > 2 * input.material.yield_MPa)
+    w.push(
+      "the local stress range exceeds twice the yield strength: the notch yields in every cycle (reversed plasticity); stress-life results are not valid there",
+    );
   if (e.life === 0) w.push(`no life: ${e.governing.reason ?? "the mean stress is beyond the chosen criterion's range"}. The check fails.`);
   if (e.governing.status === "no-damage") w.push(e.governing.reason ?? "the cycle never reaches tension");
   if (input.fatigue.curve === "basquin" && !ctx.load.isSpectrum && e.life !== null && e.life > 0) {
-    if (e.life < VALID_LIFE[0]) w.push(`the life (${fmt(e.life)} cycles) is below 10³ cycles, where local plasticity makes stress-life curves unreliable; a strain-life analysis is needed`);
-    if (e.life > VALID_LIFE[1] && ctx.curve.enduranceLimit_MPa === undefined) w.push(`the life (${fmt(e.life)} cycles) extrapolates the curve beyond 10⁷ cycles, past typical test data and with no endurance limit given`);
+    if (e.life < VALID_LIFE[0])
+      w.push(
+        `the life (${fmt(e.life)} cycles) is below 10³ cycles, where local plasticity makes stress-life curves unreliable; a strain-life analysis is needed`,
+      );
+    if (e.life > VALID_LIFE[1] && ctx.curve.enduranceLimit_MPa === undefined)
+      w.push(
+        `the life (${fmt(e.life)} cycles) extrapolates the curve beyond 10⁷ cycles, past typical test data and with no endurance limit given`,
+      );
   }
-  if (input.fatigue.scatterFactor === 1) w.push("the scatter factor is 1: the life is a median estimate with no statistical allowance for the weaker items of a fleet");
-  if (e.damage !== null && e.damage > 1) w.push(`the allowable life (${fmt(e.allowable ?? 0)}) is short of the design life (${fmt(input.fatigue.designLife_cycles)})`);
+  if (input.fatigue.scatterFactor === 1)
+    w.push("the scatter factor is 1: the life is a median estimate with no statistical allowance for the weaker items of a fleet");
+  if (e.damage !== null && e.damage > 1)
+    w.push(`the allowable life (${fmt(e.allowable ?? 0)}) is short of the design life (${fmt(input.fatigue.designLife_cycles)})`);
   return w;
 }
 
@@ -283,7 +341,10 @@ function evaluateThick(ctx: Context, e: Evaluation): number {
 }
 
 /** The fit with its E739 band drawn across the tested amplitudes (not beyond: the band is for the data's range). */
-function fitSummary(fit: ReturnType<typeof fitCoupons>, coupons: { amplitude_MPa: number; runout: boolean }[]): NonNullable<CheckResult["materialFit"]> {
+function fitSummary(
+  fit: ReturnType<typeof fitCoupons>,
+  coupons: { amplitude_MPa: number; runout: boolean }[],
+): NonNullable<CheckResult["materialFit"]> {
   const tested = coupons.filter((c) => !c.runout).map((c) => c.amplitude_MPa);
   const lo = Math.min(...tested);
   const hi = Math.max(...tested);

@@ -33,14 +33,29 @@ const PETERSON = "Peterson's Stress Concentration Factors (Pilkey), §4.5, holes
 export function concentration(cutout: Cutout, lambda: number): Concentration {
   const warnings: string[] = [];
   if (cutout.kind === "none") {
-    return { kt: 1, governs: "plain skin (no opening)", steps: [step("kt", "Stress concentration factor", "Kt = 1", "no opening: Kt = 1", 1, "—", "definition")], warnings };
+    return {
+      kt: 1,
+      governs: "plain skin (no opening)",
+      steps: [step("kt", "Stress concentration factor", "Kt = 1", "no opening: Kt = 1", 1, "—", "definition")],
+      warnings,
+    };
   }
   if (cutout.kind === "given") {
     return {
       kt: cutout.kt,
       governs: "given by the user",
       rootRadius_mm: cutout.rootRadius_mm,
-      steps: [step("kt", "Stress concentration factor (given)", "Kt given", `Kt = ${fmt(cutout.kt)}`, cutout.kt, "—", cutout.basis ? `given: ${cutout.basis}` : "given by the user; its basis must be recorded")],
+      steps: [
+        step(
+          "kt",
+          "Stress concentration factor (given)",
+          "Kt given",
+          `Kt = ${fmt(cutout.kt)}`,
+          cutout.kt,
+          "—",
+          cutout.basis ? `given: ${cutout.basis}` : "given by the user; its basis must be recorded",
+        ),
+      ],
       warnings,
     };
   }
@@ -53,11 +68,45 @@ export function concentration(cutout: Cutout, lambda: number): Concentration {
   const ratio = `λ = σx/σθ = ${fmt(lambda)}`;
   const steps: Step[] =
     cutout.kind === "circular-hole"
-      ? [step("kt", "Kt of a circular hole in the biaxial field (Kirsch)", "Kt = 3 − λ", `Kt = 3 − ${fmt(lambda)}   (${ratio})`, kt, "—", "Kirsch (1898); Peterson's Stress Concentration Factors, Chart 4.1 (biaxial)")]
+      ? [
+          step(
+            "kt",
+            "Kt of a circular hole in the biaxial field (Kirsch)",
+            "Kt = 3 − λ",
+            `Kt = 3 − ${fmt(lambda)}   (${ratio})`,
+            kt,
+            "—",
+            "Kirsch (1898); Peterson's Stress Concentration Factors, Chart 4.1 (biaxial)",
+          ),
+        ]
       : [
-          step("kt-side", "Boundary stress at the ends of the axial half-axis, per unit hoop stress", "σ_A/S = 1 + 2z/h − λ", `σ_A/S = 1 + 2 × ${fmt(z)}/${fmt(h)} − ${fmt(lambda)}`, sA, "—", PETERSON),
-          step("kt-crown", "Boundary stress at the ends of the hoop half-axis, per unit hoop stress", "σ_B/S = λ·(1 + 2h/z) − 1", `σ_B/S = ${fmt(lambda)} × (1 + 2 × ${fmt(h)}/${fmt(z)}) − 1`, sB, "—", PETERSON),
-          step("kt", "Stress concentration factor (larger of the two)", "Kt = max(σ_A, σ_B)/S", `Kt = max(${fmt(sA)}, ${fmt(sB)})`, kt, "—", PETERSON),
+          step(
+            "kt-side",
+            "Boundary stress at the ends of the axial half-axis, per unit hoop stress",
+            "σ_A/S = 1 + 2z/h − λ",
+            `σ_A/S = 1 + 2 × ${fmt(z)}/${fmt(h)} − ${fmt(lambda)}`,
+            sA,
+            "—",
+            PETERSON,
+          ),
+          step(
+            "kt-crown",
+            "Boundary stress at the ends of the hoop half-axis, per unit hoop stress",
+            "σ_B/S = λ·(1 + 2h/z) − 1",
+            `σ_B/S = ${fmt(lambda)} × (1 + 2 × ${fmt(h)}/${fmt(z)}) − 1`,
+            sB,
+            "—",
+            PETERSON,
+          ),
+          step(
+            "kt",
+            "Stress concentration factor (larger of the two)",
+            "Kt = max(σ_A, σ_B)/S",
+            `Kt = max(${fmt(sA)}, ${fmt(sB)})`,
+            kt,
+            "—",
+            PETERSON,
+          ),
         ];
   let rootRadius_mm: number | undefined;
   if (cutout.kind === "circular-hole") rootRadius_mm = cutout.radius_mm;

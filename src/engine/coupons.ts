@@ -108,8 +108,24 @@ export function fitCoupons(coupons: Coupon[]): CouponFit {
   const sigmaF = 10 ** (-A / B) / 2 ** b;
 
   const steps: Step[] = [
-    step("coupons-slope", "Slope of the fitted S-N line", "B = Σ(Xᵢ − X̄)(Yᵢ − Ȳ) / Σ(Xᵢ − X̄)²", `B = ${fmt(sxy)} / ${fmt(sxx)}`, B, "—", E739),
-    step("coupons-intercept", "Intercept of the fitted S-N line", "A = Ȳ − B·X̄", `A = ${fmt(yBar)} − (${fmt(B)}) × ${fmt(xBar)}`, A, "—", E739),
+    step(
+      "coupons-slope",
+      "Slope of the fitted S-N line",
+      "B = Σ(Xᵢ − X̄)(Yᵢ − Ȳ) / Σ(Xᵢ − X̄)²",
+      `B = ${fmt(sxy)} / ${fmt(sxx)}`,
+      B,
+      "—",
+      E739,
+    ),
+    step(
+      "coupons-intercept",
+      "Intercept of the fitted S-N line",
+      "A = Ȳ − B·X̄",
+      `A = ${fmt(yBar)} − (${fmt(B)}) × ${fmt(xBar)}`,
+      A,
+      "—",
+      E739,
+    ),
     step(
       "coupons-scatter",
       "Residual standard deviation of log life",
@@ -119,7 +135,15 @@ export function fitCoupons(coupons: Coupon[]): CouponFit {
       "log10 cycles",
       E739,
     ),
-    step("coupons-r2", "Coefficient of determination", "R² = 1 − SSE/Σ(Yᵢ − Ȳ)²", `R² = 1 − ${fmt(sse)} / ${fmt(syy)}`, rSquared, "—", E739),
+    step(
+      "coupons-r2",
+      "Coefficient of determination",
+      "R² = 1 − SSE/Σ(Yᵢ − Ȳ)²",
+      `R² = 1 − ${fmt(sse)} / ${fmt(syy)}`,
+      rSquared,
+      "—",
+      E739,
+    ),
     step("coupons-b", "Fatigue strength exponent", "b = 1/B", `b = 1 / (${fmt(B)})`, b, "—", BASQUIN),
     step(
       "coupons-sigmaf",

@@ -84,7 +84,8 @@ const PARIS = "Paris & Erdogan, J. Basic Eng. 85 (1963) 528: da/dN = C·ΔK^m (d
 const WALKER = "Walker, ASTM STP 462 (1970); Dowling, Mechanical Behavior of Materials, ch. 11 (from memory)";
 const FOLIAS = "Folias, Int. J. Fracture Mech. 1 (1965) 104: axial crack in a pressurized cylinder (short form, from memory)";
 const NET_SECTION = "Net-section yield of the cracked strip: σmax·W/(W − cracked width) = σy (common practice)";
-const LBB = "Irwin's leak-before-break criterion: a through-wall crack about 2t long must be below critical (e.g. Broek, Elementary Engineering Fracture Mechanics; from memory)";
+const LBB =
+  "Irwin's leak-before-break criterion: a through-wall crack about 2t long must be below critical (e.g. Broek, Elementary Engineering Fracture Mechanics; from memory)";
 const CURVE_POINTS = 60;
 
 /** Stress intensity at crack size a (mm) for a nominal stress σ (MPa), with the bulging factor when used. */
@@ -211,7 +212,10 @@ export function crackGrowth(opts: CrackInput): CrackResult {
 
   const limit = growthLimit_mm(shape);
   if (a0 >= limit) {
-    throw new InputError("crack.initial_mm", `The initial crack (${fmt(a0)} mm) already cuts through the ${fmt(opts.width_mm ?? 0)} mm width.`);
+    throw new InputError(
+      "crack.initial_mm",
+      `The initial crack (${fmt(a0)} mm) already cuts through the ${fmt(opts.width_mm ?? 0)} mm width.`,
+    );
   }
 
   // Bulging: Folias's factor is for cylinders; a sphere's factor differs and is not applied.
@@ -269,7 +273,17 @@ export function crackGrowth(opts: CrackInput): CrackResult {
 
   const factor = describeFactor(shape);
   const Y0 = geometryFactor(a0, shape);
-  steps.push(step("crack-y-initial", "Geometry factor at the initial crack", factor.equation, `Y(${fmt(a0)} mm) = ${fmt(Y0)}`, Y0, "—", factor.source));
+  steps.push(
+    step(
+      "crack-y-initial",
+      "Geometry factor at the initial crack",
+      factor.equation,
+      `Y(${fmt(a0)} mm) = ${fmt(Y0)}`,
+      Y0,
+      "—",
+      factor.source,
+    ),
+  );
   if (bulge) {
     const c0 = bulgingHalfLength_mm(a0, shape);
     steps.push(
@@ -400,9 +414,7 @@ export function crackGrowth(opts: CrackInput): CrackResult {
       step(
         "crack-cycles-hand",
         "Hand check: cycles with the geometry factor held at its initial value",
-        m === 2
-          ? "N = ln(a_c/a₀) / (C·k²·π), k = ΔK₀/√(πa₀)"
-          : "N = (a₀^(1−m/2) − a_c^(1−m/2)) / (C·(k·√π)^m·(m/2 − 1)), k = ΔK₀/√(πa₀)",
+        m === 2 ? "N = ln(a_c/a₀) / (C·k²·π), k = ΔK₀/√(πa₀)" : "N = (a₀^(1−m/2) − a_c^(1−m/2)) / (C·(k·√π)^m·(m/2 − 1)), k = ΔK₀/√(πa₀)",
         `k = ${fmt(k0)} MPa, a₀ = ${fmt(a0 / 1000)} m, a_c = ${fmt(ac / 1000)} m, C = ${fmt(C)}, m = ${fmt(m)}`,
         hand,
         "cycles",

@@ -3,7 +3,17 @@ import type { ResolvedCheck } from "../schema/resolve.ts";
 import { concentration, type Concentration } from "./concentration.ts";
 import type { Load } from "./load.ts";
 import { CRITERION_LABEL, CRITERION_SOURCE, criterionWorking, equivalentAmplitude, type Strengths } from "./meanStress.ts";
-import { chooseTheory, membraneSteps, radii, unitStresses, vonMises, THIN_WALL_LIMIT, type Radii, type Theory, type UnitStresses } from "./membrane.ts";
+import {
+  chooseTheory,
+  membraneSteps,
+  radii,
+  unitStresses,
+  vonMises,
+  THIN_WALL_LIMIT,
+  type Radii,
+  type Theory,
+  type UnitStresses,
+} from "./membrane.ts";
 import { notchFactor, type NotchFactor } from "./notch.ts";
 import { basquinLife, lifeStep, type Curve } from "./sn.ts";
 import { fmt, step, type Step } from "./step.ts";
@@ -84,7 +94,12 @@ export interface Evaluation {
   damage: number | null;
 }
 
-export function evaluate(ctx: Context, thickness_mm: number, scale: number, criterion: MeanStressCriterion = ctx.input.fatigue.meanStress): Evaluation {
+export function evaluate(
+  ctx: Context,
+  thickness_mm: number,
+  scale: number,
+  criterion: MeanStressCriterion = ctx.input.fatigue.meanStress,
+): Evaluation {
   const { input, load } = ctx;
   const shell = input.shell;
   const r = radii(shell.radius_mm, shell.radiusAt, thickness_mm);
@@ -170,7 +185,10 @@ function cycleOutcome(ctx: Context, criterion: MeanStressCriterion, amplitude: n
     m = input.material.yield_MPa - amplitude;
   }
   if (input.fatigue.curve === "welded") {
-    const w = weldedLife(2 * amplitude, input.fatigue.detailCategory_MPa as number, { variableAmplitude: spectrum, gammaMf: input.fatigue.gammaMf });
+    const w = weldedLife(2 * amplitude, input.fatigue.detailCategory_MPa as number, {
+      variableAmplitude: spectrum,
+      gammaMf: input.fatigue.gammaMf,
+    });
     return { amplitude, mean: m, sigmaAr: amplitude, life: w.life_cycles, status: w.life_cycles === null ? "unlimited" : "ok" };
   }
   const eq = equivalentAmplitude(criterion, amplitude, m, strengths);
@@ -199,48 +217,225 @@ export function evaluationSteps(ctx: Context, e: Evaluation, criterion: MeanStre
   steps.push(...membraneSteps(input.shell.form, e.theory, e.radii, t, e.pMax, e.unit));
   const extra = input.axialExtra;
   if (extra && (extra.max_MPa !== 0 || extra.min_MPa !== 0)) {
-    steps.push(step("axial-total", "Axial stress with the added axial load", "σx = σx,p + σx,extra", `σx = ${fmt(e.axialMax - extra.max_MPa)} + ${fmt(extra.max_MPa)}`, e.axialMax, "MPa", "superposition"));
+    steps.push(
+      step(
+        "axial-total",
+        "Axial stress with the added axial load",
+        "σx = σx,p + σx,extra",
+        `σx = ${fmt(e.axialMax - extra.max_MPa)} + ${fmt(extra.max_MPa)}`,
+        e.axialMax,
+        "MPa",
+        "superposition",
+      ),
+    );
   }
-  if (e.pMin !== 0) steps.push(step("hoop-min", "Hoop stress at the minimum pressure", "σθ,min = σθ·p_min/p_max", `σθ,min = ${fmt(e.hoopMax)} × ${fmt(e.pMin)}/${fmt(e.pMax)}`, e.hoopMin, "MPa", "linear elasticity: stresses proportional to pressure"));
+  if (e.pMin !== 0)
+    steps.push(
+      step(
+        "hoop-min",
+        "Hoop stress at the minimum pressure",
+        "σθ,min = σθ·p_min/p_max",
+        `σθ,min = ${fmt(e.hoopMax)} × ${fmt(e.pMin)}/${fmt(e.pMax)}`,
+        e.hoopMin,
+        "MPa",
+        "linear elasticity: stresses proportional to pressure",
+      ),
+    );
   const vmEq = e.theory === "thick" ? "σvm = √(½[(σθ − σx)² + (σx − σr)² + (σr − σθ)²])" : "σvm = √(σθ² − σθ·σx + σx²)";
-  const vmSub = e.theory === "thick" ? `σvm = √(½[(${fmt(e.hoopMax)} − ${fmt(e.axialMax)})² + (${fmt(e.axialMax)} + ${fmt(e.pMax)})² + (−${fmt(e.pMax)} − ${fmt(e.hoopMax)})²])` : `σvm = √(${fmt(e.hoopMax)}² − ${fmt(e.hoopMax)} × ${fmt(e.axialMax)} + ${fmt(e.axialMax)}²)`;
-  steps.push(step("von-mises", "von Mises stress at the maximum pressure", vmEq, vmSub, e.vonMisesMax, "MPa", "von Mises criterion; Dowling, Mechanical Behavior of Materials, §7.5"));
+  const vmSub =
+    e.theory === "thick"
+      ? `σvm = √(½[(${fmt(e.hoopMax)} − ${fmt(e.axialMax)})² + (${fmt(e.axialMax)} + ${fmt(e.pMax)})² + (−${fmt(e.pMax)} − ${fmt(e.hoopMax)})²])`
+      : `σvm = √(${fmt(e.hoopMax)}² − ${fmt(e.hoopMax)} × ${fmt(e.axialMax)} + ${fmt(e.axialMax)}²)`;
+  steps.push(
+    step(
+      "von-mises",
+      "von Mises stress at the maximum pressure",
+      vmEq,
+      vmSub,
+      e.vonMisesMax,
+      "MPa",
+      "von Mises criterion; Dowling, Mechanical Behavior of Materials, §7.5",
+    ),
+  );
   const yf = input.static?.yieldFactor ?? 1.5;
-  steps.push(step("static-allowable", "Allowable membrane stress", "σ_allow = Sy/n_y", `σ_allow = ${fmt(input.material.yield_MPa)}/${fmt(yf)}`, e.staticAllowable, "MPa", "yield factor 1.5 by default, i.e. 2/3 of yield (ASME II-D Mandatory Appendix 1 basis, from memory)"));
-  steps.push(step("static-margin", "Static margin", "MS = σ_allow/σvm − 1", `MS = ${fmt(e.staticAllowable)}/${fmt(e.vonMisesMax)} − 1`, e.staticMargin, "—", "margin of safety, common practice"));
-  if (input.cutout.kind !== "none") steps.push(step("biaxial", "Biaxial ratio at the opening", "λ = σx/σθ", `λ = ${fmt(e.axialMax)}/${fmt(e.hoopMax)}`, e.lambda, "—", "Peterson's Stress Concentration Factors, §4.5"));
+  steps.push(
+    step(
+      "static-allowable",
+      "Allowable membrane stress",
+      "σ_allow = Sy/n_y",
+      `σ_allow = ${fmt(input.material.yield_MPa)}/${fmt(yf)}`,
+      e.staticAllowable,
+      "MPa",
+      "yield factor 1.5 by default, i.e. 2/3 of yield (ASME II-D Mandatory Appendix 1 basis, from memory)",
+    ),
+  );
+  steps.push(
+    step(
+      "static-margin",
+      "Static margin",
+      "MS = σ_allow/σvm − 1",
+      `MS = ${fmt(e.staticAllowable)}/${fmt(e.vonMisesMax)} − 1`,
+      e.staticMargin,
+      "—",
+      "margin of safety, common practice",
+    ),
+  );
+  if (input.cutout.kind !== "none")
+    steps.push(
+      step(
+        "biaxial",
+        "Biaxial ratio at the opening",
+        "λ = σx/σθ",
+        `λ = ${fmt(e.axialMax)}/${fmt(e.hoopMax)}`,
+        e.lambda,
+        "—",
+        "Peterson's Stress Concentration Factors, §4.5",
+      ),
+    );
   steps.push(...e.conc.steps, ...e.notch.steps);
-  steps.push(step("peak-max", "Local stress at the notch, maximum pressure", "σ_max = Kf·σθ,max", `σ_max = ${fmt(e.notch.kf)} × ${fmt(e.hoopMax)}`, e.peakMax, "MPa", "check format convention: local = Kf × nominal hoop"));
-  steps.push(step("peak-min", "Local stress at the notch, minimum pressure", "σ_min = Kf·σθ,min", `σ_min = ${fmt(e.notch.kf)} × ${fmt(e.hoopMin)}`, e.peakMin, "MPa", "check format convention: local = Kf × nominal hoop"));
+  steps.push(
+    step(
+      "peak-max",
+      "Local stress at the notch, maximum pressure",
+      "σ_max = Kf·σθ,max",
+      `σ_max = ${fmt(e.notch.kf)} × ${fmt(e.hoopMax)}`,
+      e.peakMax,
+      "MPa",
+      "check format convention: local = Kf × nominal hoop",
+    ),
+  );
+  steps.push(
+    step(
+      "peak-min",
+      "Local stress at the notch, minimum pressure",
+      "σ_min = Kf·σθ,min",
+      `σ_min = ${fmt(e.notch.kf)} × ${fmt(e.hoopMin)}`,
+      e.peakMin,
+      "MPa",
+      "check format convention: local = Kf × nominal hoop",
+    ),
+  );
   const g = e.governing;
   const label = load.isSpectrum ? " (largest cycle)" : "";
-  steps.push(step("amplitude", `Local stress amplitude${label}`, "σa = (σ_max − σ_min)/2", `σa = (${fmt(g.mean + g.amplitude)} − ${fmt(g.mean - g.amplitude)})/2`, g.amplitude, "MPa", "definition (Dowling, §9.2)"));
-  steps.push(step("mean", `Local mean stress${label}`, "σm = (σ_max + σ_min)/2", `σm = (${fmt(g.mean + g.amplitude)} + ${fmt(g.mean - g.amplitude)})/2`, g.mean, "MPa", input.fatigue.localYield === "shakedown" && e.localYield ? "shakedown: σm = Sy − σa (Dowling §10.7, from memory)" : "definition (Dowling, §9.2)"));
+  steps.push(
+    step(
+      "amplitude",
+      `Local stress amplitude${label}`,
+      "σa = (σ_max − σ_min)/2",
+      `σa = (${fmt(g.mean + g.amplitude)} − ${fmt(g.mean - g.amplitude)})/2`,
+      g.amplitude,
+      "MPa",
+      "definition (Dowling, §9.2)",
+    ),
+  );
+  steps.push(
+    step(
+      "mean",
+      `Local mean stress${label}`,
+      "σm = (σ_max + σ_min)/2",
+      `σm = (${fmt(g.mean + g.amplitude)} + ${fmt(g.mean - g.amplitude)})/2`,
+      g.mean,
+      "MPa",
+      input.fatigue.localYield === "shakedown" && e.localYield
+        ? "shakedown: σm = Sy − σa (Dowling §10.7, from memory)"
+        : "definition (Dowling, §9.2)",
+    ),
+  );
   if (input.fatigue.curve === "welded") {
-    steps.push(step("weld-range", `Stress range at the weld detail${label}`, "Δσ = 2σa (no mean-stress correction at welds)", `Δσ = 2 × ${fmt(g.amplitude)}`, 2 * g.amplitude, "MPa", "EN 1993-1-9 §7.1: stress range, no mean-stress correction"));
+    steps.push(
+      step(
+        "weld-range",
+        `Stress range at the weld detail${label}`,
+        "Δσ = 2σa (no mean-stress correction at welds)",
+        `Δσ = 2 × ${fmt(g.amplitude)}`,
+        2 * g.amplitude,
+        "MPa",
+        "EN 1993-1-9 §7.1: stress range, no mean-stress correction",
+      ),
+    );
   } else {
     const w = criterionWorking(criterion, g.amplitude, g.mean, ctx.strengths);
-    steps.push(step("sigma-ar", `Equivalent fully reversed amplitude (${CRITERION_LABEL[criterion]})${label}`, w.equation, w.substituted, g.sigmaAr, "MPa", CRITERION_SOURCE[criterion]));
+    steps.push(
+      step(
+        "sigma-ar",
+        `Equivalent fully reversed amplitude (${CRITERION_LABEL[criterion]})${label}`,
+        w.equation,
+        w.substituted,
+        g.sigmaAr,
+        "MPa",
+        CRITERION_SOURCE[criterion],
+      ),
+    );
     if (!load.isSpectrum && g.sigmaAr !== null && g.status !== "no-damage") steps.push(lifeStep(g.sigmaAr, ctx.curve, g.life));
   }
   if (load.isSpectrum) {
     if (e.life === 0) {
-      steps.push(step("miner-damage", "Fatigue damage per pass through the load history", "D = Σ nᵢ/Nᵢ", "a cycle has no answer under the criterion ⇒ no life", null, "—", "Palmgren–Miner rule"));
+      steps.push(
+        step(
+          "miner-damage",
+          "Fatigue damage per pass through the load history",
+          "D = Σ nᵢ/Nᵢ",
+          "a cycle has no answer under the criterion ⇒ no life",
+          null,
+          "—",
+          "Palmgren–Miner rule",
+        ),
+      );
     } else {
       const k = e.notch.kf * e.unit.hoop * e.scale;
       const lifeOf = (range: number, mean: number) => cycleOutcome(ctx, criterion, (k * range) / 2, k * mean, true).life;
       steps.push(...minerDamage(load.cycles, lifeOf).steps);
     }
   } else if (input.fatigue.curve === "welded") {
-    steps.push(step("life", "Life from the detail-category curve", "N = 2×10⁶·(Δσ_C/(γMf·Δσ))³ above Δσ_D", `Δσ = ${fmt(2 * g.amplitude)} MPa, Δσ_C = ${fmt(input.fatigue.detailCategory_MPa ?? 0)} MPa`, e.life, "cycles", "EN 1993-1-9 §7, Figure 7.1"));
+    steps.push(
+      step(
+        "life",
+        "Life from the detail-category curve",
+        "N = 2×10⁶·(Δσ_C/(γMf·Δσ))³ above Δσ_D",
+        `Δσ = ${fmt(2 * g.amplitude)} MPa, Δσ_C = ${fmt(input.fatigue.detailCategory_MPa ?? 0)} MPa`,
+        e.life,
+        "cycles",
+        "EN 1993-1-9 §7, Figure 7.1",
+      ),
+    );
   }
   const sf = input.fatigue.scatterFactor;
   const unit = load.isSpectrum ? "passes" : "cycles";
   if (e.life !== null) {
-    steps.push(step("allowable", "Allowable life (scatter factor applied)", "N_allow = N/SF", `N_allow = ${fmt(e.life)}/${fmt(sf)}`, e.allowable, unit, "scatter factor on life, common practice in fatigue substantiation"));
-    steps.push(step("damage", "Damage against the design life", "D = N_design/N_allow", `D = ${fmt(input.fatigue.designLife_cycles)}/${fmt(e.allowable ?? 0)}`, e.damage, "—", "Palmgren–Miner; D ≤ 1 passes"));
+    steps.push(
+      step(
+        "allowable",
+        "Allowable life (scatter factor applied)",
+        "N_allow = N/SF",
+        `N_allow = ${fmt(e.life)}/${fmt(sf)}`,
+        e.allowable,
+        unit,
+        "scatter factor on life, common practice in fatigue substantiation",
+      ),
+    );
+    steps.push(
+      step(
+        "damage",
+        "Damage against the design life",
+        "D = N_design/N_allow",
+        `D = ${fmt(input.fatigue.designLife_cycles)}/${fmt(e.allowable ?? 0)}`,
+        e.damage,
+        "—",
+        "Palmgren–Miner; D ≤ 1 passes",
+      ),
+    );
   } else {
-    steps.push(step("damage", "Damage against the design life", "N unlimited ⇒ D = 0", "unlimited life ⇒ D = 0", 0, "—", "endurance limit (Dowling, §9.4)"));
+    steps.push(
+      step(
+        "damage",
+        "Damage against the design life",
+        "N unlimited ⇒ D = 0",
+        "unlimited life ⇒ D = 0",
+        0,
+        "—",
+        "endurance limit (Dowling, §9.4)",
+      ),
+    );
   }
   return steps;
 }

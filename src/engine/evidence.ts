@@ -131,8 +131,7 @@ export function evaluateEvidence(input: EvidenceInput, designLife_cycles: number
     ),
   );
 
-  const sampleStdDev =
-    n >= 2 ? Math.sqrt(logs.reduce((acc, x) => acc + (x - logMean) ** 2, 0) / (n - 1)) : null;
+  const sampleStdDev = n >= 2 ? Math.sqrt(logs.reduce((acc, x) => acc + (x - logMean) ** 2, 0) / (n - 1)) : null;
   if (sampleStdDev !== null) {
     steps.push(
       step(

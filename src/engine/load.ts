@@ -35,7 +35,17 @@ export function resolveLoad(p: ResolvedCheck["pressure"]): Load {
       cycles,
       isSpectrum: true,
       historyPoints: p.history_MPa.length,
-      steps: [step("rainflow", "Rainflow count of the pressure history", "cycles = rainflow(p(t))", `${p.history_MPa.length} points → ${cycles.length} distinct cycles, ${fmt(total)} cycles in all${binned}`, total, "cycles", "ASTM E1049-85, §5.4.4 (rainflow counting)")],
+      steps: [
+        step(
+          "rainflow",
+          "Rainflow count of the pressure history",
+          "cycles = rainflow(p(t))",
+          `${p.history_MPa.length} points → ${cycles.length} distinct cycles, ${fmt(total)} cycles in all${binned}`,
+          total,
+          "cycles",
+          "ASTM E1049-85, §5.4.4 (rainflow counting)",
+        ),
+      ],
     };
   }
   if (p.blocks) {
@@ -47,13 +57,30 @@ export function resolveLoad(p: ResolvedCheck["pressure"]): Load {
       min_MPa: Math.min(...p.blocks.map((b) => b.min_MPa)),
       cycles,
       isSpectrum: true,
-      steps: [step("blocks", "Block spectrum", "one pass = Σ blocks", `${p.blocks.length} blocks, ${fmt(total)} cycles per pass`, total, "cycles", "block loading, Palmgren–Miner (Dowling, Mechanical Behavior of Materials, §9.6)")],
+      steps: [
+        step(
+          "blocks",
+          "Block spectrum",
+          "one pass = Σ blocks",
+          `${p.blocks.length} blocks, ${fmt(total)} cycles per pass`,
+          total,
+          "cycles",
+          "block loading, Palmgren–Miner (Dowling, Mechanical Behavior of Materials, §9.6)",
+        ),
+      ],
     };
   }
   const min = p.min_MPa ?? 0;
   if (p.fromAltitude) {
     const { differential_MPa, steps } = cabinDifferential(p.fromAltitude.flight_m, p.fromAltitude.cabin_m);
-    return { source: "altitude", max_MPa: differential_MPa, min_MPa: min, cycles: [single(differential_MPa, min)], isSpectrum: false, steps };
+    return {
+      source: "altitude",
+      max_MPa: differential_MPa,
+      min_MPa: min,
+      cycles: [single(differential_MPa, min)],
+      isSpectrum: false,
+      steps,
+    };
   }
   const max = p.max_MPa as number;
   return { source: "direct", max_MPa: max, min_MPa: min, cycles: [single(max, min)], isSpectrum: false, steps: [] };

@@ -57,7 +57,9 @@ export function equivalentAmplitude(c: MeanStressCriterion, amplitude: number, m
     case "soderberg":
       return m <= 0 ? reversed(a) : ratio(c, a, m, s.yield_MPa, "the yield strength", 1 - m / s.yield_MPa);
     case "asme-elliptic":
-      return m <= 0 ? reversed(a) : ratio(c, a, m, s.yield_MPa, "the yield strength", m < s.yield_MPa ? Math.sqrt(1 - (m / s.yield_MPa) ** 2) : 0);
+      return m <= 0
+        ? reversed(a)
+        : ratio(c, a, m, s.yield_MPa, "the yield strength", m < s.yield_MPa ? Math.sqrt(1 - (m / s.yield_MPa) ** 2) : 0);
     case "morrow":
       return ratio(c, a, m, s.fatigueStrengthCoefficient_MPa, "σ'f", 1 - m / s.fatigueStrengthCoefficient_MPa);
     case "swt":
@@ -75,7 +77,11 @@ function reversed(a: number): Equivalent {
 /** σar = σa / denominator, or no answer once the mean reaches the strength the criterion uses. */
 function ratio(c: MeanStressCriterion, a: number, m: number, limit: number, limitName: string, denominator: number): Equivalent {
   if (denominator > 0) return { sigmaAr: a / denominator, noDamage: false };
-  return { sigmaAr: null, noDamage: false, reason: `the mean stress ${fmt(m)} MPa reaches ${limitName} (${fmt(limit)} MPa), beyond which ${CRITERION_LABEL[c]} has no answer` };
+  return {
+    sigmaAr: null,
+    noDamage: false,
+    reason: `the mean stress ${fmt(m)} MPa reaches ${limitName} (${fmt(limit)} MPa), beyond which ${CRITERION_LABEL[c]} has no answer`,
+  };
 }
 
 function noTension(c: MeanStressCriterion): Equivalent {
@@ -83,7 +89,12 @@ function noTension(c: MeanStressCriterion): Equivalent {
 }
 
 /** The criterion's equation in symbols and with the numbers put in, for the worked step. */
-export function criterionWorking(c: MeanStressCriterion, amplitude: number, mean: number, s: Strengths): { equation: string; substituted: string } {
+export function criterionWorking(
+  c: MeanStressCriterion,
+  amplitude: number,
+  mean: number,
+  s: Strengths,
+): { equation: string; substituted: string } {
   const A = fmt(amplitude);
   const M = fmt(mean);
   const max = fmt(mean + amplitude);

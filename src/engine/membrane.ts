@@ -59,7 +59,8 @@ export function vonMises(s1: number, s2: number, s3: number): number {
 }
 
 const ROARK = "Roark's Formulas for Stress and Strain, Ch. 13 (thin-walled pressure vessels)";
-const LAME = "Lamé thick-wall solution at the inner surface, closed ends (Roark's Formulas for Stress and Strain, Ch. 13, thick-walled vessels)";
+const LAME =
+  "Lamé thick-wall solution at the inner surface, closed ends (Roark's Formulas for Stress and Strain, Ch. 13, thick-walled vessels)";
 
 export function membraneSteps(form: ShellForm, theory: Theory, r: Radii, t: number, p: number, u: UnitStresses): Step[] {
   if (theory === "thin") {
@@ -69,19 +70,53 @@ export function membraneSteps(form: ShellForm, theory: Theory, r: Radii, t: numb
           step("hoop", "Hoop membrane stress", "σθ = p·r/t", `σθ = ${fmt(p)} × ${rm} / ${fmt(t)}`, p * u.hoop, "MPa", ROARK),
           step("axial", "Axial membrane stress", "σx = p·r/(2t)", `σx = ${fmt(p)} × ${rm} / (2 × ${fmt(t)})`, p * u.axial, "MPa", ROARK),
         ]
-      : [step("hoop", "Membrane stress (sphere, equal in all directions)", "σθ = σφ = p·r/(2t)", `σθ = ${fmt(p)} × ${rm} / (2 × ${fmt(t)})`, p * u.hoop, "MPa", ROARK)];
+      : [
+          step(
+            "hoop",
+            "Membrane stress (sphere, equal in all directions)",
+            "σθ = σφ = p·r/(2t)",
+            `σθ = ${fmt(p)} × ${rm} / (2 × ${fmt(t)})`,
+            p * u.hoop,
+            "MPa",
+            ROARK,
+          ),
+        ];
   }
   const a = fmt(r.inner_mm);
   const b = fmt(r.outer_mm);
   if (form === "cylinder") {
     return [
-      step("hoop", "Hoop stress at the inner surface (Lamé)", "σθ = p·(b² + a²)/(b² − a²)", `σθ = ${fmt(p)} × (${b}² + ${a}²)/(${b}² − ${a}²)`, p * u.hoop, "MPa", LAME),
-      step("axial", "Axial stress, closed ends (Lamé)", "σx = p·a²/(b² − a²)", `σx = ${fmt(p)} × ${a}²/(${b}² − ${a}²)`, p * u.axial, "MPa", LAME),
+      step(
+        "hoop",
+        "Hoop stress at the inner surface (Lamé)",
+        "σθ = p·(b² + a²)/(b² − a²)",
+        `σθ = ${fmt(p)} × (${b}² + ${a}²)/(${b}² − ${a}²)`,
+        p * u.hoop,
+        "MPa",
+        LAME,
+      ),
+      step(
+        "axial",
+        "Axial stress, closed ends (Lamé)",
+        "σx = p·a²/(b² − a²)",
+        `σx = ${fmt(p)} × ${a}²/(${b}² − ${a}²)`,
+        p * u.axial,
+        "MPa",
+        LAME,
+      ),
       step("radial", "Radial stress at the inner surface", "σr = −p", `σr = −${fmt(p)}`, -p, "MPa", LAME),
     ];
   }
   return [
-    step("hoop", "Tangential stress at the inner surface (Lamé, sphere)", "σθ = p·(b³ + 2a³)/(2(b³ − a³))", `σθ = ${fmt(p)} × (${b}³ + 2 × ${a}³)/(2 × (${b}³ − ${a}³))`, p * u.hoop, "MPa", LAME),
+    step(
+      "hoop",
+      "Tangential stress at the inner surface (Lamé, sphere)",
+      "σθ = p·(b³ + 2a³)/(2(b³ − a³))",
+      `σθ = ${fmt(p)} × (${b}³ + 2 × ${a}³)/(2 × (${b}³ − ${a}³))`,
+      p * u.hoop,
+      "MPa",
+      LAME,
+    ),
     step("radial", "Radial stress at the inner surface", "σr = −p", `σr = −${fmt(p)}`, -p, "MPa", LAME),
   ];
 }

@@ -37,11 +37,7 @@ const MINER = "Palmgren–Miner rule: Miner, J. Appl. Mech. 12 (1945) A159; Dowl
  * Sum the damage of counted cycles. `lifeOf(range, mean)` gives cycles to failure, or null
  * where the life is unlimited. `top` limits the contributions listed (default 10).
  */
-export function minerDamage(
-  cycles: Cycle[],
-  lifeOf: (range: number, mean: number) => number | null,
-  top = 10,
-): MinerResult {
+export function minerDamage(cycles: Cycle[], lifeOf: (range: number, mean: number) => number | null, top = 10): MinerResult {
   const all: DamageContribution[] = [];
   let damagePerPass = 0;
   let cyclesWithoutDamage = 0;

@@ -37,23 +37,87 @@ export function notchFactor(
     if (opts.constant === "peterson") {
       const alpha = petersonAlpha_mm(opts.family, opts.ultimate_MPa);
       if (opts.family !== "aluminium") {
-        steps.push(step("notch-alpha", "Peterson's material constant (steels)", "α = 0.0254·(2070/Su)^1.8", `α = 0.0254 × (2070/${fmt(opts.ultimate_MPa)})^1.8`, alpha, "mm", "Dowling, Mechanical Behavior of Materials, eq. 10.9 (from memory)"));
-        if (opts.ultimate_MPa < 550) warnings.push("Peterson's constant for steels is fitted for ultimate strengths above about 550 MPa; below that q is an extrapolation");
+        steps.push(
+          step(
+            "notch-alpha",
+            "Peterson's material constant (steels)",
+            "α = 0.0254·(2070/Su)^1.8",
+            `α = 0.0254 × (2070/${fmt(opts.ultimate_MPa)})^1.8`,
+            alpha,
+            "mm",
+            "Dowling, Mechanical Behavior of Materials, eq. 10.9 (from memory)",
+          ),
+        );
+        if (opts.ultimate_MPa < 550)
+          warnings.push(
+            "Peterson's constant for steels is fitted for ultimate strengths above about 550 MPa; below that q is an extrapolation",
+          );
       } else {
-        steps.push(step("notch-alpha", "Peterson's material constant (aluminium alloys)", "α = 0.51 mm", "α = 0.51", alpha, "mm", "Dowling, Mechanical Behavior of Materials, §10.3 (from memory)"));
+        steps.push(
+          step(
+            "notch-alpha",
+            "Peterson's material constant (aluminium alloys)",
+            "α = 0.51 mm",
+            "α = 0.51",
+            alpha,
+            "mm",
+            "Dowling, Mechanical Behavior of Materials, §10.3 (from memory)",
+          ),
+        );
       }
       q = 1 / (1 + alpha / rho);
-      steps.push(step("notch-q", "Notch sensitivity (Peterson)", "q = 1/(1 + α/ρ)", `q = 1/(1 + ${fmt(alpha)}/${fmt(rho)})`, q, "—", "Peterson; Dowling eq. 10.8"));
+      steps.push(
+        step(
+          "notch-q",
+          "Notch sensitivity (Peterson)",
+          "q = 1/(1 + α/ρ)",
+          `q = 1/(1 + ${fmt(alpha)}/${fmt(rho)})`,
+          q,
+          "—",
+          "Peterson; Dowling eq. 10.8",
+        ),
+      );
     } else {
       const sqrtA = neuberSqrtA_sqrtMm(opts.ultimate_MPa);
       const suK = opts.ultimate_MPa / 6.894757;
-      if (suK < 50 || suK > 250) warnings.push("Neuber's constant is fitted for ultimate strengths of 50–250 kpsi (345–1720 MPa); this material lies outside");
-      steps.push(step("notch-sqrta", "Neuber's constant (steels)", "√a = 0.246 − 3.08×10⁻³Su + 1.51×10⁻⁵Su² − 2.67×10⁻⁸Su³  (Su in kpsi, √in)", `√a = (0.246 − 3.08×10⁻³ × ${fmt(suK)} + …) × √25.4`, sqrtA, "√mm", "Shigley's Mechanical Engineering Design, eq. 6-35a"));
+      if (suK < 50 || suK > 250)
+        warnings.push("Neuber's constant is fitted for ultimate strengths of 50–250 kpsi (345–1720 MPa); this material lies outside");
+      steps.push(
+        step(
+          "notch-sqrta",
+          "Neuber's constant (steels)",
+          "√a = 0.246 − 3.08×10⁻³Su + 1.51×10⁻⁵Su² − 2.67×10⁻⁸Su³  (Su in kpsi, √in)",
+          `√a = (0.246 − 3.08×10⁻³ × ${fmt(suK)} + …) × √25.4`,
+          sqrtA,
+          "√mm",
+          "Shigley's Mechanical Engineering Design, eq. 6-35a",
+        ),
+      );
       q = 1 / (1 + sqrtA / Math.sqrt(rho));
-      steps.push(step("notch-q", "Notch sensitivity (Neuber)", "q = 1/(1 + √a/√ρ)", `q = 1/(1 + ${fmt(sqrtA)}/√${fmt(rho)})`, q, "—", "Shigley's Mechanical Engineering Design, eq. 6-34"));
+      steps.push(
+        step(
+          "notch-q",
+          "Notch sensitivity (Neuber)",
+          "q = 1/(1 + √a/√ρ)",
+          `q = 1/(1 + ${fmt(sqrtA)}/√${fmt(rho)})`,
+          q,
+          "—",
+          "Shigley's Mechanical Engineering Design, eq. 6-34",
+        ),
+      );
     }
   }
   const kf = 1 + q * (kt - 1);
-  steps.push(step("kf", "Fatigue notch factor", "Kf = 1 + q·(Kt − 1)", `Kf = 1 + ${fmt(q)} × (${fmt(kt)} − 1)`, kf, "—", "Peterson; Shigley's Mechanical Engineering Design, eq. 6-32"));
+  steps.push(
+    step(
+      "kf",
+      "Fatigue notch factor",
+      "Kf = 1 + q·(Kt − 1)",
+      `Kf = 1 + ${fmt(q)} × (${fmt(kt)} − 1)`,
+      kf,
+      "—",
+      "Peterson; Shigley's Mechanical Engineering Design, eq. 6-32",
+    ),
+  );
   return { q, kf, steps, warnings };
 }

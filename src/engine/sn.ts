@@ -51,7 +51,11 @@ export interface Modifiers {
   sizeDiameter_mm?: number;
 }
 
-export function modifyingFactors(mods: Modifiers | undefined, ultimate_MPa: number, normalQuantile: (p: number) => number): { factor: number; steps: Step[]; warnings: string[] } {
+export function modifyingFactors(
+  mods: Modifiers | undefined,
+  ultimate_MPa: number,
+  normalQuantile: (p: number) => number,
+): { factor: number; steps: Step[]; warnings: string[] } {
   const steps: Step[] = [];
   const warnings: string[] = [];
   let factor = 1;
@@ -60,22 +64,64 @@ export function modifyingFactors(mods: Modifiers | undefined, ultimate_MPa: numb
     const [a, b] = SURFACE[mods.surface];
     const ka = Math.min(1, a * ultimate_MPa ** b);
     factor *= ka;
-    steps.push(step("marin-ka", `Surface factor (${mods.surface})`, "ka = a·Su^b", `ka = ${fmt(a)} × ${fmt(ultimate_MPa)}^(${fmt(b)})`, ka, "—", "Shigley's Mechanical Engineering Design, eq. 6-19 and Table 6-2"));
+    steps.push(
+      step(
+        "marin-ka",
+        `Surface factor (${mods.surface})`,
+        "ka = a·Su^b",
+        `ka = ${fmt(a)} × ${fmt(ultimate_MPa)}^(${fmt(b)})`,
+        ka,
+        "—",
+        "Shigley's Mechanical Engineering Design, eq. 6-19 and Table 6-2",
+      ),
+    );
   }
   if (mods.sizeDiameter_mm !== undefined) {
     const d = mods.sizeDiameter_mm;
     const kb = d <= 51 ? (d / 7.62) ** -0.107 : 1.51 * d ** -0.157;
     factor *= kb;
-    steps.push(step("marin-kb", "Size factor", d <= 51 ? "kb = (d/7.62)^−0.107" : "kb = 1.51·d^−0.157", d <= 51 ? `kb = (${fmt(d)}/7.62)^(−0.107)` : `kb = 1.51 × ${fmt(d)}^(−0.157)`, kb, "—", "Shigley's Mechanical Engineering Design, eq. 6-20"));
-    warnings.push("a size factor was applied although membrane loading is axial, for which Shigley takes kb = 1; it is kept because it was asked for");
+    steps.push(
+      step(
+        "marin-kb",
+        "Size factor",
+        d <= 51 ? "kb = (d/7.62)^−0.107" : "kb = 1.51·d^−0.157",
+        d <= 51 ? `kb = (${fmt(d)}/7.62)^(−0.107)` : `kb = 1.51 × ${fmt(d)}^(−0.157)`,
+        kb,
+        "—",
+        "Shigley's Mechanical Engineering Design, eq. 6-20",
+      ),
+    );
+    warnings.push(
+      "a size factor was applied although membrane loading is axial, for which Shigley takes kb = 1; it is kept because it was asked for",
+    );
   }
   if (mods.reliability !== undefined) {
     const za = normalQuantile(mods.reliability);
     const ke = reliabilityFactor(mods.reliability, za);
     factor *= ke;
-    steps.push(step("marin-ke", `Reliability factor (${fmt(mods.reliability * 100)} %)`, "ke = 1 − 0.08·za", `ke = 1 − 0.08 × ${fmt(za)}`, ke, "—", "Shigley's Mechanical Engineering Design, Table 6-5 (8 % coefficient of variation)"));
+    steps.push(
+      step(
+        "marin-ke",
+        `Reliability factor (${fmt(mods.reliability * 100)} %)`,
+        "ke = 1 − 0.08·za",
+        `ke = 1 − 0.08 × ${fmt(za)}`,
+        ke,
+        "—",
+        "Shigley's Mechanical Engineering Design, Table 6-5 (8 % coefficient of variation)",
+      ),
+    );
   }
-  steps.push(step("marin", "Product of the modifying factors", "k = ka·kb·ke", `k = ${steps.map((s) => fmt(s.value ?? 1)).join(" × ")}`, factor, "—", "Shigley's Mechanical Engineering Design, eq. 6-18 (Marin)"));
+  steps.push(
+    step(
+      "marin",
+      "Product of the modifying factors",
+      "k = ka·kb·ke",
+      `k = ${steps.map((s) => fmt(s.value ?? 1)).join(" × ")}`,
+      factor,
+      "—",
+      "Shigley's Mechanical Engineering Design, eq. 6-18 (Marin)",
+    ),
+  );
   return { factor, steps, warnings };
 }
 
@@ -83,7 +129,23 @@ export function lifeStep(sigmaAr: number, c: Curve, life: number | null): Step {
   const src = "Basquin; Dowling, Mechanical Behavior of Materials, eq. 9.7";
   const coeff = c.factor === 1 ? fmt(c.coefficient_MPa) : `(${fmt(c.factor)} × ${fmt(c.coefficient_MPa)})`;
   if (life === null) {
-    return step("life", "Fatigue life", "σar ≤ k·Se ⇒ unlimited", `${fmt(sigmaAr)} ≤ ${fmt((c.enduranceLimit_MPa ?? 0) * c.factor)} ⇒ unlimited`, null, "cycles", src);
+    return step(
+      "life",
+      "Fatigue life",
+      "σar ≤ k·Se ⇒ unlimited",
+      `${fmt(sigmaAr)} ≤ ${fmt((c.enduranceLimit_MPa ?? 0) * c.factor)} ⇒ unlimited`,
+      null,
+      "cycles",
+      src,
+    );
   }
-  return step("life", "Fatigue life from the Basquin curve", "N = ½·(σar/(k·σ'f))^(1/b)", `N = ½ × (${fmt(sigmaAr)}/${coeff})^(1/${fmt(c.exponent)})`, life, "cycles", src);
+  return step(
+    "life",
+    "Fatigue life from the Basquin curve",
+    "N = ½·(σar/(k·σ'f))^(1/b)",
+    `N = ½ × (${fmt(sigmaAr)}/${coeff})^(1/${fmt(c.exponent)})`,
+    life,
+    "cycles",
+    src,
+  );
 }

@@ -16,7 +16,10 @@ function reserve(e: Evaluation, designLife: number): { value: number; governs: "
   return fatigue <= stat ? { value: Math.max(fatigue, -CAP), governs: "fatigue" } : { value: Math.max(stat, -CAP), governs: "static" };
 }
 
-export function solveFor(ctx: Context, target: "thickness" | "pressure"): { solution: NonNullable<CheckResult["solution"]>; steps: Step[]; warnings: string[] } {
+export function solveFor(
+  ctx: Context,
+  target: "thickness" | "pressure",
+): { solution: NonNullable<CheckResult["solution"]>; steps: Step[]; warnings: string[] } {
   const design = ctx.input.fatigue.designLife_cycles;
   const shell = ctx.input.shell;
   const t0 = shell.thickness_mm;
@@ -24,11 +27,17 @@ export function solveFor(ctx: Context, target: "thickness" | "pressure"): { solu
   const REL_TOL = 1e-4;
   if (target === "thickness") {
     // The wall must leave an inside: for a mean radius t < 2r, for an outer radius t < r.
-    const tMax = shell.radiusAt === "inner" ? 100 * shell.radius_mm : shell.radiusAt === "mean" ? 1.999 * shell.radius_mm : 0.999 * shell.radius_mm;
+    const tMax =
+      shell.radiusAt === "inner" ? 100 * shell.radius_mm : shell.radiusAt === "mean" ? 1.999 * shell.radius_mm : 0.999 * shell.radius_mm;
     const root = increasingRoot((t) => reserve(evaluate(ctx, t, 1), design).value, t0, t0 * 1e-4, tMax, REL_TOL);
     const e = evaluate(ctx, root.x, 1);
     const governs = root.found ? reserve(e, design).governs : "none";
-    if (!root.found) warnings.push(root.side === "above-max" ? "no wall thickness meets the design life and the static check for this radius" : "even a wall far thinner than the given one meets the checks; the solve stopped at 1/10 000 of it");
+    if (!root.found)
+      warnings.push(
+        root.side === "above-max"
+          ? "no wall thickness meets the design life and the static check for this radius"
+          : "even a wall far thinner than the given one meets the checks; the solve stopped at 1/10 000 of it",
+      );
     const stepOut = step(
       "solve-thickness",
       "Minimum wall thickness for the fatigue and static checks (crack growth and test evidence are not re-solved)",
@@ -38,7 +47,11 @@ export function solveFor(ctx: Context, target: "thickness" | "pressure"): { solu
       "mm",
       "bracketing and Illinois false position (Dowell & Jarratt 1971) on ln t",
     );
-    return { solution: { thickness_mm: root.x, governs, iterations: root.iterations, evaluations: root.evaluations }, steps: [stepOut], warnings };
+    return {
+      solution: { thickness_mm: root.x, governs, iterations: root.iterations, evaluations: root.evaluations },
+      steps: [stepOut],
+      warnings,
+    };
   }
   // Pressure: scale every pressure by s; the reserve falls with s, so solve on w = 1/s where it rises.
   const root = increasingRoot((w) => reserve(evaluate(ctx, t0, 1 / w), design).value, 1, 1e-6, 1e6, REL_TOL);
@@ -56,5 +69,9 @@ export function solveFor(ctx: Context, target: "thickness" | "pressure"): { solu
     "MPa",
     "bracketing and Illinois false position (Dowell & Jarratt 1971) on ln(1/s)",
   );
-  return { solution: { pressureMax_MPa: pMax, governs, iterations: root.iterations, evaluations: root.evaluations }, steps: [stepOut], warnings };
+  return {
+    solution: { pressureMax_MPa: pMax, governs, iterations: root.iterations, evaluations: root.evaluations },
+    steps: [stepOut],
+    warnings,
+  };
 }

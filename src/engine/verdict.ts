@@ -20,7 +20,7 @@ export function verdictTable(r: CheckResult): { rows: VerdictRow[]; verdict: "pa
   const unit = f.lifeCountedIn;
   rows.push({
     id: "fatigue",
-    title: `Fatigue life (${f.curve === "welded" ? "welded detail category" : f.criteria.find((c) => c.chosen)?.label ?? f.criterion}, scatter factor ${fmt(f.scatterFactor)})`,
+    title: `Fatigue life (${f.curve === "welded" ? "welded detail category" : (f.criteria.find((c) => c.chosen)?.label ?? f.criterion)}, scatter factor ${fmt(f.scatterFactor)})`,
     status: f.pass ? "pass" : "fail",
     detail:
       f.life_cycles === null
@@ -34,17 +34,21 @@ export function verdictTable(r: CheckResult): { rows: VerdictRow[]; verdict: "pa
     const c = r.crack;
     // With a spectrum the design life counts passes, so the interval is compared in passes.
     const interval = c.inspectionInterval_passes !== undefined ? c.inspectionInterval_passes : c.inspectionInterval_cycles;
-    const within = c.inspectionInterval_passes !== undefined ? `${fmt(c.inspectionInterval_passes ?? 0)} passes` : `${fmt(c.inspectionInterval_cycles ?? 0)} cycles`;
+    const within =
+      c.inspectionInterval_passes !== undefined
+        ? `${fmt(c.inspectionInterval_passes ?? 0)} passes`
+        : `${fmt(c.inspectionInterval_cycles ?? 0)} cycles`;
     const covers = interval === null || interval >= f.designLife_cycles;
     rows.push({
       id: "crack",
       title: "Crack growth (Paris law)",
       status: covers ? "pass" : "info",
-      detail: c.cycles === null
-        ? "the pressure does not cycle, so the crack does not grow"
-        : covers
-        ? `the crack needs ${fmt(c.cycles)} cycles to reach ${fmt(c.critical_mm)} mm: the interval of ${within} covers the design life`
-        : `the crack reaches its critical size of ${fmt(c.critical_mm)} mm (${c.criticalBy}) in ${fmt(c.cycles)} cycles: inspect at least every ${within}`,
+      detail:
+        c.cycles === null
+          ? "the pressure does not cycle, so the crack does not grow"
+          : covers
+            ? `the crack needs ${fmt(c.cycles)} cycles to reach ${fmt(c.critical_mm)} mm: the interval of ${within} covers the design life`
+            : `the crack reaches its critical size of ${fmt(c.critical_mm)} mm (${c.criticalBy}) in ${fmt(c.cycles)} cycles: inspect at least every ${within}`,
       margin: null,
     });
     if (c.leakBeforeBreak) {
@@ -75,7 +79,10 @@ export function verdictTable(r: CheckResult): { rows: VerdictRow[]; verdict: "pa
   }
   const failing = rows.filter((x) => x.status === "fail");
   const deciding = rows.filter((x) => x.status !== "info" && x.margin !== null);
-  const least = deciding.reduce<VerdictRow | undefined>((a, b) => (a === undefined || (b.margin as number) < (a.margin as number) ? b : a), undefined);
+  const least = deciding.reduce<VerdictRow | undefined>(
+    (a, b) => (a === undefined || (b.margin as number) < (a.margin as number) ? b : a),
+    undefined,
+  );
   const gov = failing[0] ?? least ?? rows[0];
   return { rows, verdict: failing.length ? "fail" : "pass", governs: `${gov.title}: ${gov.detail}` };
 }

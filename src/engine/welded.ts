@@ -146,7 +146,9 @@ export function weldedLife(range_MPa: number, category_MPa: number, options: Wel
     steps.push(
       step(
         "welded-life",
-        options.variableAmplitude ? "Range below the cut-off limit: no damage" : "Range below the constant-amplitude fatigue limit: unlimited life",
+        options.variableAmplitude
+          ? "Range below the cut-off limit: no damage"
+          : "Range below the constant-amplitude fatigue limit: unlimited life",
         options.variableAmplitude ? "Δσ < Δσ_L,d" : "Δσ < Δσ_D,d",
         `${fmt(range_MPa)} < ${fmt(options.variableAmplitude ? cutOff_MPa : fatigueLimit_MPa)}`,
         null,

@@ -55,7 +55,8 @@ export const MATERIALS: readonly LibraryMaterial[] = [
     toughness_MPaSqrtM: 34,
     parisC: 1.6e-11,
     parisM: 3.59,
-    source: "Dowling, Mechanical Behavior of Materials, Table 14.1 (static and Basquin) and Table 8.1 (KIc) (from memory). Paris: typical 2024 fit (from memory).",
+    source:
+      "Dowling, Mechanical Behavior of Materials, Table 14.1 (static and Basquin) and Table 8.1 (KIc) (from memory). Paris: typical 2024 fit (from memory).",
   },
   {
     id: "al-7075-t6",
@@ -69,7 +70,8 @@ export const MATERIALS: readonly LibraryMaterial[] = [
     toughness_MPaSqrtM: 29,
     parisC: 2.7e-11,
     parisM: 3.7,
-    source: "Dowling, Mechanical Behavior of Materials, Table 14.1 (static, Basquin) and Table 8.1 (KIc, 7075-T651) (from memory). Paris: typical 7075-T6 fit (from memory).",
+    source:
+      "Dowling, Mechanical Behavior of Materials, Table 14.1 (static, Basquin) and Table 8.1 (KIc, 7075-T651) (from memory). Paris: typical 7075-T6 fit (from memory).",
   },
   {
     id: "ti-6al-4v-sta",
@@ -83,7 +85,8 @@ export const MATERIALS: readonly LibraryMaterial[] = [
     toughness_MPaSqrtM: 55,
     parisC: 1.0e-11,
     parisM: 3.2,
-    source: "Dowling, Mechanical Behavior of Materials, Table 14.1 (static, Basquin) (from memory). KIc and Paris: typical Ti-6Al-4V values (from memory).",
+    source:
+      "Dowling, Mechanical Behavior of Materials, Table 14.1 (static, Basquin) (from memory). KIc and Paris: typical Ti-6Al-4V values (from memory).",
   },
   {
     id: "steel-1015-n",
@@ -158,7 +161,8 @@ export const MATERIALS: readonly LibraryMaterial[] = [
     toughness_MPaSqrtM: 150,
     parisC: 5.6e-12,
     parisM: 3.25,
-    source: "Static: typical annealed 304 (from memory). Basquin: typical strain-life fit for annealed 304 (from memory). Paris: Barsom & Rolfe, austenitic stainless steels, 5.6×10⁻¹² ΔK^3.25 (from memory).",
+    source:
+      "Static: typical annealed 304 (from memory). Basquin: typical strain-life fit for annealed 304 (from memory). Paris: Barsom & Rolfe, austenitic stainless steels, 5.6×10⁻¹² ΔK^3.25 (from memory).",
   },
 ];
 

@@ -38,7 +38,8 @@ export function crackGrowthPlot(data: CrackGrowthData, opts?: PlotOptions): stri
     .sort((a, b) => a[0] - b[0]);
   const critical = len(data.critical_mm);
   const initial = len(data.initial_mm);
-  const interval = isFiniteNumber(data.inspectionInterval_cycles) && data.inspectionInterval_cycles > 0 ? data.inspectionInterval_cycles : NaN;
+  const interval =
+    isFiniteNumber(data.inspectionInterval_cycles) && data.inspectionInterval_cycles > 0 ? data.inspectionInterval_cycles : NaN;
 
   const nEnd = curve.length ? curve[curve.length - 1][0] : NaN;
   const xMax = niceTop(Math.max(...[nEnd, interval].filter(isFiniteNumber), 0) * 1.04);
@@ -46,7 +47,8 @@ export function crackGrowthPlot(data: CrackGrowthData, opts?: PlotOptions): stri
   const inspections: number[] = [];
   // Inspections after the crack is critical find nothing to stop: marks run up to the end of the curve.
   const lastUseful = isFiniteNumber(nEnd) ? nEnd : xMax;
-  if (isFiniteNumber(interval)) for (let k = 1; k * interval <= lastUseful * (1 + 1e-9) && k <= MAX_MARKS; k++) inspections.push(k * interval);
+  if (isFiniteNumber(interval))
+    for (let k = 1; k * interval <= lastUseful * (1 + 1e-9) && k <= MAX_MARKS; k++) inspections.push(k * interval);
 
   const legend: LegendEntry[] = [];
   if (curve.length > 1) legend.push({ label: `crack size a (${lu})`, style: GROWTH });
@@ -71,7 +73,17 @@ export function crackGrowthPlot(data: CrackGrowthData, opts?: PlotOptions): stri
   for (const [k, n] of inspections.entries()) content.push(inspectionMark(frame, curve, n, numbered ? String(k + 1) : null));
   if (isFiniteNumber(critical)) {
     const y = frame.y(critical);
-    content.push(polyline([[frame.area.left, y], [frame.area.right, y]], CRITICAL, "critical-size", ` data-value="${critical}"`));
+    content.push(
+      polyline(
+        [
+          [frame.area.left, y],
+          [frame.area.right, y],
+        ],
+        CRITICAL,
+        "critical-size",
+        ` data-value="${critical}"`,
+      ),
+    );
     content.push(horizontalLineLabel(frame, y, `a_{c} ${formatValue(critical)} ${lu}`, "left"));
   }
   for (const piece of frame.trace(curve)) content.push(polyline(piece, GROWTH, "growth-curve"));
@@ -79,7 +91,15 @@ export function crackGrowthPlot(data: CrackGrowthData, opts?: PlotOptions): stri
   if (start) content.push(marker("square", start[0], start[1], 11, INITIAL, "initial-size"));
   const end = curve.length ? frame.at(...curve[curve.length - 1]) : null;
   if (end && isFiniteNumber(critical) && curve[curve.length - 1][1] >= critical * 0.98)
-    content.push(textAt(end[0] - 10, end[1] + 22, `a_{c} reached at ${formatValue(nEnd)} cycles`, { size: FONT_SIZE.note, anchor: "end", halo: true, rich: true, weight: "bold" }));
+    content.push(
+      textAt(end[0] - 10, end[1] + 22, `a_{c} reached at ${formatValue(nEnd)} cycles`, {
+        size: FONT_SIZE.note,
+        anchor: "end",
+        halo: true,
+        rich: true,
+        weight: "bold",
+      }),
+    );
   if (curve.length < 2) content.push(notes(frame, ["no growth curve to plot"], "top-left"));
   return frame.render(content);
 }
@@ -96,11 +116,22 @@ function inspectionMark(frame: Frame, curve: Point[], n: number, number: string 
   const x = frame.x(n);
   if (!isFiniteNumber(x)) return "";
   const { top, bottom } = frame.area;
-  const out = [polyline([[x, number ? top : bottom - 12], [x, bottom]], { ...INSPECTION, dash: number ? INSPECTION.dash : "" }, "inspection", ` data-value="${n}"`)];
+  const out = [
+    polyline(
+      [
+        [x, number ? top : bottom - 12],
+        [x, bottom],
+      ],
+      { ...INSPECTION, dash: number ? INSPECTION.dash : "" },
+      "inspection",
+      ` data-value="${n}"`,
+    ),
+  ];
   const a = sizeAt(curve, n);
   const p = isFiniteNumber(a) ? frame.at(n, a) : null;
   if (p) out.push(marker("diamond", p[0], p[1], 11, INSPECTION, "inspection-mark"));
-  if (number) out.push(textAt(x + 4, top + FONT_SIZE.note + 4, number, { size: FONT_SIZE.note, halo: true, fill: INSPECTION.color, weight: "bold" }));
+  if (number)
+    out.push(textAt(x + 4, top + FONT_SIZE.note + 4, number, { size: FONT_SIZE.note, halo: true, fill: INSPECTION.color, weight: "bold" }));
   return out.join("");
 }
 

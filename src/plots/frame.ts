@@ -78,7 +78,8 @@ export function makeFrame(spec: FrameSpec): Frame {
   // The legend starts under the plot area, whose left margin is not known yet: allow a typical one.
   const legendLayout = layoutLegend(legend, width - 110);
   const footnotes = (spec.footnotes ?? []).filter(Boolean);
-  const legendBlock = (legendLayout.rows ? legendLayout.rows * LEGEND_ROW + 10 : 0) + (footnotes.length ? footnotes.length * FOOTNOTE_ROW + 8 : 0);
+  const legendBlock =
+    (legendLayout.rows ? legendLayout.rows * LEGEND_ROW + 10 : 0) + (footnotes.length ? footnotes.length * FOOTNOTE_ROW + 8 : 0);
   const bottomMargin = TICK + FONT_SIZE.tick + 10 + FONT_SIZE.axisTitle + 12 + legendBlock;
   // A height too small for the legend would leave no plot: keep at least a readable area.
   const height = Math.max(positiveOr(spec.height, DEFAULT_HEIGHT_WITHOUT_LEGEND + legendBlock), top + MIN_PLOT_HEIGHT + bottomMargin);
@@ -116,7 +117,14 @@ export function makeFrame(spec: FrameSpec): Frame {
       `<svg xmlns="http://www.w3.org/2000/svg" class="hoopwise-plot plot-${escapeXml(spec.name)}" viewBox="0 0 ${num(width)} ${num(height)}" width="100%" role="img" aria-label="${escapeXml(spec.label)}" font-family="${FONT_FAMILY}" fill="#000">`,
       `<title>${escapeXml(spec.label)}</title>`,
       `<rect width="${num(width)}" height="${num(height)}" fill="#fff"/>`,
-      spec.heading ? textAt(width / 2, 18 + headingSize.size * 0.8, headingSize.text, { size: headingSize.size, anchor: "middle", weight: "bold", className: "heading" }) : "",
+      spec.heading
+        ? textAt(width / 2, 18 + headingSize.size * 0.8, headingSize.text, {
+            size: headingSize.size,
+            anchor: "middle",
+            weight: "bold",
+            className: "heading",
+          })
+        : "",
       grid(xTicks, yTicks, x, y, area, yTop),
       ...content,
       axes(xTicks, yTicks, x, y, area, xAxis, yAxis, height),
@@ -166,8 +174,10 @@ function fitSize(title: string, room: number): number {
 }
 
 function grid(xt: TickSet, yt: TickSet, x: (v: number) => number, y: (v: number) => number, a: Rect, yTop: number): string {
-  const v = (px: number, color: string) => `<line x1="${num(px)}" y1="${num(yTop)}" x2="${num(px)}" y2="${num(a.bottom)}" stroke="${color}" stroke-width="0.8"/>`;
-  const h = (py: number, color: string) => `<line x1="${num(a.left)}" y1="${num(py)}" x2="${num(a.right)}" y2="${num(py)}" stroke="${color}" stroke-width="0.8"/>`;
+  const v = (px: number, color: string) =>
+    `<line x1="${num(px)}" y1="${num(yTop)}" x2="${num(px)}" y2="${num(a.bottom)}" stroke="${color}" stroke-width="0.8"/>`;
+  const h = (py: number, color: string) =>
+    `<line x1="${num(a.left)}" y1="${num(py)}" x2="${num(a.right)}" y2="${num(py)}" stroke="${color}" stroke-width="0.8"/>`;
   const minorColor = "#ececec";
   const majorColor = "#cfcfcf";
   return [
@@ -180,7 +190,16 @@ function grid(xt: TickSet, yt: TickSet, x: (v: number) => number, y: (v: number)
   ].join("");
 }
 
-function axes(xt: TickSet, yt: TickSet, x: (v: number) => number, y: (v: number) => number, a: Rect, xa: AxisSpec, ya: AxisSpec, height: number): string {
+function axes(
+  xt: TickSet,
+  yt: TickSet,
+  x: (v: number) => number,
+  y: (v: number) => number,
+  a: Rect,
+  xa: AxisSpec,
+  ya: AxisSpec,
+  height: number,
+): string {
   const xTick = (t: { value: number; label: string }) =>
     `<g class="tick-x" data-value="${t.value}" transform="translate(${num(x(t.value))},${num(a.bottom)})"><line y2="${TICK}" stroke="#000"/>${textAt(0, TICK + FONT_SIZE.tick + 2, t.label, { size: FONT_SIZE.tick, anchor: "middle" })}</g>`;
   const yTick = (t: { value: number; label: string }) =>
@@ -192,8 +211,19 @@ function axes(xt: TickSet, yt: TickSet, x: (v: number) => number, y: (v: number)
     `<rect x="${num(a.left)}" y="${num(a.top)}" width="${num(a.right - a.left)}" height="${num(a.bottom - a.top)}" fill="none" stroke="#000" stroke-width="1.2"/>`,
     ...xt.major.map(xTick),
     ...yt.major.map(yTick),
-    textAt((a.left + a.right) / 2, Math.min(xTitleY, height - 4), xa.title, { size: FONT_SIZE.axisTitle, anchor: "middle", rich: true, className: "axis-title-x" }),
-    textAt(yTitleX, (a.top + a.bottom) / 2, ya.title, { size: fitSize(ya.title, a.bottom - a.top + 40), anchor: "middle", rotate: -90, rich: true, className: "axis-title-y" }),
+    textAt((a.left + a.right) / 2, Math.min(xTitleY, height - 4), xa.title, {
+      size: FONT_SIZE.axisTitle,
+      anchor: "middle",
+      rich: true,
+      className: "axis-title-x",
+    }),
+    textAt(yTitleX, (a.top + a.bottom) / 2, ya.title, {
+      size: fitSize(ya.title, a.bottom - a.top + 40),
+      anchor: "middle",
+      rotate: -90,
+      rich: true,
+      className: "axis-title-y",
+    }),
     `</g>`,
   ].join("");
 }
@@ -230,7 +260,10 @@ function legendSample(e: LegendEntry, x0: number, yMid: number): string {
   const xm = x0 + LEGEND_SAMPLE / 2;
   if (kind === "area")
     return `<rect x="${num(x0)}" y="${num(yMid - 7)}" width="${LEGEND_SAMPLE}" height="14" fill="${escapeXml(e.areaFill ?? "#ddd")}" ${strokeAttrs(e.style).replace('fill="none" ', "")}/>`;
-  const stroke = kind === "line" ? `<line x1="${num(x0)}" y1="${num(yMid)}" x2="${num(x0 + LEGEND_SAMPLE)}" y2="${num(yMid)}" ${strokeAttrs(e.style)}/>` : "";
+  const stroke =
+    kind === "line"
+      ? `<line x1="${num(x0)}" y1="${num(yMid)}" x2="${num(x0 + LEGEND_SAMPLE)}" y2="${num(yMid)}" ${strokeAttrs(e.style)}/>`
+      : "";
   const mark = e.style.marker ? marker(e.style.marker, xm, yMid, 10, e.style) : "";
   return stroke + mark;
 }

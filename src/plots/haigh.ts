@@ -76,7 +76,13 @@ export function haighDiagram(data: HaighData, opts?: PlotOptions): string {
 
   const xMax = Math.max(...[m.ultimate, mean * 1.05].filter(positive), positive(m.yield) ? m.yield : 0) || 1;
   // A compressive mean pulls the axis below zero, with room for the point's marker.
-  const xMin = isFiniteNumber(mean) && mean < 0 ? scaleLinear().domain([mean - 0.03 * (xMax - mean), xMax]).nice().domain()[0] : 0;
+  const xMin =
+    isFiniteNumber(mean) && mean < 0
+      ? scaleLinear()
+          .domain([mean - 0.03 * (xMax - mean), xMax])
+          .nice()
+          .domain()[0]
+      : 0;
   const peak = Math.max(...[sar, amp].filter(positive), 0);
   // Show the whole yield line only when that does not squash the constant-life lines; otherwise it enters from the top.
   const yBasis = positive(m.yield) && m.yield <= 1.6 * peak ? Math.max(peak, m.yield) : peak;
@@ -90,7 +96,8 @@ export function haighDiagram(data: HaighData, opts?: PlotOptions): string {
   const showYield = positive(m.yield);
   if (showYield) legend.push({ label: "yield: σ_{a} + |σ_{m}| = S_{y}", style: YIELD_STYLE });
   // The point's values go in the legend: beside the point a label would sit on the lines it is read against.
-  if (isFiniteNumber(mean) && isFiniteNumber(amp)) legend.push({ ...OPERATING_LEGEND, label: `operating point: σ_{m} ${formatValue(mean)}, σ_{a} ${formatValue(amp)} ${su}` });
+  if (isFiniteNumber(mean) && isFiniteNumber(amp))
+    legend.push({ ...OPERATING_LEGEND, label: `operating point: σ_{m} ${formatValue(mean)}, σ_{a} ${formatValue(amp)} ${su}` });
 
   const heading = opts?.title ?? "Constant-life diagram (Haigh)";
   const frame = makeFrame({
@@ -106,7 +113,9 @@ export function haighDiagram(data: HaighData, opts?: PlotOptions): string {
 
   const content: string[] = [];
   if (showYield) content.push(yieldLine(frame, m.yield, xMin));
-  drawable.forEach((c, i) => content.push(criterionLine(frame, c, m, xMax, styleOf(c, data.selected), (0.25 + (0.5 * i) / Math.max(1, drawable.length)))));
+  drawable.forEach((c, i) =>
+    content.push(criterionLine(frame, c, m, xMax, styleOf(c, data.selected), 0.25 + (0.5 * i) / Math.max(1, drawable.length))),
+  );
   content.push(materialMarks(frame, m, sar, su));
   const op = frame.at(mean, amp);
   if (op) content.push(operatingPoint(op));
@@ -131,11 +140,22 @@ function missingConstant(c: MeanStressCriterion, m: LineMaterial): string | null
 
 function legendLabel(c: MeanStressCriterion, data: HaighData, m: LineMaterial, su: string): string {
   const extra =
-    c === "walker" ? ` (γ = ${formatValue(m.walkerGamma ?? NaN)}${m.walkerGamma === 0.5 ? ", the same line as SWT" : ""})` : c === "morrow" ? ` (σ'_{f} = ${formatValue(m.fatigueStrengthCoefficient)} ${su})` : "";
+    c === "walker"
+      ? ` (γ = ${formatValue(m.walkerGamma ?? NaN)}${m.walkerGamma === 0.5 ? ", the same line as SWT" : ""})`
+      : c === "morrow"
+        ? ` (σ'_{f} = ${formatValue(m.fatigueStrengthCoefficient)} ${su})`
+        : "";
   return `${NAME[c]}${extra}${c === data.selected ? " — used" : ""}`;
 }
 
-function criterionLine(frame: Frame, c: MeanStressCriterion, m: LineMaterial, xMax: number, style: SeriesStyle, markerOffset: number): string {
+function criterionLine(
+  frame: Frame,
+  c: MeanStressCriterion,
+  m: LineMaterial,
+  xMax: number,
+  style: SeriesStyle,
+  markerOffset: number,
+): string {
   const end = Math.min(zeroAmplitudeMean(c, m), xMax);
   const straight = c === "goodman" || c === "soderberg" || c === "morrow";
   // Sample densely near the end, where the ellipse and the parabola turn down steeply.
@@ -147,13 +167,24 @@ function criterionLine(frame: Frame, c: MeanStressCriterion, m: LineMaterial, xM
   }
   const pieces = frame.trace(pts);
   const lines = pieces.map((p) => polyline(p, style, `criterion criterion-${c}`, ` data-series="${c}"`));
-  const marks = pieces.length && style.marker ? pointsAlong(pieces[0], 3, markerOffset).map(([x, y]) => marker(style.marker!, x, y, 10, style)) : [];
+  const marks =
+    pieces.length && style.marker ? pointsAlong(pieces[0], 3, markerOffset).map(([x, y]) => marker(style.marker!, x, y, 10, style)) : [];
   return [...lines, ...marks].join("");
 }
 
 /** Tensile yield σa + σm = Sy and, for compressive means, σa − σm = Sy: either way the peak reaches yield. */
 function yieldLine(frame: Frame, sy: number, xMin: number): string {
-  const pts: Point[] = xMin < 0 ? [[-sy, 0], [0, sy], [sy, 0]] : [[0, sy], [sy, 0]];
+  const pts: Point[] =
+    xMin < 0
+      ? [
+          [-sy, 0],
+          [0, sy],
+          [sy, 0],
+        ]
+      : [
+          [0, sy],
+          [sy, 0],
+        ];
   return frame
     .trace(pts)
     .map((p) => polyline(p, YIELD_STYLE, "yield-line", ` data-series="yield"`))
@@ -167,11 +198,19 @@ function materialMarks(frame: Frame, m: LineMaterial, sar: number, su: string): 
     const x = frame.x(v);
     if (!isFiniteNumber(x) || x < frame.area.left || x > frame.area.right + 0.5) return;
     out.push(`<line x1="${num(x)}" y1="${num(bottom)}" x2="${num(x)}" y2="${num(bottom - 10)}" stroke="#000" stroke-width="1.5"/>`);
-    out.push(textAt(anchor === "end" ? x - 4 : x, bottom - 14, `${name} ${formatValue(v)}`, { size: FONT_SIZE.note, anchor, halo: true, rich: true }));
+    out.push(
+      textAt(anchor === "end" ? x - 4 : x, bottom - 14, `${name} ${formatValue(v)}`, {
+        size: FONT_SIZE.note,
+        anchor,
+        halo: true,
+        rich: true,
+      }),
+    );
   };
   if (isFiniteNumber(m.ultimate) && m.ultimate > 0) axisMark(m.ultimate, "S_{u}", "end");
   if (isFiniteNumber(m.yield) && m.yield > 0 && m.yield < m.ultimate * 0.93) axisMark(m.yield, "S_{y}", "middle");
   const p = frame.at(0, sar);
-  if (p && isFiniteNumber(sar) && sar > 0) out.push(textAt(p[0] + 8, p[1] - 10, `σ_{ar} = ${formatValue(sar)} ${su}`, { size: FONT_SIZE.note, halo: true, rich: true }));
+  if (p && isFiniteNumber(sar) && sar > 0)
+    out.push(textAt(p[0] + 8, p[1] - 10, `σ_{ar} = ${formatValue(sar)} ${su}`, { size: FONT_SIZE.note, halo: true, rich: true }));
   return out.join("");
 }

@@ -5,7 +5,16 @@
  * in a strip above it, marked "unlimited".
  */
 import { formatValue, isFiniteNumber } from "./format.ts";
-import { type Frame, horizontalLineLabel, type LegendEntry, makeFrame, notes, OPERATING_LEGEND, operatingPoint, verticalLineLabel } from "./frame.ts";
+import {
+  type Frame,
+  horizontalLineLabel,
+  type LegendEntry,
+  makeFrame,
+  notes,
+  OPERATING_LEGEND,
+  operatingPoint,
+  verticalLineLabel,
+} from "./frame.ts";
 import { DASH, marker, type Point, polyline, type SeriesStyle } from "./marks.ts";
 import { FONT_SIZE, num, textAt } from "./svgText.ts";
 import { decadeDomain } from "./ticks.ts";
@@ -88,17 +97,43 @@ export function lifeThicknessPlot(data: LifeThicknessData, opts?: PlotOptions): 
   if (anyUnlimited) content.push(unlimitedStrip(frame));
   // The minimum is usually the thinner, so its label goes left and the current one right.
   const minimumLeft = !(minimum > current);
-  if (isFiniteNumber(minimum)) content.push(vertical(frame, minimum, MINIMUM, `minimum t ${formatValue(minimum, 4)} ${lu}`, "minimum", minimumLeft ? "left" : "right"));
-  if (isFiniteNumber(current)) content.push(vertical(frame, current, CURRENT, `current t ${formatValue(current, 4)} ${lu}`, "current", minimumLeft ? "right" : "left"));
+  if (isFiniteNumber(minimum))
+    content.push(
+      vertical(frame, minimum, MINIMUM, `minimum t ${formatValue(minimum, 4)} ${lu}`, "minimum", minimumLeft ? "left" : "right"),
+    );
+  if (isFiniteNumber(current))
+    content.push(
+      vertical(frame, current, CURRENT, `current t ${formatValue(current, 4)} ${lu}`, "current", minimumLeft ? "right" : "left"),
+    );
   if (isFiniteNumber(required)) {
     const y = frame.y(required);
-    content.push(polyline([[frame.area.left, y], [frame.area.right, y]], REQUIRED, "required-life", ` data-value="${required}"`));
+    content.push(
+      polyline(
+        [
+          [frame.area.left, y],
+          [frame.area.right, y],
+        ],
+        REQUIRED,
+        "required-life",
+        ` data-value="${required}"`,
+      ),
+    );
     content.push(horizontalLineLabel(frame, y, `required ${formatValue(required)}`));
   }
   content.push(curve(placed));
   for (const r of placed) {
     if (sameThickness(r.thickness, current)) content.push(operatingPoint(r.p));
-    else content.push(marker(r.life === null ? "triangle" : "square", r.p[0], r.p[1], 10, r.life === null ? TO_UNLIMITED : LIFE, r.life === null ? "point unlimited" : "point"));
+    else
+      content.push(
+        marker(
+          r.life === null ? "triangle" : "square",
+          r.p[0],
+          r.p[1],
+          10,
+          r.life === null ? TO_UNLIMITED : LIFE,
+          r.life === null ? "point unlimited" : "point",
+        ),
+      );
   }
   if (placed.length === 0) content.push(notes(frame, ["no lives to plot"], "bottom-right"));
   return frame.render(content);
@@ -148,5 +183,15 @@ function unlimitedStrip(frame: Frame): string {
 function vertical(frame: Frame, t: number, style: SeriesStyle, label: string, name: string, side: "left" | "right"): string {
   const x = frame.x(t);
   if (!isFiniteNumber(x)) return "";
-  return polyline([[x, frame.yTop], [x, frame.area.bottom]], style, `thickness-line thickness-${name}`, ` data-value="${t}"`) + verticalLineLabel(frame, x, label, side);
+  return (
+    polyline(
+      [
+        [x, frame.yTop],
+        [x, frame.area.bottom],
+      ],
+      style,
+      `thickness-line thickness-${name}`,
+      ` data-value="${t}"`,
+    ) + verticalLineLabel(frame, x, label, side)
+  );
 }

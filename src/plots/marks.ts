@@ -55,11 +55,20 @@ export function marker(shape: MarkerShape, x: number, y: number, size: number, s
       return `<rect ${cls}x="${num(x - r * 0.9)}" y="${num(y - r * 0.9)}" width="${num(r * 1.8)}" height="${num(r * 1.8)}" ${paint}/>`;
     case "triangle": {
       const h = r * 1.15;
-      return `<path ${cls}d="${pathD([[x, y - h], [x + h, y + h * 0.8], [x - h, y + h * 0.8]])}Z" ${paint}/>`;
+      return `<path ${cls}d="${pathD([
+        [x, y - h],
+        [x + h, y + h * 0.8],
+        [x - h, y + h * 0.8],
+      ])}Z" ${paint}/>`;
     }
     case "diamond": {
       const h = r * 1.25;
-      return `<path ${cls}d="${pathD([[x, y - h], [x + h, y], [x, y + h], [x - h, y]])}Z" ${paint}/>`;
+      return `<path ${cls}d="${pathD([
+        [x, y - h],
+        [x + h, y],
+        [x, y + h],
+        [x - h, y],
+      ])}Z" ${paint}/>`;
     }
   }
 }

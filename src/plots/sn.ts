@@ -61,8 +61,12 @@ export function snCurve(data: SnData, opts?: PlotOptions): string {
   const factor = isFiniteNumber(data.scatterFactor) && data.scatterFactor > 0 ? data.scatterFactor : NaN;
   const required = isFiniteNumber(design) && design > 0 && isFiniteNumber(factor) && factor !== 1 ? design * factor : NaN;
   const allowable = data.allowableLife_cycles;
-  const coupons = (data.coupons ?? []).filter((c) => c && isFiniteNumber(c.amplitude_MPa) && isFiniteNumber(c.life_cycles) && c.life_cycles > 0 && c.amplitude_MPa > 0);
-  const band = (data.band ?? []).filter((r) => r && [r.amplitude_MPa, r.lower_cycles, r.upper_cycles].every((v) => isFiniteNumber(v) && v > 0));
+  const coupons = (data.coupons ?? []).filter(
+    (c) => c && isFiniteNumber(c.amplitude_MPa) && isFiniteNumber(c.life_cycles) && c.life_cycles > 0 && c.amplitude_MPa > 0,
+  );
+  const band = (data.band ?? []).filter(
+    (r) => r && [r.amplitude_MPa, r.lower_cycles, r.upper_cycles].every((v) => isFiniteNumber(v) && v > 0),
+  );
   const valid = data.validRange_cycles;
   const validRange = valid && isFiniteNumber(valid[0]) && isFiniteNumber(valid[1]) && valid[0] > 0 && valid[1] > valid[0] ? valid : null;
 
@@ -97,10 +101,12 @@ export function snCurve(data: SnData, opts?: PlotOptions): string {
   if (curveOk && validRange) legend.push({ label: "extrapolated beyond the data", style: EXTRAPOLATED });
   if (band.length) legend.push({ label: "scatter band", style: BAND_EDGE, kind: "area", areaFill: BAND_FILL });
   if (isFiniteNumber(design) && design > 0) legend.push({ label: `design life ${formatValue(design)}`, style: DESIGN });
-  if (isFiniteNumber(required)) legend.push({ label: `design life × scatter ${formatValue(factor)} = ${formatValue(required)}`, style: REQUIRED });
+  if (isFiniteNumber(required))
+    legend.push({ label: `design life × scatter ${formatValue(factor)} = ${formatValue(required)}`, style: REQUIRED });
   if (coupons.some((c) => !c.runout)) legend.push({ label: "coupon failure", style: COUPON, kind: "marker" });
   if (coupons.some((c) => c.runout)) legend.push({ label: "coupon runout (no failure)", style: RUNOUT, kind: "marker" });
-  if (isFiniteNumber(allowable) && allowable > 0) legend.push({ label: "allowable life = life ÷ scatter factor", style: ALLOWABLE, kind: "marker" });
+  if (isFiniteNumber(allowable) && allowable > 0)
+    legend.push({ label: "allowable life = life ÷ scatter factor", style: ALLOWABLE, kind: "marker" });
   legend.push(OPERATING_LEGEND);
 
   const heading = opts?.title ?? "S-N curve";
@@ -117,14 +123,25 @@ export function snCurve(data: SnData, opts?: PlotOptions): string {
 
   const content: string[] = [];
   const remarks: string[] = [];
-  if (band.length) content.push(bandShape(frame, band.map((r) => ({ amplitude: s(r.amplitude_MPa), lower: r.lower_cycles, upper: r.upper_cycles }))));
+  if (band.length)
+    content.push(
+      bandShape(
+        frame,
+        band.map((r) => ({ amplitude: s(r.amplitude_MPa), lower: r.lower_cycles, upper: r.upper_cycles })),
+      ),
+    );
   if (curveOk) {
     content.push(curve(frame, amplitudeAt, nMin, nMax, knee, validRange));
-    remarks.push(`σ'f = ${formatValue(sf)} ${su}, b = ${formatValue(b)}${validRange ? `; data ${formatValue(validRange[0])} to ${formatValue(validRange[1])} cycles` : ""}`);
+    remarks.push(
+      `σ'f = ${formatValue(sf)} ${su}, b = ${formatValue(b)}${validRange ? `; data ${formatValue(validRange[0])} to ${formatValue(validRange[1])} cycles` : ""}`,
+    );
   } else remarks.push("curve not drawn: σ'f or b missing");
   if (hasLimit) {
     const p = frame.at(nMax, se);
-    if (p) content.push(textAt(p[0] - 8, p[1] - 9, `S_{e} = ${formatValue(se)} ${su}`, { size: FONT_SIZE.note, anchor: "end", halo: true, rich: true }));
+    if (p)
+      content.push(
+        textAt(p[0] - 8, p[1] - 9, `S_{e} = ${formatValue(se)} ${su}`, { size: FONT_SIZE.note, anchor: "end", halo: true, rich: true }),
+      );
   }
   if (isFiniteNumber(design) && design > 0) content.push(vertical(frame, design, DESIGN, "design"));
   if (isFiniteNumber(required)) content.push(vertical(frame, required, REQUIRED, "required"));
@@ -135,7 +152,14 @@ export function snCurve(data: SnData, opts?: PlotOptions): string {
   return frame.render(content);
 }
 
-function curve(frame: Frame, amplitudeAt: (n: number) => number, nMin: number, nMax: number, knee: number, valid: [number, number] | null): string {
+function curve(
+  frame: Frame,
+  amplitudeAt: (n: number) => number,
+  nMin: number,
+  nMax: number,
+  knee: number,
+  valid: [number, number] | null,
+): string {
   const lives: number[] = [];
   const steps = 160;
   for (let i = 0; i <= steps; i++) lives.push(nMin * (nMax / nMin) ** (i / steps));
@@ -147,7 +171,8 @@ function curve(frame: Frame, amplitudeAt: (n: number) => number, nMin: number, n
   let run: Point[] = [];
   let runValid = inRange(lives[0]);
   const flush = () => {
-    for (const piece of frame.trace(run)) out.push(polyline(piece, runValid ? CURVE : EXTRAPOLATED, runValid ? "sn-curve" : "sn-curve-extrapolated"));
+    for (const piece of frame.trace(run))
+      out.push(polyline(piece, runValid ? CURVE : EXTRAPOLATED, runValid ? "sn-curve" : "sn-curve-extrapolated"));
   };
   for (const n of lives) {
     const point: Point = [n, amplitudeAt(n)];
@@ -199,7 +224,13 @@ function operating(frame: Frame, sar: number, life: number | null, allowable: nu
     return [
       arrow([x + 10, y], [frame.area.right - 4, y], "#000", 2),
       operatingPoint([x, y]).replace('class="operating-point"', 'class="operating-point" data-unlimited="true"'),
-      textAt(x - 14, y + 5, `σ_{ar} ${formatValue(sar)} ${su}: unlimited life`, { size: FONT_SIZE.note, anchor: "end", halo: true, rich: true, weight: "bold" }),
+      textAt(x - 14, y + 5, `σ_{ar} ${formatValue(sar)} ${su}: unlimited life`, {
+        size: FONT_SIZE.note,
+        anchor: "end",
+        halo: true,
+        rich: true,
+        weight: "bold",
+      }),
     ].join("");
   }
   const p = frame.at(life, sar);

@@ -46,14 +46,22 @@ export function spectrumPlot(data: SpectrumData, opts?: PlotOptions): string {
   const logCounts = counted.length > 0 && maxCount / minCount >= 100;
   const yDomain: [number, number] = logCounts
     ? decadeDomain([minCount, maxCount], [0.1, 10])
-    : [0, scaleLinear().domain([0, (maxCount || 1) * 1.1]).nice().domain()[1]];
+    : [
+        0,
+        scaleLinear()
+          .domain([0, (maxCount || 1) * 1.1])
+          .nice()
+          .domain()[1],
+      ];
   const xMax = bins.length ? bins[bins.length - 1].to : 1;
 
   const means = cycles.map((c) => u.stress(c.mean_MPa)).filter(isFiniteNumber);
   const footnotes = cycles.length
     ? [
         `${formatValue(total, 7)} cycles in all (half cycles count ½)`,
-        means.length ? `mean stress of the counted cycles: ${formatValue(Math.min(...means))} to ${formatValue(Math.max(...means))} ${su}` : "",
+        means.length
+          ? `mean stress of the counted cycles: ${formatValue(Math.min(...means))} to ${formatValue(Math.max(...means))} ${su}`
+          : "",
       ]
     : [];
   const heading = opts?.title ?? "Load spectrum (rainflow count)";
@@ -102,6 +110,8 @@ function bar(frame: Frame, b: Bin, labelled: boolean): string {
   if (![x0, x1, top].every(isFiniteNumber)) return "";
   const y = Math.max(frame.yTop, Math.min(top, bottom));
   const rect = `<rect class="bar" data-from="${b.from}" data-to="${b.to}" data-count="${b.count}" x="${num(x0)}" y="${num(y)}" width="${num(x1 - x0)}" height="${num(bottom - y)}" fill="${BAR_FILL}" stroke="${escapeXml(BAR.color)}" stroke-width="${BAR.width}"/>`;
-  const label = labelled ? textAt((x0 + x1) / 2, y - 5, formatValue(b.count, 7), { size: FONT_SIZE.note - 1, anchor: "middle", halo: true }) : "";
+  const label = labelled
+    ? textAt((x0 + x1) / 2, y - 5, formatValue(b.count, 7), { size: FONT_SIZE.note - 1, anchor: "middle", halo: true })
+    : "";
   return rect + label;
 }

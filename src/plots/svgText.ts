@@ -13,7 +13,9 @@ export const FONT_SIZE = { heading: 20, axisTitle: 17, tick: 15, legend: 15, not
 export function escapeXml(s: string): string {
   // Control characters are not allowed in XML at all, even escaped; a pasted title may carry them.
   // eslint-disable-next-line no-control-regex
-  return String(s).replace(/[\u0000-\u0008\u000B\u000C\u000E-\u001F\uFFFE\uFFFF]/g, "").replace(/[&<>"']/g, (c) => ESCAPES[c]);
+  return String(s)
+    .replace(/[\u0000-\u0008\u000B\u000C\u000E-\u001F\uFFFE\uFFFF]/g, "")
+    .replace(/[&<>"']/g, (c) => ESCAPES[c]);
 }
 const ESCAPES: Record<string, string> = { "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&apos;" };
 

@@ -26,14 +26,7 @@ export function linearTicks(domain: [number, number], count: number): TickSet {
   return { major: values.map((value) => ({ value, label: formatTick(value, step) })), minor: [] };
 }
 
-const MANTISSA_SETS = [
-  [1, 1.5, 2, 3, 4, 5, 6, 7, 8, 9],
-  [1, 2, 3, 4, 5, 6, 8],
-  [1, 2, 3, 5],
-  [1, 2, 5],
-  [1, 3],
-  [1],
-];
+const MANTISSA_SETS = [[1, 1.5, 2, 3, 4, 5, 6, 7, 8, 9], [1, 2, 3, 4, 5, 6, 8], [1, 2, 3, 5], [1, 2, 5], [1, 3], [1]];
 
 export function logTicks(domain: [number, number], maxCount: number, style: LogLabelStyle = "auto"): TickSet {
   const [lo, hi] = domain;

@@ -51,7 +51,12 @@ const ENGINE_KEY = PDFName.of("HoopwiseEngine");
  * `sha256:<fingerprint>` so ordinary viewers show it) and the fingerprint fields. Returns the new
  * PDF; the bytes passed in are not changed.
  */
-export async function attachInput(pdf: Uint8Array, inputJson: string, info: SheetInfo, more?: (doc: PDFDocument) => Promise<void>): Promise<Uint8Array> {
+export async function attachInput(
+  pdf: Uint8Array,
+  inputJson: string,
+  info: SheetInfo,
+  more?: (doc: PDFDocument) => Promise<void>,
+): Promise<Uint8Array> {
   const doc = await PDFDocument.load(pdf);
   // Further attachments go in the same load/save pass: each pass re-parses and re-writes the whole PDF.
   await more?.(doc);
@@ -111,11 +116,7 @@ const MAX_TREE_DEPTH = 32;
  * this reader does not decode, or larger than `maxBytes`). Meant for PDFs from anywhere: cycles
  * and odd object types in the name tree are passed over, not followed.
  */
-export async function extractAttachment(
-  pdf: Uint8Array,
-  name: string,
-  options: ExtractOptions = {},
-): Promise<Uint8Array | null> {
+export async function extractAttachment(pdf: Uint8Array, name: string, options: ExtractOptions = {}): Promise<Uint8Array | null> {
   const maxBytes = options.maxBytes ?? 16 * 1024 * 1024;
   const doc = await PDFDocument.load(pdf, { updateMetadata: false });
   const tree = dictAt(dictAt(doc.catalog, "Names"), "EmbeddedFiles");
@@ -159,8 +160,7 @@ function findInNameTree(root: PDFDict, wanted: string): PDFDict | null {
 /** Unfiltered or FlateDecode (what pdf-lib and most writers use), inflated with a size cap. */
 function decodeStream(stream: PDFRawStream, name: string, maxBytes: number): Uint8Array {
   const filter = stream.dict.lookup(PDFName.of("Filter"));
-  const filters =
-    filter instanceof PDFArray ? filter.asArray().map((f) => stream.dict.context.lookup(f)) : filter ? [filter] : [];
+  const filters = filter instanceof PDFArray ? filter.asArray().map((f) => stream.dict.context.lookup(f)) : filter ? [filter] : [];
   const tooLarge = () => new Error(`The attached file ${name} is larger than ${maxBytes} bytes; it was not read.`);
   if (filters.length === 0) {
     if (stream.contents.length > maxBytes) throw tooLarge();

@@ -16,18 +16,8 @@
  *   Chromium and kills anything left of its process group, and removes its profile directory.
  */
 import type { Page } from "puppeteer-core";
-import {
-  disposeChromium,
-  launchChromium,
-  resolveChromiumPath,
-  type RunningChromium,
-} from "./chromium.ts";
-import {
-  BrowserCrashedError,
-  BrowserUnavailableError,
-  PoolBusyError,
-  RenderTimeoutError,
-} from "./errors.ts";
+import { disposeChromium, launchChromium, resolveChromiumPath, type RunningChromium } from "./chromium.ts";
+import { BrowserCrashedError, BrowserUnavailableError, PoolBusyError, RenderTimeoutError } from "./errors.ts";
 
 export interface PoolOptions {
   /** Chromium to run. Default: `CHROME_PATH`, else /usr/bin/chromium, looked up at first launch. */
@@ -209,11 +199,7 @@ export function createBrowserPool(options: PoolOptions = {}): BrowserPool {
     }
   }
 
-  async function runOnPage<T>(
-    chromium: RunningChromium,
-    work: (page: Page) => Promise<T>,
-    timeout_ms: number,
-  ): Promise<T> {
+  async function runOnPage<T>(chromium: RunningChromium, work: (page: Page) => Promise<T>, timeout_ms: number): Promise<T> {
     const started = performance.now();
     let page: Page | undefined;
     const attempt = (async () => {
@@ -243,10 +229,7 @@ export function createBrowserPool(options: PoolOptions = {}): BrowserPool {
     }
   }
 
-  async function withPage<T>(
-    work: (page: Page) => Promise<T>,
-    options: { timeout_ms?: number } = {},
-  ): Promise<T> {
+  async function withPage<T>(work: (page: Page) => Promise<T>, options: { timeout_ms?: number } = {}): Promise<T> {
     const timeout_ms = options.timeout_ms ?? o.renderTimeout_ms;
     await acquireSlot();
     try {

@@ -98,10 +98,7 @@ export async function launchChromium(
     });
   } catch (cause) {
     await rm(userDataDir, { recursive: true, force: true });
-    throw new BrowserUnavailableError(
-      `Chromium at ${executablePath} would not start: ${(cause as Error).message}`,
-      { cause },
-    );
+    throw new BrowserUnavailableError(`Chromium at ${executablePath} would not start: ${(cause as Error).message}`, { cause });
   }
   const pid = browser.process()?.pid;
   if (pid === undefined) {

@@ -104,8 +104,6 @@ const BLANK_HTML = '<!doctype html><html><head><meta charset="utf-8"></head><bod
  * An empty page through the same pool, settings and default footer as renderPdf: the baseline
  * a sheet's render time is compared with.
  */
-export function renderBlankPdf(
-  options: Pick<PdfOptions, "pool" | "timeout_ms"> & { paper?: Paper } = {},
-): Promise<Buffer> {
+export function renderBlankPdf(options: Pick<PdfOptions, "pool" | "timeout_ms"> & { paper?: Paper } = {}): Promise<Buffer> {
   return renderPdf(BLANK_HTML, { ...options, paper: options.paper ?? "A4" });
 }

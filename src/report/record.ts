@@ -154,7 +154,9 @@ function isRecord(x: unknown): x is SheetRecord {
     r.values !== null &&
     Object.values(r.values).every(numberOrNull) &&
     Array.isArray(r.verdictTable) &&
-    r.verdictTable.every((v) => typeof v === "object" && v !== null && typeof v.id === "string" && typeof v.status === "string" && numberOrNull(v.margin)) &&
+    r.verdictTable.every(
+      (v) => typeof v === "object" && v !== null && typeof v.id === "string" && typeof v.status === "string" && numberOrNull(v.margin),
+    ) &&
     Array.isArray(r.steps) &&
     r.steps.every((s) => Array.isArray(s) && s.length === 2 && typeof s[0] === "string" && numberOrNull(s[1]))
   );

@@ -60,9 +60,7 @@ export async function guardRequests(page: Page): Promise<{ stop(): Promise<Reque
     // data: URLs cannot be intercepted (puppeteer leaves them alone); they are inline content.
     if (request.url().startsWith("data:")) return;
     refused.add(request.url());
-    const answer = request.isNavigationRequest()
-      ? request.respond({ status: 204, body: "" })
-      : request.abort("blockedbyclient");
+    const answer = request.isNavigationRequest() ? request.respond({ status: 204, body: "" }) : request.abort("blockedbyclient");
     // The page may close under a timed-out render; nothing is left to answer then.
     answer.catch(() => {});
   };

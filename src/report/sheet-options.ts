@@ -17,8 +17,15 @@ const optionsSchema = z.strictObject({
       // Not strict: the records hand over their sign-off rows, which carry more than the sheet prints.
       z.object({
         role: z.enum(ROLES, { error: 'role must be "prepared", "checked" or "approved"' }),
-        name: z.string({ error: "the name must be text" }).trim().min(1, { error: "the name must not be empty" }).max(200, { error: "the name must be at most 200 characters" }),
-        signedAt: z.string({ error: "signedAt must be text" }).min(1, { error: "signedAt must not be empty" }).max(100, { error: "signedAt must be at most 100 characters" }),
+        name: z
+          .string({ error: "the name must be text" })
+          .trim()
+          .min(1, { error: "the name must not be empty" })
+          .max(200, { error: "the name must be at most 200 characters" }),
+        signedAt: z
+          .string({ error: "signedAt must be text" })
+          .min(1, { error: "signedAt must not be empty" })
+          .max(100, { error: "signedAt must be at most 100 characters" }),
       }),
       { error: "signoffs must be a list" },
     )

@@ -45,7 +45,9 @@ export interface SheetOptions {
 
 export type SheetOutcome = { ok: true; pdf: Uint8Array; result: CheckResult; fingerprint: string } | { ok: false; errors: FieldError[] };
 
-export type SheetHtmlOutcome = ({ ok: true; result: CheckResult; model: SheetModel; canonicalInput: string } & SheetDocument) | { ok: false; errors: FieldError[] };
+export type SheetHtmlOutcome =
+  | ({ ok: true; result: CheckResult; model: SheetModel; canonicalInput: string } & SheetDocument)
+  | { ok: false; errors: FieldError[] };
 
 /** The sheet's HTML, header and footer without Chromium: for tests, previews and renderSheet. */
 export function sheetHtml(json: unknown, opts: Omit<SheetOptions, "pool" | "requestLog" | "timeout_ms"> = {}): SheetHtmlOutcome {

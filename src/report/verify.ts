@@ -79,7 +79,8 @@ export async function verifySheet(pdf: Uint8Array): Promise<VerifyReport> {
   report.fingerprint.recorded = info.fingerprint ?? null;
   report.engine.then = info.engineVersion ?? null;
   report.engine.same = info.engineVersion === ENGINE_VERSION;
-  if (!info.fingerprint) problem("The PDF records no fingerprint: it is not a Hoopwise check sheet, or its document information was rewritten.");
+  if (!info.fingerprint)
+    problem("The PDF records no fingerprint: it is not a Hoopwise check sheet, or its document information was rewritten.");
   if (!info.engineVersion) problem("The PDF does not name the engine version that made it.");
 
   let record: SheetRecord | null = null;
@@ -110,7 +111,9 @@ export async function verifySheet(pdf: Uint8Array): Promise<VerifyReport> {
   const parsed = parseCheck(json);
   if (!parsed.ok) {
     report.input.errors = parsed.errors;
-    problem(`The attached input is not a valid check (${parsed.errors.length} problem${parsed.errors.length === 1 ? "" : "s"}, listed under input.errors).`);
+    problem(
+      `The attached input is not a valid check (${parsed.errors.length} problem${parsed.errors.length === 1 ? "" : "s"}, listed under input.errors).`,
+    );
     return report;
   }
   report.input.valid = true;

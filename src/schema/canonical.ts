@@ -24,5 +24,7 @@ function sortKeys(v: unknown): unknown {
 
 /** SHA-256 (hex) of the canonical input JSON followed by a newline and the engine version. */
 export function fingerprint(input: unknown, engineVersion: string = ENGINE_VERSION): string {
-  return createHash("sha256").update(canonicalJson(input) + "\n" + engineVersion).digest("hex");
+  return createHash("sha256")
+    .update(canonicalJson(input) + "\n" + engineVersion)
+    .digest("hex");
 }

@@ -26,7 +26,9 @@ type Floor = { min: number; words: string };
 
 /** Above zero and at most `max`; with a floor, also at least that (zero and below keep the plainer message). */
 const positive = (what: string, max: number, floor?: Floor) => {
-  const p = num(what).positive({ error: `${what} must be greater than 0` }).max(max, { error: `${what} must be at most ${max}` });
+  const p = num(what)
+    .positive({ error: `${what} must be greater than 0` })
+    .max(max, { error: `${what} must be at most ${max}` });
   return floor ? p.refine((x) => x <= 0 || x >= floor.min, { error: `${what} must be at least ${floor.words}` }) : p;
 };
 /** A probability for a lower bound: below one half it would bound the better half of the items, not the weaker. */
@@ -37,8 +39,11 @@ const fraction = (what: string) =>
     .refine((x) => x <= 0 || x >= 0.5, { error: `${what} must be at least 0.5 for a lower bound on life` });
 /** A stress or pressure of either sign, within what any shell sees. */
 const signedStress = (what: string) =>
-  num(what).min(-1e4, { error: `${what} must be at least −10 000 MPa` }).max(1e4, { error: `${what} must be at most 10 000 MPa` });
-const text = (what: string, max: number) => z.string({ error: `${what} must be text` }).max(max, { error: `${what} must be at most ${max} characters` });
+  num(what)
+    .min(-1e4, { error: `${what} must be at least −10 000 MPa` })
+    .max(1e4, { error: `${what} must be at most 10 000 MPa` });
+const text = (what: string, max: number) =>
+  z.string({ error: `${what} must be text` }).max(max, { error: `${what} must be at most ${max} characters` });
 
 export const MEAN_STRESS_CRITERIA = ["goodman", "gerber", "soderberg", "asme-elliptic", "swt", "morrow", "walker"] as const;
 export const SURFACE_FINISHES = ["ground", "machined", "hot-rolled", "as-forged"] as const;
@@ -56,7 +61,8 @@ export const shellSchema = z
       .describe("auto: thick-wall (Lamé) below mean radius / thickness = 10"),
   })
   .superRefine((s, ctx) => {
-    const inner = s.radiusAt === "inner" ? s.radius_mm : s.radiusAt === "mean" ? s.radius_mm - s.thickness_mm / 2 : s.radius_mm - s.thickness_mm;
+    const inner =
+      s.radiusAt === "inner" ? s.radius_mm : s.radiusAt === "mean" ? s.radius_mm - s.thickness_mm / 2 : s.radius_mm - s.thickness_mm;
     if (inner <= 0) {
       ctx.addIssue({
         code: "custom",
@@ -77,7 +83,11 @@ const altitudeSchema = z
   })
   .superRefine((a, ctx) => {
     if (a.cabin_m >= a.flight_m) {
-      ctx.addIssue({ code: "custom", path: ["cabin_m"], message: "the cabin altitude must be below the flight altitude, or the shell is not pressurized" });
+      ctx.addIssue({
+        code: "custom",
+        path: ["cabin_m"],
+        message: "the cabin altitude must be below the flight altitude, or the shell is not pressurized",
+      });
     }
   });
 
@@ -88,7 +98,8 @@ const blockSchema = z
     cycles: positive("the block's cycle count", 1e12, FLOORS.blockCycles),
   })
   .superRefine((b, ctx) => {
-    if (b.min_MPa > b.max_MPa) ctx.addIssue({ code: "custom", path: ["min_MPa"], message: "the block's minimum pressure must not exceed its maximum" });
+    if (b.min_MPa > b.max_MPa)
+      ctx.addIssue({ code: "custom", path: ["min_MPa"], message: "the block's minimum pressure must not exceed its maximum" });
   });
 
 export const pressureSchema = z
@@ -96,15 +107,24 @@ export const pressureSchema = z
     max_MPa: signedStress("the maximum pressure").optional(),
     min_MPa: signedStress("the minimum pressure").optional(),
     fromAltitude: altitudeSchema.optional(),
-    history_MPa: z.array(signedStress("each pressure in the history"), { error: "the pressure history must be a list of numbers" }).max(5_000_000, {
-      error: "the pressure history may hold at most 5 000 000 points",
-    }).optional(),
-    blocks: z.array(blockSchema, { error: "the blocks must be a list" }).min(1, { error: "give at least one block" }).max(10000, {
-      error: "at most 10 000 blocks",
-    }).optional(),
+    history_MPa: z
+      .array(signedStress("each pressure in the history"), { error: "the pressure history must be a list of numbers" })
+      .max(5_000_000, {
+        error: "the pressure history may hold at most 5 000 000 points",
+      })
+      .optional(),
+    blocks: z
+      .array(blockSchema, { error: "the blocks must be a list" })
+      .min(1, { error: "give at least one block" })
+      .max(10000, {
+        error: "at most 10 000 blocks",
+      })
+      .optional(),
   })
   .superRefine((p, ctx) => {
-    const modes = [p.max_MPa !== undefined, p.fromAltitude !== undefined, p.history_MPa !== undefined, p.blocks !== undefined].filter(Boolean).length;
+    const modes = [p.max_MPa !== undefined, p.fromAltitude !== undefined, p.history_MPa !== undefined, p.blocks !== undefined].filter(
+      Boolean,
+    ).length;
     if (modes !== 1) {
       ctx.addIssue({
         code: "custom",
@@ -117,29 +137,51 @@ export const pressureSchema = z
       ctx.addIssue({
         code: "custom",
         path: ["max_MPa"],
-        message: "the maximum pressure must be greater than 0 (inside above outside); an outside pressure needs a buckling check, which this tool does not make",
+        message:
+          "the maximum pressure must be greater than 0 (inside above outside); an outside pressure needs a buckling check, which this tool does not make",
       });
     } else if (p.max_MPa !== undefined && p.max_MPa < FLOORS.pressure_MPa) {
-      ctx.addIssue({ code: "custom", path: ["max_MPa"], message: `the maximum pressure must be at least ${FLOORS.pressure_MPa} MPa (1 Pa)` });
+      ctx.addIssue({
+        code: "custom",
+        path: ["max_MPa"],
+        message: `the maximum pressure must be at least ${FLOORS.pressure_MPa} MPa (1 Pa)`,
+      });
     }
     const top = p.max_MPa ?? Infinity;
-    if (p.min_MPa !== undefined && p.min_MPa > top) ctx.addIssue({ code: "custom", path: ["min_MPa"], message: "the minimum pressure must not exceed the maximum" });
+    if (p.min_MPa !== undefined && p.min_MPa > top)
+      ctx.addIssue({ code: "custom", path: ["min_MPa"], message: "the minimum pressure must not exceed the maximum" });
     if ((p.history_MPa || p.blocks) && p.min_MPa !== undefined) {
-      ctx.addIssue({ code: "custom", path: ["min_MPa"], message: "min_MPa applies only to a single cycle; a history or blocks carry their own minima" });
+      ctx.addIssue({
+        code: "custom",
+        path: ["min_MPa"],
+        message: "min_MPa applies only to a single cycle; a history or blocks carry their own minima",
+      });
     }
     if (p.history_MPa && p.history_MPa.length < 2) {
       ctx.addIssue({ code: "custom", path: ["history_MPa"], message: "the pressure history needs at least two points to make a cycle" });
     }
     const historyTop = p.history_MPa && p.history_MPa.length >= 2 ? Math.max(...sampleMax(p.history_MPa)) : undefined;
     if (historyTop !== undefined && historyTop <= 0) {
-      ctx.addIssue({ code: "custom", path: ["history_MPa"], message: "the pressure history never rises above 0: the shell is never pressurized" });
+      ctx.addIssue({
+        code: "custom",
+        path: ["history_MPa"],
+        message: "the pressure history never rises above 0: the shell is never pressurized",
+      });
     } else if (historyTop !== undefined && historyTop < FLOORS.pressure_MPa) {
-      ctx.addIssue({ code: "custom", path: ["history_MPa"], message: `the pressure history never reaches ${FLOORS.pressure_MPa} MPa (1 Pa): the shell is hardly pressurized` });
+      ctx.addIssue({
+        code: "custom",
+        path: ["history_MPa"],
+        message: `the pressure history never reaches ${FLOORS.pressure_MPa} MPa (1 Pa): the shell is hardly pressurized`,
+      });
     }
     if (p.blocks && p.blocks.every((b) => b.max_MPa <= 0)) {
       ctx.addIssue({ code: "custom", path: ["blocks"], message: "no block rises above 0 MPa: the shell is never pressurized" });
     } else if (p.blocks && p.blocks.every((b) => b.max_MPa < FLOORS.pressure_MPa)) {
-      ctx.addIssue({ code: "custom", path: ["blocks"], message: `no block reaches ${FLOORS.pressure_MPa} MPa (1 Pa): the shell is hardly pressurized` });
+      ctx.addIssue({
+        code: "custom",
+        path: ["blocks"],
+        message: `no block reaches ${FLOORS.pressure_MPa} MPa (1 Pa): the shell is hardly pressurized`,
+      });
     }
   });
 
@@ -156,7 +198,9 @@ export const cutoutSchema = z.discriminatedUnion(
     z.strictObject({ kind: z.literal("none") }),
     z.strictObject({
       kind: z.literal("circular-hole"),
-      radius_mm: positive("the hole radius", 1e4, FLOORS.length).optional().describe("Needed only for notch sensitivity from the root radius"),
+      radius_mm: positive("the hole radius", 1e4, FLOORS.length)
+        .optional()
+        .describe("Needed only for notch sensitivity from the root radius"),
     }),
     z.strictObject({
       kind: z.literal("elliptical-hole"),
@@ -190,12 +234,17 @@ export const materialSchema = z.strictObject({
   fatigueStrengthExponent: num("the Basquin exponent b")
     .lt(0, { error: "the Basquin exponent b must be negative (strength falls as life rises); typical values lie between −0.05 and −0.15" })
     .gt(-1, { error: "the Basquin exponent b must be above −1" })
-    .refine((b) => b >= 0 || b <= -0.01, { error: "the Basquin exponent b must be −0.01 or below; typical values lie between −0.05 and −0.15" })
+    .refine((b) => b >= 0 || b <= -0.01, {
+      error: "the Basquin exponent b must be −0.01 or below; typical values lie between −0.05 and −0.15",
+    })
     .optional(),
   enduranceLimit_MPa: positive("the endurance limit", 1e4, FLOORS.strength).optional(),
   toughness_MPaSqrtM: positive("the fracture toughness", 1e4, FLOORS.toughness).optional(),
   parisC: positive("the Paris coefficient C", 1, FLOORS.parisC).optional(),
-  parisM: num("the Paris exponent m").min(1, { error: "the Paris exponent m must be between 1 and 10" }).max(10, { error: "the Paris exponent m must be between 1 and 10" }).optional(),
+  parisM: num("the Paris exponent m")
+    .min(1, { error: "the Paris exponent m must be between 1 and 10" })
+    .max(10, { error: "the Paris exponent m must be between 1 and 10" })
+    .optional(),
   coupons: z.array(couponSchema, { error: "coupons must be a list" }).max(10000, { error: "at most 10 000 coupons" }).optional(),
   source: text("the material source", 500).optional(),
 });
@@ -203,14 +252,26 @@ export const materialSchema = z.strictObject({
 export const fatigueSchema = z
   .strictObject({
     meanStress: z.enum(MEAN_STRESS_CRITERIA, { error: `meanStress must be one of ${MEAN_STRESS_CRITERIA.join(", ")}` }).default("goodman"),
-    walkerGamma: num("the Walker exponent γ").gt(0, { error: "the Walker exponent γ must be above 0" }).max(1, { error: "the Walker exponent γ must be at most 1" }).default(0.5),
-    notchSensitivity: num("the notch sensitivity q").min(0, { error: "the notch sensitivity q must be between 0 and 1" }).max(1, { error: "the notch sensitivity q must be between 0 and 1" }).optional(),
+    walkerGamma: num("the Walker exponent γ")
+      .gt(0, { error: "the Walker exponent γ must be above 0" })
+      .max(1, { error: "the Walker exponent γ must be at most 1" })
+      .default(0.5),
+    notchSensitivity: num("the notch sensitivity q")
+      .min(0, { error: "the notch sensitivity q must be between 0 and 1" })
+      .max(1, { error: "the notch sensitivity q must be between 0 and 1" })
+      .optional(),
     notchConstant: z.enum(["peterson", "neuber"], { error: 'notchConstant must be "peterson" or "neuber"' }).optional(),
     designLife_cycles: positive("the design life", 1e12, FLOORS.cycles),
-    scatterFactor: num("the scatter factor").min(1, { error: "the scatter factor must be at least 1" }).max(100, { error: "the scatter factor must be at most 100" }).default(1),
+    scatterFactor: num("the scatter factor")
+      .min(1, { error: "the scatter factor must be at least 1" })
+      .max(100, { error: "the scatter factor must be at most 100" })
+      .default(1),
     curve: z.enum(["basquin", "welded"], { error: 'curve must be "basquin" or "welded"' }).default("basquin"),
     detailCategory_MPa: positive("the detail category", 1000, FLOORS.strength).optional(),
-    gammaMf: num("the partial factor γMf").min(1, { error: "γMf must be at least 1" }).max(2, { error: "γMf must be at most 2" }).default(1),
+    gammaMf: num("the partial factor γMf")
+      .min(1, { error: "γMf must be at least 1" })
+      .max(2, { error: "γMf must be at most 2" })
+      .default(1),
     localYield: z.enum(["elastic", "shakedown"], { error: 'localYield must be "elastic" or "shakedown"' }).default("elastic"),
     modifiers: z
       .strictObject({
@@ -220,7 +281,10 @@ export const fatigueSchema = z
           .min(0.5, { error: "the reliability factor needs a reliability between 0.5 and 0.9999" })
           .max(0.9999, { error: "the reliability factor needs a reliability between 0.5 and 0.9999" })
           .optional(),
-        sizeDiameter_mm: num("the effective size").min(2.79, { error: "the size factor is published for 2.79 to 254 mm" }).max(254, { error: "the size factor is published for 2.79 to 254 mm" }).optional(),
+        sizeDiameter_mm: num("the effective size")
+          .min(2.79, { error: "the size factor is published for 2.79 to 254 mm" })
+          .max(254, { error: "the size factor is published for 2.79 to 254 mm" })
+          .optional(),
       })
       .optional(),
   })
@@ -229,19 +293,34 @@ export const fatigueSchema = z
       ctx.addIssue({ code: "custom", path: ["notchConstant"], message: "give either notchSensitivity or notchConstant, not both" });
     }
     if (f.curve === "welded" && f.detailCategory_MPa === undefined) {
-      ctx.addIssue({ code: "custom", path: ["detailCategory_MPa"], message: "a welded curve needs its detail category (stress range at 2 million cycles, MPa)" });
+      ctx.addIssue({
+        code: "custom",
+        path: ["detailCategory_MPa"],
+        message: "a welded curve needs its detail category (stress range at 2 million cycles, MPa)",
+      });
     }
   });
 
 export const crackSchema = z.strictObject({
-  geometry: z.enum(["center-through", "edge-through", "hole-through"], { error: 'crack geometry must be "center-through", "edge-through" or "hole-through"' }),
+  geometry: z.enum(["center-through", "edge-through", "hole-through"], {
+    error: 'crack geometry must be "center-through", "edge-through" or "hole-through"',
+  }),
   initial_mm: positive("the initial crack size", 1e4, FLOORS.length),
   width_mm: positive("the panel width", 1e5, FLOORS.length).optional(),
   holeRadius_mm: positive("the hole radius", 1e4, FLOORS.length).optional(),
-  cracksAtHole: z.union([z.literal(1), z.literal(2)], { error: "cracksAtHole must be 1 or 2" }).default(2).describe("2 (default) is conservative; the one-crack factor is interpolated"),
-  inspectionFactor: num("the inspection factor").min(1, { error: "the inspection factor must be at least 1" }).max(100, { error: "the inspection factor must be at most 100" }).default(2),
+  cracksAtHole: z
+    .union([z.literal(1), z.literal(2)], { error: "cracksAtHole must be 1 or 2" })
+    .default(2)
+    .describe("2 (default) is conservative; the one-crack factor is interpolated"),
+  inspectionFactor: num("the inspection factor")
+    .min(1, { error: "the inspection factor must be at least 1" })
+    .max(100, { error: "the inspection factor must be at most 100" })
+    .default(2),
   bulging: z.boolean({ error: "bulging must be true or false" }).default(false),
-  walkerGamma: num("the crack-growth Walker exponent").gt(0, { error: "the crack-growth Walker exponent must be above 0" }).max(1, { error: "the crack-growth Walker exponent must be at most 1" }).optional(),
+  walkerGamma: num("the crack-growth Walker exponent")
+    .gt(0, { error: "the crack-growth Walker exponent must be above 0" })
+    .max(1, { error: "the crack-growth Walker exponent must be at most 1" })
+    .optional(),
 });
 
 export const evidenceSchema = z.strictObject({
@@ -273,12 +352,22 @@ export const checkSchema = z.strictObject({
   shell: shellSchema,
   pressure: pressureSchema,
   axialExtra: z
-    .strictObject({ max_MPa: signedStress("the extra axial stress at maximum").default(0), min_MPa: signedStress("the extra axial stress at minimum").default(0) })
+    .strictObject({
+      max_MPa: signedStress("the extra axial stress at maximum").default(0),
+      min_MPa: signedStress("the extra axial stress at minimum").default(0),
+    })
     .optional(),
   cutout: cutoutSchema.default({ kind: "none" }),
   material: materialSchema,
   fatigue: fatigueSchema,
-  static: z.strictObject({ yieldFactor: num("the yield factor").min(1, { error: "the yield factor must be at least 1" }).max(10, { error: "the yield factor must be at most 10" }).default(1.5) }).optional(),
+  static: z
+    .strictObject({
+      yieldFactor: num("the yield factor")
+        .min(1, { error: "the yield factor must be at least 1" })
+        .max(10, { error: "the yield factor must be at most 10" })
+        .default(1.5),
+    })
+    .optional(),
   crack: crackSchema.optional(),
   evidence: evidenceSchema.optional(),
   solve: z.strictObject({ for: z.enum(["thickness", "pressure"], { error: 'solve for "thickness" or "pressure"' }) }).optional(),

@@ -13,8 +13,16 @@ export function toFieldErrors(issues: readonly z.core.$ZodIssue[], raw: unknown,
     if (issue.code === "unrecognized_keys") {
       for (const key of issue.keys) {
         // A key may be empty or blank; a path of spaces names nothing, so it names the object that holds the key.
-        if (key.trim() === "") out.push({ path: base || "(document)", message: `a field with a blank name (${JSON.stringify(key)}) is not part of the check format` });
-        else out.push({ path: base ? `${base}.${key}` : key, message: `"${key}" is not a field of the check format here; check its spelling` });
+        if (key.trim() === "")
+          out.push({
+            path: base || "(document)",
+            message: `a field with a blank name (${JSON.stringify(key)}) is not part of the check format`,
+          });
+        else
+          out.push({
+            path: base ? `${base}.${key}` : key,
+            message: `"${key}" is not a field of the check format here; check its spelling`,
+          });
       }
       continue;
     }
@@ -22,7 +30,9 @@ export function toFieldErrors(issues: readonly z.core.$ZodIssue[], raw: unknown,
     let message = issue.message;
     if (issue.code === "invalid_type" && !present) message = "is required";
     if (issue.code === "invalid_union" && "note" in issue && issue.note === "No matching discriminator") {
-      message = present ? `must be one of ${(issue as { options?: unknown[] }).options?.map((o) => `"${String(o)}"`).join(", ")}` : "is required";
+      message = present
+        ? `must be one of ${(issue as { options?: unknown[] }).options?.map((o) => `"${String(o)}"`).join(", ")}`
+        : "is required";
     }
     out.push({ path: base || "(document)", message });
   }

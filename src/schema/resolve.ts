@@ -35,7 +35,10 @@ export function resolveCheck(parsed: ParsedCheck): { ok: true; value: ResolvedCh
   if (m.id !== undefined) {
     const lib = findMaterial(m.id);
     if (!lib) {
-      errors.push({ path: "material.id", message: `unknown material "${m.id}"; the library holds ${MATERIALS.map((x) => x.id).join(", ")}` });
+      errors.push({
+        path: "material.id",
+        message: `unknown material "${m.id}"; the library holds ${MATERIALS.map((x) => x.id).join(", ")}`,
+      });
       return { ok: false, errors };
     }
     base = { ...lib, source: `${lib.source} (${TYPICAL_FLAG})` };
@@ -57,17 +60,28 @@ export function resolveCheck(parsed: ParsedCheck): { ok: true; value: ResolvedCh
     need("toughness_MPaSqrtM", "the fracture toughness", why);
     need("parisC", "the Paris coefficient C", why);
     need("parisM", "the Paris exponent m", why);
-    if (parsed.crack.geometry === "hole-through" && parsed.crack.holeRadius_mm === undefined && !(parsed.cutout.kind === "circular-hole" && parsed.cutout.radius_mm)) {
+    if (
+      parsed.crack.geometry === "hole-through" &&
+      parsed.crack.holeRadius_mm === undefined &&
+      !(parsed.cutout.kind === "circular-hole" && parsed.cutout.radius_mm)
+    ) {
       errors.push({ path: "crack.holeRadius_mm", message: "a crack from a hole needs the hole radius (here or as cutout.radius_mm)" });
     }
   }
   if (merged.yield_MPa !== undefined && merged.ultimate_MPa !== undefined && merged.yield_MPa > merged.ultimate_MPa) {
-    errors.push({ path: "material.yield_MPa", message: `the yield strength (${merged.yield_MPa} MPa) must not exceed the ultimate strength (${merged.ultimate_MPa} MPa)` });
+    errors.push({
+      path: "material.yield_MPa",
+      message: `the yield strength (${merged.yield_MPa} MPa) must not exceed the ultimate strength (${merged.ultimate_MPa} MPa)`,
+    });
   }
   if (merged.enduranceLimit_MPa !== undefined && merged.ultimate_MPa !== undefined && merged.enduranceLimit_MPa >= merged.ultimate_MPa) {
     errors.push({ path: "material.enduranceLimit_MPa", message: "the endurance limit must be below the ultimate strength" });
   }
-  if (merged.fatigueStrengthCoefficient_MPa !== undefined && merged.ultimate_MPa !== undefined && merged.fatigueStrengthCoefficient_MPa < 0.5 * merged.ultimate_MPa) {
+  if (
+    merged.fatigueStrengthCoefficient_MPa !== undefined &&
+    merged.ultimate_MPa !== undefined &&
+    merged.fatigueStrengthCoefficient_MPa < 0.5 * merged.ultimate_MPa
+  ) {
     errors.push({
       path: "material.fatigueStrengthCoefficient_MPa",
       message: `σ'f (${merged.fatigueStrengthCoefficient_MPa} MPa) is below half the ultimate strength; σ'f is normally near or above the ultimate strength — check the value`,
@@ -77,16 +91,25 @@ export function resolveCheck(parsed: ParsedCheck): { ok: true; value: ResolvedCh
     const family = merged.family ?? "other";
     const steelLike = family === "steel" || family === "stainless";
     if (parsed.fatigue.notchConstant === "neuber" && !steelLike) {
-      errors.push({ path: "fatigue.notchConstant", message: "Neuber's constant is published here for steels only; use peterson or give notchSensitivity" });
+      errors.push({
+        path: "fatigue.notchConstant",
+        message: "Neuber's constant is published here for steels only; use peterson or give notchSensitivity",
+      });
     } else if (!steelLike && family !== "aluminium") {
-      errors.push({ path: "fatigue.notchConstant", message: `Peterson's constant is published here for steels and aluminium alloys, not for the "${family}" family; give notchSensitivity` });
+      errors.push({
+        path: "fatigue.notchConstant",
+        message: `Peterson's constant is published here for steels and aluminium alloys, not for the "${family}" family; give notchSensitivity`,
+      });
     }
     const radiusKnown =
       parsed.cutout.kind === "elliptical-hole" ||
       (parsed.cutout.kind === "circular-hole" && parsed.cutout.radius_mm !== undefined) ||
       (parsed.cutout.kind === "given" && parsed.cutout.rootRadius_mm !== undefined);
     if (!radiusKnown) {
-      errors.push({ path: "fatigue.notchConstant", message: "notch sensitivity from a constant needs the root radius: give cutout.radius_mm or cutout.rootRadius_mm" });
+      errors.push({
+        path: "fatigue.notchConstant",
+        message: "notch sensitivity from a constant needs the root radius: give cutout.radius_mm or cutout.rootRadius_mm",
+      });
     }
   }
   if (errors.length) return { ok: false, errors };

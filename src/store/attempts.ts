@@ -31,7 +31,10 @@ export function refuseWhileLocked(ctx: StoreContext, key: string, shownName: str
   if (t.failures >= MAX_FAILURES) {
     const minutes = Math.ceil((t.since + WINDOW_MS - now) / 60000);
     throw new WrongPassphraseError([
-      { path: "passphrase", message: `too many wrong passphrases for "${shownName}"; signing as this person is paused for ${minutes} more minute${minutes === 1 ? "" : "s"}` },
+      {
+        path: "passphrase",
+        message: `too many wrong passphrases for "${shownName}"; signing as this person is paused for ${minutes} more minute${minutes === 1 ? "" : "s"}`,
+      },
     ]);
   }
 }

@@ -62,7 +62,14 @@ export function createCheck(ctx: StoreContext, args: NewCheck): CreatedCheck {
     .transaction(() => {
       assertCalcNumberFree(ctx.db, calcNumber, fromInput ? "input.calcNumber" : "calcNumber");
       ctx.db.prepare("INSERT INTO checks (id, title, calc_number, created_at) VALUES (?, ?, ?, ?)").run(id, title, calcNumber, at);
-      insertRevision(ctx.db, id, { number: 1, canonical, fingerprint: fp, engineVersion: ctx.engineVersion, savedAt: at, savedBy: fields.savedBy ?? null });
+      insertRevision(ctx.db, id, {
+        number: 1,
+        canonical,
+        fingerprint: fp,
+        engineVersion: ctx.engineVersion,
+        savedAt: at,
+        savedBy: fields.savedBy ?? null,
+      });
       appendEvent(ctx.db, id, { at, kind: "saved", revision: 1, actor: fields.savedBy ?? null, detail: { fingerprint: fp } });
     })
     .immediate();
@@ -104,17 +111,17 @@ export interface CheckRow {
 }
 
 export function requireCheck(db: Db, checkId: string): CheckRow {
-  const row = db
-    .prepare("SELECT id, title, calc_number AS calcNumber, created_at AS createdAt FROM checks WHERE id = ?")
-    .get(checkId) as CheckRow | undefined;
+  const row = db.prepare("SELECT id, title, calc_number AS calcNumber, created_at AS createdAt FROM checks WHERE id = ?").get(checkId) as
+    | CheckRow
+    | undefined;
   if (!row) throw new RecordNotFoundError([{ path: "id", message: `no saved check has the id "${checkId}"` }]);
   return row;
 }
 
 export function latestRevision(db: Db, checkId: string): { number: number; fingerprint: string } {
-  const row = db
-    .prepare("SELECT number, fingerprint FROM revisions WHERE check_id = ? ORDER BY number DESC LIMIT 1")
-    .get(checkId) as { number: number; fingerprint: string } | undefined;
+  const row = db.prepare("SELECT number, fingerprint FROM revisions WHERE check_id = ? ORDER BY number DESC LIMIT 1").get(checkId) as
+    | { number: number; fingerprint: string }
+    | undefined;
   // A check is created together with its revision 1 and revisions cannot be deleted.
   if (!row) throw new Error(`check ${checkId} has no revisions: the database is inconsistent`);
   return row;

@@ -38,8 +38,6 @@ interface EventRow {
 
 /** The check's events, oldest first. */
 export function listEvents(db: Db, checkId: string): EventRecord[] {
-  const rows = db
-    .prepare("SELECT at, kind, revision, actor, detail FROM events WHERE check_id = ? ORDER BY id")
-    .all(checkId) as EventRow[];
+  const rows = db.prepare("SELECT at, kind, revision, actor, detail FROM events WHERE check_id = ? ORDER BY id").all(checkId) as EventRow[];
   return rows.map((r) => ({ ...r, detail: r.detail === null ? null : (JSON.parse(r.detail) as Record<string, unknown>) }));
 }

@@ -113,7 +113,9 @@ export function importCheck(ctx: StoreContext, document: unknown): ImportedCheck
         throw new RecordConflictError([{ path: "check.id", message: `check ${check.id} is already in this database` }]);
       }
       assertCalcNumberFree(ctx.db, check.calcNumber, "check.calcNumber");
-      ctx.db.prepare("INSERT INTO checks (id, title, calc_number, created_at) VALUES (?, ?, ?, ?)").run(check.id, check.title, check.calcNumber, check.createdAt);
+      ctx.db
+        .prepare("INSERT INTO checks (id, title, calc_number, created_at) VALUES (?, ?, ?, ?)")
+        .run(check.id, check.title, check.calcNumber, check.createdAt);
       const addSignoff = ctx.db.prepare(
         "INSERT INTO signoffs (check_id, revision, role, name, name_key, signer_id, signed_at) VALUES (?, ?, ?, ?, ?, NULL, ?)",
       );
@@ -151,7 +153,10 @@ function verify(ctx: StoreContext, doc: ExchangeDocument, raw: unknown): FieldEr
     const at = `revisions.${i}`;
     if (r.number !== i + 1) errors.push({ path: `${at}.number`, message: `must be ${i + 1}: revisions are numbered 1, 2, 3… in order` });
     if (fingerprint(r.input, r.engineVersion) !== r.fingerprint) {
-      errors.push({ path: `${at}.fingerprint`, message: "does not match the revision's input and engine version: the input was changed after it was saved" });
+      errors.push({
+        path: `${at}.fingerprint`,
+        message: "does not match the revision's input and engine version: the input was changed after it was saved",
+      });
     }
     try {
       validInput(ctx, r.input, `${at}.input`);

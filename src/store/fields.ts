@@ -66,7 +66,8 @@ export function zodFieldErrors(error: z.ZodError, prefix = ""): FieldError[] {
     if (issue.code === "unrecognized_keys") {
       for (const key of issue.keys) {
         // A blank key would make a path of spaces, which names nothing: name the record that holds it.
-        if (key.trim() === "") out.push(entry(at, `holds a field with a blank name (${JSON.stringify(key)}), which this record does not take`));
+        if (key.trim() === "")
+          out.push(entry(at, `holds a field with a blank name (${JSON.stringify(key)}), which this record does not take`));
         else out.push(entry(joinPath(at, key), "is not a field this record takes"));
       }
     } else {

@@ -116,7 +116,11 @@ function revisionRecord(db: Db, checkId: string, { inputJson, ...row }: StoredRe
   return {
     ...row,
     input: JSON.parse(inputJson) as unknown,
-    state: revisionState(row.number, latest, signoffs.map((s) => s.role)),
+    state: revisionState(
+      row.number,
+      latest,
+      signoffs.map((s) => s.role),
+    ),
     signoffs,
   };
 }

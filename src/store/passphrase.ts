@@ -38,7 +38,5 @@ function derive(passphrase: string, salt: Buffer, cost: ScryptCost): Promise<Buf
   const options: ScryptOptions = { N: cost.n, r: cost.r, p: cost.p, maxmem: 256 * cost.n * cost.r };
   // NFC: the same phrase typed on two systems can arrive in two Unicode forms.
   const secret = passphrase.normalize("NFC");
-  return new Promise((resolve, reject) =>
-    scrypt(secret, salt, KEY_LENGTH, options, (err, key) => (err ? reject(err) : resolve(key))),
-  );
+  return new Promise((resolve, reject) => scrypt(secret, salt, KEY_LENGTH, options, (err, key) => (err ? reject(err) : resolve(key))));
 }

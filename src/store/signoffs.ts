@@ -66,7 +66,10 @@ export async function signOff(ctx: StoreContext, checkId: string, request: SignO
       const latest = latestRevision(ctx.db, checkId).number;
       if (req.revision < latest) {
         throw new SignOffRefusedError([
-          { path: "revision", message: `revision ${req.revision} is superseded by revision ${latest}; only the latest revision can be signed` },
+          {
+            path: "revision",
+            message: `revision ${req.revision} is superseded by revision ${latest}; only the latest revision can be signed`,
+          },
         ]);
       }
       const existing = signoffRows(ctx.db, checkId, req.revision);
@@ -74,7 +77,13 @@ export async function signOff(ctx: StoreContext, checkId: string, request: SignO
       ctx.db
         .prepare("INSERT INTO signoffs (check_id, revision, role, name, name_key, signer_id, signed_at) VALUES (?, ?, ?, ?, ?, ?, ?)")
         .run(checkId, req.revision, req.role, signer.name, signer.key, signer.id, signedAt);
-      appendEvent(ctx.db, checkId, { at: signedAt, kind: "signed", revision: req.revision, actor: signer.name, detail: { role: req.role } });
+      appendEvent(ctx.db, checkId, {
+        at: signedAt,
+        kind: "signed",
+        revision: req.revision,
+        actor: signer.name,
+        detail: { role: req.role },
+      });
       const roles = [...existing.map((s) => s.role), req.role];
       return {
         revision: req.revision,
@@ -117,7 +126,10 @@ export function signOffProblem(
   }
   const checker = by("checked");
   if (role === "approved" && checker?.key === signerKey) {
-    return { path: "name", message: `${checker.name} checked this revision and may not also approve it; the approval must be a second look` };
+    return {
+      path: "name",
+      message: `${checker.name} checked this revision and may not also approve it; the approval must be a second look`,
+    };
   }
   return undefined;
 }

@@ -11,10 +11,16 @@ export function errorsDoc(path: string, message: string) {
 }
 
 /** Read a JSON body without throwing: malformed or absurdly nested JSON becomes an errors document. */
-export async function readJson(req: Request): Promise<{ ok: true; value: unknown } | { ok: false; status: 400 | 415 | 422; body: ReturnType<typeof errorsDoc> }> {
+export async function readJson(
+  req: Request,
+): Promise<{ ok: true; value: unknown } | { ok: false; status: 400 | 415 | 422; body: ReturnType<typeof errorsDoc> }> {
   const type = req.headers.get("content-type") ?? "";
   if (!/^application\/(.+\+)?json\b/i.test(type)) {
-    return { ok: false, status: 415, body: errorsDoc("(document)", `send the check as JSON with Content-Type: application/json (got "${type || "none"}")`) };
+    return {
+      ok: false,
+      status: 415,
+      body: errorsDoc("(document)", `send the check as JSON with Content-Type: application/json (got "${type || "none"}")`),
+    };
   }
   const text = await req.text();
   let value: unknown;
@@ -24,7 +30,12 @@ export async function readJson(req: Request): Promise<{ ok: true; value: unknown
     return { ok: false, status: 400, body: errorsDoc("(document)", `the body is not valid JSON: ${(err as Error).message}`) };
   }
   const deep = tooDeepAt(value);
-  if (deep !== undefined) return { ok: false, status: 422, body: errorsDoc(deep, `nests deeper than ${MAX_JSON_DEPTH} levels; no field of Hoopwise nests that deep`) };
+  if (deep !== undefined)
+    return {
+      ok: false,
+      status: 422,
+      body: errorsDoc(deep, `nests deeper than ${MAX_JSON_DEPTH} levels; no field of Hoopwise nests that deep`),
+    };
   return { ok: true, value };
 }
 

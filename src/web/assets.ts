@@ -36,7 +36,12 @@ function assets(): Map<string, Asset> {
     loaded = new Map();
     for (const [name, { file, type }] of Object.entries(SOURCES)) {
       const body = readFileSync(file);
-      loaded.set(name, { body, gzip: gzipSync(body, { level: 9 }), type, hash: createHash("sha256").update(body).digest("hex").slice(0, 12) });
+      loaded.set(name, {
+        body,
+        gzip: gzipSync(body, { level: 9 }),
+        type,
+        hash: createHash("sha256").update(body).digest("hex").slice(0, 12),
+      });
     }
   }
   return loaded;

@@ -21,7 +21,8 @@ export type Decoded = { ok: true; value: unknown } | { ok: false; message: strin
 /** Never throws: a damaged or truncated link gives a message a user can act on. */
 export function decodeCheck(encoded: string): Decoded {
   if (encoded.length > MAX_LINK_CHARS) return { ok: false, message: `the link's check is longer than ${MAX_LINK_CHARS} characters` };
-  if (!/^[A-Za-z0-9_-]*$/.test(encoded)) return { ok: false, message: "the link's check holds characters a check link never has; was it copied in full?" };
+  if (!/^[A-Za-z0-9_-]*$/.test(encoded))
+    return { ok: false, message: "the link's check holds characters a check link never has; was it copied in full?" };
   let text: string;
   try {
     text = inflateRawSync(Buffer.from(encoded, "base64url"), { maxOutputLength: MAX_INFLATED_BYTES }).toString("utf8");
@@ -34,6 +35,7 @@ export function decodeCheck(encoded: string): Decoded {
   } catch {
     return { ok: false, message: "the link's check is not valid JSON; was it copied in full?" };
   }
-  if (tooDeepAt(value) !== undefined) return { ok: false, message: `the link's check nests deeper than ${MAX_JSON_DEPTH} levels, which no check does` };
+  if (tooDeepAt(value) !== undefined)
+    return { ok: false, message: `the link's check nests deeper than ${MAX_JSON_DEPTH} levels, which no check does` };
   return { ok: true, value };
 }

@@ -37,7 +37,11 @@ interface Worked {
 }
 
 /** Run a check document and lay out what the page needs. Errors go beside the field they belong to, or in the general list. */
-function work(document: Record<string, unknown>, solve: Posted["solve"], form: { values: FormValues; units: Units; rows: number[]; fieldFor: (p: string) => string | undefined }): Worked {
+function work(
+  document: Record<string, unknown>,
+  solve: Posted["solve"],
+  form: { values: FormValues; units: Units; rows: number[]; fieldFor: (p: string) => string | undefined },
+): Worked {
   const run = checkDocument(solve ? { ...document, solve: { for: solve } } : document);
   const errors = new Map<string, string[]>();
   const general: FieldError[] = [];
@@ -65,7 +69,13 @@ function work(document: Record<string, unknown>, solve: Posted["solve"], form: {
     }
     outcome = { ...outcome, errorCount: run.errors.length };
   }
-  const state: FormState = { values: form.values, errors, units: form.units, library: findMaterial(form.values["material.id"] ?? ""), blockRows: form.rows };
+  const state: FormState = {
+    values: form.values,
+    errors,
+    units: form.units,
+    library: findMaterial(form.values["material.id"] ?? ""),
+    blockRows: form.rows,
+  };
   return { state, outcome, link };
 }
 
@@ -79,7 +89,8 @@ function workDocument(doc: unknown, query: Record<string, string | undefined>, s
   const blocks = valueAt(doc, "pressure.blocks");
   const rows = Array.from({ length: Math.max(3, (Array.isArray(blocks) ? blocks.length : 0) + SPARE_BLOCK_ROWS) }, (_, i) => i);
   // The document itself is checked, not the form read back from it, so a link reproduces its numbers exactly.
-  const document = doc !== null && typeof doc === "object" && !Array.isArray(doc) ? { ...(doc as Record<string, unknown>), display: { ...units } } : {};
+  const document =
+    doc !== null && typeof doc === "object" && !Array.isArray(doc) ? { ...(doc as Record<string, unknown>), display: { ...units } } : {};
   return work(document, solve, { values, units, rows, fieldFor: readForm(values, units).fieldFor });
 }
 
@@ -101,7 +112,13 @@ async function fullPage(c: Context, w: Worked, status: 200 | 403 | 404 | 409 | 4
  * The checker page for a posted form that another route (saving to the records) did not act on:
  * the reason as a notice, and that route's own messages beside the fields they are about.
  */
-export async function showPosted(c: Context, posted: Posted, notice: string, status: 403 | 404 | 409 | 422 = 422, beside: Record<string, string[]> = {}) {
+export async function showPosted(
+  c: Context,
+  posted: Posted,
+  notice: string,
+  status: 403 | 404 | 409 | 422 = 422,
+  beside: Record<string, string[]> = {},
+) {
   const w = work(posted.document, undefined, posted);
   const errors = new Map(w.state.errors);
   for (const [name, messages] of Object.entries(beside)) errors.set(name, [...(errors.get(name) ?? []), ...messages]);
@@ -114,10 +131,21 @@ async function showLinked(c: Context) {
   if (q.c !== undefined) {
     const decoded = decodeCheck(q.c);
     if (decoded.ok) return fullPage(c, workDocument(decoded.value, q), 200);
-    return fullPage(c, workDocument(DEMOS[0].document, q), 422, `The link could not be opened: ${decoded.message}. The cabin example is shown instead.`);
+    return fullPage(
+      c,
+      workDocument(DEMOS[0].document, q),
+      422,
+      `The link could not be opened: ${decoded.message}. The cabin example is shown instead.`,
+    );
   }
   const demo = findDemo(q.demo ?? DEMOS[0].id);
-  if (!demo) return fullPage(c, workDocument(DEMOS[0].document, q), 422, `There is no example called “${q.demo}”. The cabin example is shown instead.`);
+  if (!demo)
+    return fullPage(
+      c,
+      workDocument(DEMOS[0].document, q),
+      422,
+      `There is no example called “${q.demo}”. The cabin example is shown instead.`,
+    );
   return fullPage(c, workDocument(demo.document, q), 200);
 }
 
@@ -152,7 +180,14 @@ async function showPlots(c: Context) {
 
 /** A file name from the title: letters, digits and hyphens only. */
 function fileName(title: unknown): string {
-  const slug = typeof title === "string" ? title.toLowerCase().replace(/[^a-z0-9]+/g, "-").replace(/^-|-$/g, "").slice(0, 60) : "";
+  const slug =
+    typeof title === "string"
+      ? title
+          .toLowerCase()
+          .replace(/[^a-z0-9]+/g, "-")
+          .replace(/^-|-$/g, "")
+          .slice(0, 60)
+      : "";
   return `hoopwise-${slug || "check"}.json`;
 }
 
@@ -163,7 +198,11 @@ function download(c: Context, doc: unknown) {
 
 const formLimit = bodyLimit({
   maxSize: MAX_JSON_BYTES,
-  onError: (c) => c.html(`<!doctype html><title>Too large</title><p>The form is larger than ${MAX_JSON_BYTES / 1024 / 1024} MiB. Shorten the pressure history and try again.</p>`, 413),
+  onError: (c) =>
+    c.html(
+      `<!doctype html><title>Too large</title><p>The form is larger than ${MAX_JSON_BYTES / 1024 / 1024} MiB. Shorten the pressure history and try again.</p>`,
+      413,
+    ),
 });
 
 export function pageRoutes(): Hono {
@@ -193,14 +232,16 @@ export function pageRoutes(): Hono {
   // The page's print button: the same fields as the form, the sheet back as a PDF download.
   app.post("/sheet", formLimit, async (c) => {
     const posted = await readPosted(c.req.raw);
-    if (!parseCheck(posted.document).ok) return fullPage(c, work(posted.document, undefined, posted), 422, "The sheet was not printed: correct the marked fields first.");
+    if (!parseCheck(posted.document).ok)
+      return fullPage(c, work(posted.document, undefined, posted), 422, "The sheet was not printed: correct the marked fields first.");
     return sheetResponse(posted.document);
   });
 
   app.post("/import", formLimit, async (c) => {
     const form = await c.req.raw.formData().catch(() => undefined);
     const file = form?.get("file");
-    const retry = (message: string) => fullPage(c, workDocument(DEMOS[0].document, {}), 422, `${message} The cabin example is shown instead.`);
+    const retry = (message: string) =>
+      fullPage(c, workDocument(DEMOS[0].document, {}), 422, `${message} The cabin example is shown instead.`);
     if (!(file instanceof File) || file.size === 0) return retry("Choose a check file (JSON) to open.");
     let doc: unknown;
     try {
@@ -210,7 +251,12 @@ export function pageRoutes(): Hono {
     }
     if (tooDeepAt(doc) !== undefined) return retry(`“${file.name}” nests deeper than ${MAX_JSON_DEPTH} levels, which no check does.`);
     const w = workDocument(doc, {});
-    return fullPage(c, w, w.outcome.view ? 200 : 422, w.outcome.view ? undefined : `“${file.name}” was opened, but it needs correcting before it can be worked out.`);
+    return fullPage(
+      c,
+      w,
+      w.outcome.view ? 200 : 422,
+      w.outcome.view ? undefined : `“${file.name}” was opened, but it needs correcting before it can be worked out.`,
+    );
   });
   return app;
 }

@@ -79,7 +79,13 @@ export function recordsPages({ store }: { store: Store }): Hono {
       if (!(err instanceof RecordError)) throw err;
       const errors = formErrors(err.errors, SIGN_FIELDS);
       // Reload: a refusal for a superseded revision means someone saved meanwhile, and the page should show it.
-      return checkPage(c, store.getCheck(check.id), { ...form, errors }, statusOf(err), refused("Not signed: see the message beside the field."));
+      return checkPage(
+        c,
+        store.getCheck(check.id),
+        { ...form, errors },
+        statusOf(err),
+        refused("Not signed: see the message beside the field."),
+      );
     }
   });
 
@@ -95,8 +101,8 @@ export function recordsPages({ store }: { store: Store }): Hono {
     if (link.length > MAX_LINK_CHARS) {
       const text = (
         <>
-          Revision {revision.number} is too large to open by a link. <a href={inputPath(check.id, revision.number)}>Download its input</a>, then
-          open that file in the checker.
+          Revision {revision.number} is too large to open by a link. <a href={inputPath(check.id, revision.number)}>Download its input</a>,
+          then open that file in the checker.
         </>
       );
       return checkPage(c, store.getCheck(check.id), { errors: NO_ERRORS }, 200, refused(text));
@@ -114,7 +120,8 @@ export function recordsPages({ store }: { store: Store }): Hono {
 
   function savedRevision(c: Context) {
     const n = Number(c.req.param("n"));
-    if (!Number.isInteger(n) || n < 1) throw new RecordNotFoundError([{ path: "revision", message: `there is no revision “${c.req.param("n")}”` }]);
+    if (!Number.isInteger(n) || n < 1)
+      throw new RecordNotFoundError([{ path: "revision", message: `there is no revision “${c.req.param("n")}”` }]);
     return store.getSheetRevision(c.req.param("id") ?? "", n);
   }
 
@@ -139,7 +146,10 @@ const refused = (text: Notice["text"]): Notice => ({ tone: "refused", text });
 
 /** Every problem with a registration at once: the store's own field rules, and the two passphrases agreeing. */
 function signerProblems(f: Record<string, string>) {
-  const parsed = safeParseFields(z.object({ name: personNameField, passphrase: passphraseField }), { name: f.name, passphrase: f.passphrase });
+  const parsed = safeParseFields(z.object({ name: personNameField, passphrase: passphraseField }), {
+    name: f.name,
+    passphrase: f.passphrase,
+  });
   const problems = parsed.success ? [] : zodFieldErrors(parsed.error);
   if ((f.passphrase ?? "") !== (f.again ?? "")) {
     problems.push({ path: "again", message: "does not match the passphrase above: type the same passphrase twice" });
@@ -155,7 +165,8 @@ function outcomeNotice(check: CheckRecord, q: Record<string, string>): Notice | 
     const before = rev.number > 1 ? ` Revision ${rev.number - 1} is now superseded and keeps its sign-offs.` : "";
     return { tone: "done", text: `Saved as revision ${rev.number}, a draft waiting for sign-off.${before}` };
   }
-  if (q.unchanged !== undefined) return { tone: "done", text: `Nothing changed since revision ${rev.number}, so no new revision was saved.` };
+  if (q.unchanged !== undefined)
+    return { tone: "done", text: `Nothing changed since revision ${rev.number}, so no new revision was saved.` };
   const s = rev.signoffs.find((x) => x.role === q.role);
   return s ? { tone: "done", text: `Revision ${rev.number} signed as ${s.role} by ${s.name}.` } : undefined;
 }

@@ -34,7 +34,8 @@ export function saveRoutes({ store }: { store: Store }): Hono {
     const savedBy = blankToUndefined(posted.values.savedBy);
     const record = blankToUndefined(posted.values.record);
     try {
-      if (record && posted.values.as !== "new") return savedAnswer(c, record, store.addRevision(record, { input: posted.document, savedBy }));
+      if (record && posted.values.as !== "new")
+        return savedAnswer(c, record, store.addRevision(record, { input: posted.document, savedBy }));
       const calcNumber = typeof posted.document.calcNumber === "string" ? posted.document.calcNumber.trim() : "";
       const existing = calcNumber ? store.listChecks().find((x) => x.calcNumber === calcNumber) : undefined;
       if (existing) {

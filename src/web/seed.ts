@@ -4,6 +4,7 @@ import type { Store } from "../store/index.ts";
 /** On first run (no saved check yet) the demos are saved as revision 1, so the records list is never empty for a new user. */
 export function seedDemos(store: Store): number {
   if (store.listChecks().length > 0) return 0;
-  for (const d of DEMOS) store.createCheck({ input: d.document, title: d.document.title, calcNumber: d.document.calcNumber, savedBy: "Hoopwise demo" });
+  for (const d of DEMOS)
+    store.createCheck({ input: d.document, title: d.document.title, calcNumber: d.document.calcNumber, savedBy: "Hoopwise demo" });
   return DEMOS.length;
 }

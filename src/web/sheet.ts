@@ -9,7 +9,11 @@ import { errorsDoc, readJson, tooLarge } from "./api.ts";
  * hold any script) also goes in the RFC 6266 / RFC 8187 `filename*` form.
  */
 export function sheetFilename(calcNumber: string | undefined): string {
-  const safe = (calcNumber ?? "").normalize("NFKD").replace(/[^A-Za-z0-9._-]+/g, "-").replace(/^[-.]+|[-.]+$/g, "").slice(0, 80);
+  const safe = (calcNumber ?? "")
+    .normalize("NFKD")
+    .replace(/[^A-Za-z0-9._-]+/g, "-")
+    .replace(/^[-.]+|[-.]+$/g, "")
+    .slice(0, 80);
   return `${safe || "check"}-sheet.pdf`;
 }
 

@@ -124,6 +124,10 @@ export function formNumber(x: number): string {
   if (!Number.isFinite(x)) return String(x);
   if (x === 0) return "0";
   const ax = Math.abs(x);
-  if (ax >= 1e7 || ax < 1e-4) return x.toExponential(5).replace(/\.?0+e/, "e").replace("e+", "e");
+  if (ax >= 1e7 || ax < 1e-4)
+    return x
+      .toExponential(5)
+      .replace(/\.?0+e/, "e")
+      .replace("e+", "e");
   return String(Number(x.toPrecision(6)));
 }

@@ -27,7 +27,7 @@ export function engineBench() {
   const demos = Object.fromEntries(DEMOS.map((d) => [d.id, medianMs(() => checkDocument(d.document), 100)]));
   const solveDoc = { ...example, crack: undefined, evidence: undefined, solve: { for: "thickness" } };
   const solved = checkDocument(solveDoc);
-  const evaluations = solved.ok ? solved.result.solution?.evaluations ?? NaN : NaN;
+  const evaluations = solved.ok ? (solved.result.solution?.evaluations ?? NaN) : NaN;
   return { fullCheck_ms: full, demos_ms: demos, thicknessSolveEvaluations: evaluations };
 }
 
@@ -35,7 +35,7 @@ export function engineBench() {
 function randomHistory(points: number): Float64Array {
   const h = new Float64Array(points);
   let seed = 12345;
-  const rand = () => ((seed = (seed * 1103515245 + 12345) & 0x7fffffff) / 0x7fffffff);
+  const rand = () => (seed = (seed * 1103515245 + 12345) & 0x7fffffff) / 0x7fffffff;
   for (let i = 0; i < points; i++) h[i] = Math.round((0.4 + 0.6 * rand()) * 1000) / 1000;
   return h;
 }
@@ -72,24 +72,32 @@ export function rainflowBench(points = 1_000_000, shape: "random" | "flights" = 
   const curve = { coefficient_MPa: 900, exponent: -0.102, factor: 1 };
   const perMPa = 150;
   let checksum = 0;
-  const baseline = medianMs(() => {
-    let s = 0;
-    for (let i = 0; i < history.length; i++) s += history[i];
-    checksum += s;
-  }, 9, 2);
+  const baseline = medianMs(
+    () => {
+      let s = 0;
+      for (let i = 0; i < history.length; i++) s += history[i];
+      checksum += s;
+    },
+    9,
+    2,
+  );
   // Peak memory: the process's high-water resident set (VmHWM) before and after, so garbage the
   // collector has not yet returned still counts, as it does for the machine.
   (globalThis as { gc?: () => void }).gc?.();
   const before = highWater_bytes();
-  const work = medianMs(() => {
-    const { cycles } = countHistory(history);
-    const d = minerDamage(cycles, (range, mean) => {
-      const a = (perMPa * range) / 2;
-      const m = perMPa * mean;
-      return basquinLife(a / (1 - m / 470), curve);
-    });
-    checksum += d.damagePerPass;
-  }, 7, 3);
+  const work = medianMs(
+    () => {
+      const { cycles } = countHistory(history);
+      const d = minerDamage(cycles, (range, mean) => {
+        const a = (perMPa * range) / 2;
+        const m = perMPa * mean;
+        return basquinLife(a / (1 - m / 470), curve);
+      });
+      checksum += d.damagePerPass;
+    },
+    7,
+    3,
+  );
   const peak = highWater_bytes() - before;
   return {
     points,

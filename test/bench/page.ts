@@ -43,7 +43,8 @@ export async function pageBench(requests = 50) {
       const res = await fetch(`${base}/recalc`, { method: "POST", body, headers: { "HX-Request": "true" } });
       const html = await res.text();
       const ms = performance.now() - t;
-      if (res.status !== 200 || !html.includes('id="verdict"')) throw new Error(`recalculation ${i} answered ${res.status} without a verdict`);
+      if (res.status !== 200 || !html.includes('id="verdict"'))
+        throw new Error(`recalculation ${i} answered ${res.status} without a verdict`);
       return { ms, bytes: Buffer.byteLength(html) };
     };
     for (let i = 0; i < 5; i++) await edit(i);

@@ -18,12 +18,20 @@ add("Thickness solve: engine evaluations per solve (rel. tol. 1e-4)", String(e.t
 // Flights first: the resident high-water mark only rises, so the smaller case must be measured before the larger.
 for (const shape of ["flights", "random"] as const) {
   const r = rainflowBench(1_000_000, shape);
-  add(`Rainflow + Miner on ${r.points.toLocaleString("en")} ${shape === "random" ? "random points (worst case)" : "points of logged flights"} / one summing pass`, `${f(r.ratio, 1)} (${f(r.rainflowMiner_ms, 0)} ms / ${f(r.onePassSum_ms, 1)} ms)`, "≤ 8");
+  add(
+    `Rainflow + Miner on ${r.points.toLocaleString("en")} ${shape === "random" ? "random points (worst case)" : "points of logged flights"} / one summing pass`,
+    `${f(r.ratio, 1)} (${f(r.rainflowMiner_ms, 0)} ms / ${f(r.onePassSum_ms, 1)} ms)`,
+    "≤ 8",
+  );
   add(`Rainflow + Miner peak extra resident memory / input bytes (${shape})`, f(r.peakExtraMemory_overInput, 2), "≤ 3");
 }
 
 const a = await apiBench();
-add("JSON API full check / bare /healthz throughput (autocannon, 10 connections)", `${f(a.ratio, 3)} (${f(a.check_rps, 0)} / ${f(a.healthz_rps, 0)} req/s)`, "≥ 0.6");
+add(
+  "JSON API full check / bare /healthz throughput (autocannon, 10 connections)",
+  `${f(a.ratio, 3)} (${f(a.check_rps, 0)} / ${f(a.healthz_rps, 0)} req/s)`,
+  "≥ 0.6",
+);
 
 for (const extra of ["./page.ts", "./sheet.ts"]) {
   try {
@@ -38,7 +46,9 @@ for (const extra of ["./page.ts", "./sheet.ts"]) {
   }
 }
 
-console.log(`Benchmarks, ${new Date().toISOString().slice(0, 10)}, ${os.cpus().length} × ${os.cpus()[0]?.model ?? "cpu"}, Node ${process.version}\n`);
+console.log(
+  `Benchmarks, ${new Date().toISOString().slice(0, 10)}, ${os.cpus().length} × ${os.cpus()[0]?.model ?? "cpu"}, Node ${process.version}\n`,
+);
 console.log("| Measure | Result | Goal |\n|---|---|---|");
 for (const [w, v, g] of rows) console.log(`| ${w} | ${v} | ${g} |`);
 process.exit(0);

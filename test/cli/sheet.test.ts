@@ -24,7 +24,11 @@ function memoryIo(stdin = "") {
     stdout: { write: (s: string | Uint8Array) => out.push(s) },
     stderr: { write: (s: string) => err.push(s) },
   };
-  return { io, stdout: () => out.map((c) => (typeof c === "string" ? c : Buffer.from(c).toString("latin1"))).join(""), stderr: () => err.join("") };
+  return {
+    io,
+    stdout: () => out.map((c) => (typeof c === "string" ? c : Buffer.from(c).toString("latin1"))).join(""),
+    stderr: () => err.join(""),
+  };
 }
 
 const RENDER = { timeout: 90_000 };

@@ -26,7 +26,7 @@ describe("a whole check", () => {
     expect(r.membrane.hoopMax_MPa).toBeCloseTo(56.25, 10);
     expect(r.membrane.axialMax_MPa).toBeCloseTo(28.125, 10);
     // von Mises 2:1: σθ·√3/2 (Dowling §7.5)
-    expect(r.membrane.vonMisesMax_MPa).toBeCloseTo(56.25 * Math.sqrt(3) / 2, 10);
+    expect(r.membrane.vonMisesMax_MPa).toBeCloseTo((56.25 * Math.sqrt(3)) / 2, 10);
     // Kirsch in the 2:1 field, Peterson Chart 4.1: Kt = 2.5; q = 1 ⇒ Kf = 2.5
     expect(r.notch.kt).toBeCloseTo(2.5, 12);
     expect(r.notch.peakMax_MPa).toBeCloseTo(140.625, 10);
@@ -54,14 +54,20 @@ describe("a whole check", () => {
   });
 
   it("a mean stress beyond the criterion's range gives no life, a failing verdict and a warning", () => {
-    const r = run(base(0.06, 1.6, { fatigue: { meanStress: "soderberg", designLife_cycles: 1000 }, material: { ...example.material, yield_MPa: 60 } }));
+    const r = run(
+      base(0.06, 1.6, { fatigue: { meanStress: "soderberg", designLife_cycles: 1000 }, material: { ...example.material, yield_MPa: 60 } }),
+    );
     expect(r.fatigue.life_cycles).toBe(0);
     expect(r.verdict).toBe("fail");
     expect(r.warnings.join(" ")).toMatch(/no life/);
   });
 
   it("thin-wall theory forced on a thick wall warns by how much it under-estimates", () => {
-    const r = run({ ...base(10, 30), shell: { form: "cylinder", radius_mm: 150, thickness_mm: 30, theory: "thin" }, cutout: { kind: "none" } });
+    const r = run({
+      ...base(10, 30),
+      shell: { form: "cylinder", radius_mm: 150, thickness_mm: 30, theory: "thin" },
+      cutout: { kind: "none" },
+    });
     expect(r.membrane.theory).toBe("thin");
     expect(r.warnings.join(" ")).toMatch(/under-estimates the inner-surface hoop stress/);
     const auto = run({ ...base(10, 30), shell: { form: "cylinder", radius_mm: 150, thickness_mm: 30 }, cutout: { kind: "none" } });
@@ -77,7 +83,9 @@ describe("a whole check", () => {
   });
 
   it("the solved thickness gives the design life back", () => {
-    const r = run(base(0.06, 1.6, { solve: { for: "thickness" }, fatigue: { ...example.fatigue, designLife_cycles: 2e6, scatterFactor: 5 } }));
+    const r = run(
+      base(0.06, 1.6, { solve: { for: "thickness" }, fatigue: { ...example.fatigue, designLife_cycles: 2e6, scatterFactor: 5 } }),
+    );
     const t = r.solution!.thickness_mm!;
     expect(r.solution!.governs).toBe("fatigue");
     const again = run(base(0.06, t, { fatigue: { ...example.fatigue, designLife_cycles: 2e6, scatterFactor: 5 } }));

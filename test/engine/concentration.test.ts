@@ -46,5 +46,4 @@ describe("stress concentration in the biaxial membrane field", () => {
     expect(c.kt).toBe(3.1);
     expect(c.steps[0].source).toContain("Peterson Chart 4.76");
   });
-
 });

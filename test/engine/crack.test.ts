@@ -108,7 +108,7 @@ describe("cycles to failure", () => {
     const r = crackGrowth({ ...base, hoopMax_MPa: 100, hoopMin_MPa: 50, walkerGamma: 0.5 });
     const exact = parisLife(0.001, r.critical_mm / 1000, 1.2e-11, 3.4, Math.SQRT2, 50);
     expect(Math.abs((r.cycles ?? 0) / exact - 1)).toBeLessThan(1e-8);
-    expect(r.critical_mm).toBeCloseTo(((0.7) ** 2 / Math.PI) * 1000, 9);
+    expect(r.critical_mm).toBeCloseTo((0.7 ** 2 / Math.PI) * 1000, 9);
     // Without γ the high stress ratio draws a warning.
     expect(crackGrowth({ ...base, hoopMin_MPa: 60 }).warnings.some((w) => w.includes("stress ratio"))).toBe(true);
   });
@@ -173,7 +173,7 @@ describe("leak before break", () => {
     // t = 30 mm, σ = 200 MPa, K_c = 40 MPa√m: critical half-length (40/200)²/π m = 12.7 mm < t (Irwin, closed form).
     const r = crackGrowth({ ...base, thickness_mm: 30, hoopMax_MPa: 200, toughness_MPaSqrtM: 40, initial_mm: 2, yield_MPa: 500 });
     expect(r.leakBeforeBreak.leakBeforeBreak).toBe(false);
-    expect(r.leakBeforeBreak.criticalHalfLength_mm).toBeCloseTo(((0.2 ** 2) / Math.PI) * 1000, 9);
+    expect(r.leakBeforeBreak.criticalHalfLength_mm).toBeCloseTo((0.2 ** 2 / Math.PI) * 1000, 9);
     expect(r.warnings.some((w) => w.includes("without leaking"))).toBe(true);
   });
 });

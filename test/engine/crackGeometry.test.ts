@@ -12,7 +12,12 @@ import {
 
 const centre = (W?: number): CrackShape => ({ geometry: "center-through", width_mm: W, cracksAtHole: 1 });
 const edge = (W?: number): CrackShape => ({ geometry: "edge-through", width_mm: W, cracksAtHole: 1 });
-const hole = (R: number, n: 1 | 2, W?: number): CrackShape => ({ geometry: "hole-through", holeRadius_mm: R, cracksAtHole: n, width_mm: W });
+const hole = (R: number, n: 1 | 2, W?: number): CrackShape => ({
+  geometry: "hole-through",
+  holeRadius_mm: R,
+  cracksAtHole: n,
+  width_mm: W,
+});
 
 describe("centre through-crack", () => {
   it("is 1 in a wide sheet and follows Feddersen's secant in a strip", () => {
@@ -113,9 +118,14 @@ describe("stress intensity grows with the crack (property)", () => {
   it("Y·√a rises with a for every geometry", () => {
     const shapes = [centre(), centre(120), edge(), edge(60), hole(3, 1), hole(3, 2), hole(3, 2, 80), hole(3, 1, 80)];
     fc.assert(
-      fc.property(fc.constantFrom(...shapes), fc.double({ min: 0.01, max: 20, noNaN: true }), fc.double({ min: 1.001, max: 1.5, noNaN: true }), (shape, a, k) => {
-        return geometryFactor(a * k, shape) * Math.sqrt(a * k) > geometryFactor(a, shape) * Math.sqrt(a);
-      }),
+      fc.property(
+        fc.constantFrom(...shapes),
+        fc.double({ min: 0.01, max: 20, noNaN: true }),
+        fc.double({ min: 1.001, max: 1.5, noNaN: true }),
+        (shape, a, k) => {
+          return geometryFactor(a * k, shape) * Math.sqrt(a * k) > geometryFactor(a, shape) * Math.sqrt(a);
+        },
+      ),
     );
   });
 });

@@ -1,11 +1,7 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
 import * as ss from "simple-statistics";
-import {
-  evaluateEvidence,
-  toleranceFactorKnownSigma,
-  toleranceFactorSample,
-} from "../../src/engine/evidence.ts";
+import { evaluateEvidence, toleranceFactorKnownSigma, toleranceFactorSample } from "../../src/engine/evidence.ts";
 import { InputError } from "../../src/engine/errors.ts";
 import { normalQuantile } from "../../src/engine/special.ts";
 

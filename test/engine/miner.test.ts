@@ -55,14 +55,22 @@ describe("minerDamage", () => {
 
   it("is additive over cycle lists and linear in the counts (property)", () => {
     fc.assert(
-      fc.property(fc.array(cycleArb, { maxLength: 20 }), fc.array(cycleArb, { maxLength: 20 }), fc.double({ min: 0.1, max: 10, noNaN: true }), (a, b, k) => {
-        const da = minerDamage(a, powerLife).damagePerPass;
-        const db = minerDamage(b, powerLife).damagePerPass;
-        const dab = minerDamage([...a, ...b], powerLife).damagePerPass;
-        const dk = minerDamage(a.map((c) => ({ ...c, count: k * c.count })), powerLife).damagePerPass;
-        const close = (x: number, y: number) => Math.abs(x - y) <= 1e-12 * Math.max(1e-300, Math.abs(x), Math.abs(y));
-        return close(dab, da + db) && close(dk, k * da);
-      }),
+      fc.property(
+        fc.array(cycleArb, { maxLength: 20 }),
+        fc.array(cycleArb, { maxLength: 20 }),
+        fc.double({ min: 0.1, max: 10, noNaN: true }),
+        (a, b, k) => {
+          const da = minerDamage(a, powerLife).damagePerPass;
+          const db = minerDamage(b, powerLife).damagePerPass;
+          const dab = minerDamage([...a, ...b], powerLife).damagePerPass;
+          const dk = minerDamage(
+            a.map((c) => ({ ...c, count: k * c.count })),
+            powerLife,
+          ).damagePerPass;
+          const close = (x: number, y: number) => Math.abs(x - y) <= 1e-12 * Math.max(1e-300, Math.abs(x), Math.abs(y));
+          return close(dab, da + db) && close(dk, k * da);
+        },
+      ),
     );
   });
 

@@ -14,7 +14,8 @@ function history(points: number): Float64Array {
 }
 
 /** Basquin-type damage, exponent 1/b = −1/0.1: heavily weighted to the large ranges, as fatigue is. */
-const damage = (cycles: { range: number; mean: number; count: number }[]) => cycles.reduce((d, c) => d + c.count * (c.range * (1 + c.mean)) ** 10, 0);
+const damage = (cycles: { range: number; mean: number; count: number }[]) =>
+  cycles.reduce((d, c) => d + c.count * (c.range * (1 + c.mean)) ** 10, 0);
 
 describe("rainflow counts gathered in a range–mean matrix", () => {
   it("short histories are counted exactly (ASTM E1049 counts, no binning)", () => {

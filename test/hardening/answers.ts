@@ -37,13 +37,19 @@ export function nonFiniteNumbers(value: unknown): string[] {
   for (let item = stack.pop(); item; item = stack.pop()) {
     const { path, v } = item;
     if (typeof v === "number" && !Number.isFinite(v)) bad.push(`${path || "(root)"} = ${v}`);
-    else if (v !== null && typeof v === "object") for (const [k, c] of Object.entries(v)) stack.push({ path: path ? `${path}.${k}` : k, v: c });
+    else if (v !== null && typeof v === "object")
+      for (const [k, c] of Object.entries(v)) stack.push({ path: path ? `${path}.${k}` : k, v: c });
   }
   return bad;
 }
 
 /** A result document as the format promises it: the verdict, and numbers that are finite or null. */
 export function expectResult(body: unknown): void {
-  expect(body).toMatchObject({ format: "hoopwise.result/1", verdict: expect.stringMatching(/^(pass|fail)$/), steps: expect.any(Array), warnings: expect.any(Array) });
+  expect(body).toMatchObject({
+    format: "hoopwise.result/1",
+    verdict: expect.stringMatching(/^(pass|fail)$/),
+    steps: expect.any(Array),
+    warnings: expect.any(Array),
+  });
   expect(nonFiniteNumbers(body)).toEqual([]);
 }

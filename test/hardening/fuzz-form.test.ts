@@ -22,21 +22,102 @@ const formOf = (doc: unknown) => postedForm(doc);
 
 const NAMES = [
   ...Object.keys(NUMBER_FIELDS),
-  ...["title", "project", "calcNumber", "notes", "material.name", "given.basis", "shell.form", "shell.radiusAt", "shell.theory", "pressure.mode", "cutout.kind"],
-  ...["material.id", "material.shown", "fatigue.meanStress", "fatigue.curve", "fatigue.localYield", "fatigue.surface", "fatigue.notch", "crack.geometry"],
-  ...["crack.cracksAtHole", "crack.on", "crack.bulging", "evidence.on", "evidence.lives", "history.text", "units.length", "units.stress", "units.pressure"],
+  ...[
+    "title",
+    "project",
+    "calcNumber",
+    "notes",
+    "material.name",
+    "given.basis",
+    "shell.form",
+    "shell.radiusAt",
+    "shell.theory",
+    "pressure.mode",
+    "cutout.kind",
+  ],
+  ...[
+    "material.id",
+    "material.shown",
+    "fatigue.meanStress",
+    "fatigue.curve",
+    "fatigue.localYield",
+    "fatigue.surface",
+    "fatigue.notch",
+    "crack.geometry",
+  ],
+  ...[
+    "crack.cracksAtHole",
+    "crack.on",
+    "crack.bulging",
+    "evidence.on",
+    "evidence.lives",
+    "history.text",
+    "units.length",
+    "units.stress",
+    "units.pressure",
+  ],
   ...["units.altitude", "units.shown", "use", "solve", "blocks.more", "blocks.0.max", "blocks.1.cycles", "blocks.40.min", "record"],
 ];
 const formValue = fc.oneof(
-  fc.constantFrom("", " ", "NaN", "Infinity", "-Infinity", "1e999", "-1e999", "1e-400", "-0", "5e-324", "1e308", "0x10", "1,5", "1 000", "١٢٣", "−2", "\u0000"),
-  fc.constantFrom("direct", "altitude", "history", "blocks", "none", "given", "elliptical-hole", "walker", "swt", "welded", "hole-through", "on", "q", "peterson"),
-  fc.constantFrom("in", "psi", "ksi", "ft", "bar", "kPa", "mm MPa kPa m", "in ksi psi ft", "thickness", "pressure", "thickness:1.2", "pressure:1e999", "thickness:-1"),
+  fc.constantFrom(
+    "",
+    " ",
+    "NaN",
+    "Infinity",
+    "-Infinity",
+    "1e999",
+    "-1e999",
+    "1e-400",
+    "-0",
+    "5e-324",
+    "1e308",
+    "0x10",
+    "1,5",
+    "1 000",
+    "١٢٣",
+    "−2",
+    "\u0000",
+  ),
+  fc.constantFrom(
+    "direct",
+    "altitude",
+    "history",
+    "blocks",
+    "none",
+    "given",
+    "elliptical-hole",
+    "walker",
+    "swt",
+    "welded",
+    "hole-through",
+    "on",
+    "q",
+    "peterson",
+  ),
+  fc.constantFrom(
+    "in",
+    "psi",
+    "ksi",
+    "ft",
+    "bar",
+    "kPa",
+    "mm MPa kPa m",
+    "in ksi psi ft",
+    "thickness",
+    "pressure",
+    "thickness:1.2",
+    "pressure:1e999",
+    "thickness:-1",
+  ),
   fc.constantFrom("0, 0.8, 0.2, 0.9, 0", "time,p\n0,0\n1,0.5\n2,0", "41000 52000 x", "1e12, 1e12"),
   fc.double().map(String),
   fc.string({ maxLength: 30 }),
   fc.integer({ min: 1_000, max: 100_000 }).map((n) => "9".repeat(n)),
 );
-const formEdit = fc.record({ name: fc.oneof({ weight: 5, arbitrary: fc.constantFrom(...NAMES) }, { weight: 1, arbitrary: fc.string({ maxLength: 20 }) }), value: fc.option(formValue, { nil: undefined }) });
+const formEdit = fc.record({
+  name: fc.oneof({ weight: 5, arbitrary: fc.constantFrom(...NAMES) }, { weight: 1, arbitrary: fc.string({ maxLength: 20 }) }),
+  value: fc.option(formValue, { nil: undefined }),
+});
 const form = fc.record({ base: fc.nat({ max: BASES.length - 1 }), edits: fc.array(formEdit, { maxLength: 6 }) }).map(({ base, edits }) => {
   const values = formOf(BASES[base]);
   for (const e of edits) {
@@ -79,50 +160,109 @@ function requestOf(s: Sent): Request {
     case "link":
       return new Request(url(`${s.path}?c=${linkOf(s.json)}`), { headers: s.path === "/plots" ? { "hx-request": "true" } : {} });
     case "records":
-      return new Request(url(s.path), { method: "POST", headers: { "content-type": URLENCODED }, body: new URLSearchParams(s.values).toString() });
+      return new Request(url(s.path), {
+        method: "POST",
+        headers: { "content-type": URLENCODED },
+        body: new URLSearchParams(s.values).toString(),
+      });
   }
 }
 
 /** A records form field: a fair value most of the time, hostile text otherwise. */
-const recordField = (...fair: string[]) => fc.option(fc.oneof({ weight: 3, arbitrary: fc.constantFrom(...fair) }, { weight: 1, arbitrary: formValue }), { nil: undefined });
-const defined = (r: Record<string, string | undefined>) => Object.fromEntries(Object.entries(r).filter((e): e is [string, string] => e[1] !== undefined));
+const recordField = (...fair: string[]) =>
+  fc.option(fc.oneof({ weight: 3, arbitrary: fc.constantFrom(...fair) }, { weight: 1, arbitrary: formValue }), { nil: undefined });
+const defined = (r: Record<string, string | undefined>) =>
+  Object.fromEntries(Object.entries(r).filter((e): e is [string, string] => e[1] !== undefined));
 const PASSPHRASE = "quiet copper heron at dusk";
 const recordsPost: fc.Arbitrary<Sent> = fc.oneof(
-  fc.record({ form, savedBy: recordField("Odile Farthing", ""), record: recordField(saved.id, "no-such-check", ""), as: recordField("new") }).map(({ form, ...more }) => ({
-    kind: "records" as const,
-    path: "/records/save",
-    values: { ...form, ...defined(more) },
-  })),
-  fc.record({ revision: recordField("1", "2", "0", "x"), role: recordField("prepared", "checked", "approved", "boss"), name: recordField("Odile Farthing", "Pim Aldous"), passphrase: recordField(PASSPHRASE, "short") }).map((v) => ({
-    kind: "records" as const,
-    path: `/records/${saved.id}/sign`,
-    values: defined(v),
-  })),
-  fc.record({ name: recordField("Odile Farthing", "Pim Aldous", " "), passphrase: recordField(PASSPHRASE, "short"), again: recordField(PASSPHRASE, "other words entirely") }).map((v) => ({
-    kind: "records" as const,
-    path: "/records/signers",
-    values: defined(v),
-  })),
-  fc.record({ document: fc.oneof(plan.map((p) => bodyOf(documentOf(p))), hostileValue.map((v) => String(v))), savedBy: recordField("Odile Farthing") }).map((v) => ({
-    kind: "records" as const,
-    path: `/records/${saved.id}/revisions`,
-    values: defined(v),
-  })),
+  fc
+    .record({
+      form,
+      savedBy: recordField("Odile Farthing", ""),
+      record: recordField(saved.id, "no-such-check", ""),
+      as: recordField("new"),
+    })
+    .map(({ form, ...more }) => ({
+      kind: "records" as const,
+      path: "/records/save",
+      values: { ...form, ...defined(more) },
+    })),
+  fc
+    .record({
+      revision: recordField("1", "2", "0", "x"),
+      role: recordField("prepared", "checked", "approved", "boss"),
+      name: recordField("Odile Farthing", "Pim Aldous"),
+      passphrase: recordField(PASSPHRASE, "short"),
+    })
+    .map((v) => ({
+      kind: "records" as const,
+      path: `/records/${saved.id}/sign`,
+      values: defined(v),
+    })),
+  fc
+    .record({
+      name: recordField("Odile Farthing", "Pim Aldous", " "),
+      passphrase: recordField(PASSPHRASE, "short"),
+      again: recordField(PASSPHRASE, "other words entirely"),
+    })
+    .map((v) => ({
+      kind: "records" as const,
+      path: "/records/signers",
+      values: defined(v),
+    })),
+  fc
+    .record({
+      document: fc.oneof(
+        plan.map((p) => bodyOf(documentOf(p))),
+        hostileValue.map((v) => String(v)),
+      ),
+      savedBy: recordField("Odile Farthing"),
+    })
+    .map((v) => ({
+      kind: "records" as const,
+      path: `/records/${saved.id}/revisions`,
+      values: defined(v),
+    })),
 );
 
 const URLENCODED = "application/x-www-form-urlencoded";
 const sent: fc.Arbitrary<Sent> = fc.oneof(
-  fc.record({ kind: fc.constant("urlencoded" as const), path: fc.constantFrom("/", "/recalc", "/export"), values: form, type: fc.constant(URLENCODED), hx: fc.boolean() }),
+  fc.record({
+    kind: fc.constant("urlencoded" as const),
+    path: fc.constantFrom("/", "/recalc", "/export"),
+    values: form,
+    type: fc.constant(URLENCODED),
+    hx: fc.boolean(),
+  }),
   fc.record({ kind: fc.constant("multipart" as const), path: fc.constantFrom("/", "/recalc"), values: form }),
-  fc.record({ kind: fc.constant("urlencoded" as const), path: fc.constantFrom("/", "/recalc"), values: form, type: fc.constantFrom("text/plain", "application/json", undefined) }),
-  fc.record({ kind: fc.constant("file" as const), text: fc.oneof(plan.map((p) => bodyOf(documentOf(p))), fc.constant("{ not json")) }),
-  fc.record({ kind: fc.constant("link" as const), path: fc.constantFrom("/", "/plots", "/export", "/recalc"), json: plan.map((p) => bodyOf(documentOf(p))) }),
+  fc.record({
+    kind: fc.constant("urlencoded" as const),
+    path: fc.constantFrom("/", "/recalc"),
+    values: form,
+    type: fc.constantFrom("text/plain", "application/json", undefined),
+  }),
+  fc.record({
+    kind: fc.constant("file" as const),
+    text: fc.oneof(
+      plan.map((p) => bodyOf(documentOf(p))),
+      fc.constant("{ not json"),
+    ),
+  }),
+  fc.record({
+    kind: fc.constant("link" as const),
+    path: fc.constantFrom("/", "/plots", "/export", "/recalc"),
+    json: plan.map((p) => bodyOf(documentOf(p))),
+  }),
   recordsPost,
 );
 
 /** A page that refuses says why: a message beside a field, in the list of general problems, or as a notice. */
 function saysWhy(html: string): boolean {
-  return /<p class="field-error"[^>]*>[^<\s][^<]*<\/p>/.test(html) || /<p class="notice" role="alert">/.test(html) || /class="stale-note"[\s\S]*?<li>/.test(html);
+  return (
+    /<p class="field-error"[^>]*>[^<\s][^<]*<\/p>/.test(html) ||
+    /<p class="notice" role="alert">/.test(html) ||
+    /class="stale-note"[\s\S]*?<li>/.test(html)
+  );
 }
 
 describe("the page's form and link routes under 1 000 generated requests", () => {
@@ -149,7 +289,8 @@ describe("the page's form and link routes under 1 000 generated requests", () =>
         if (type.startsWith("application/json")) {
           // The download of a valid check, or the errors document of GET /export.
           const json = JSON.parse(text);
-          if (res.status === 200) expect(res.headers.get("content-disposition")).toMatch(/^attachment; filename="hoopwise-[a-z0-9-]+\.json"$/);
+          if (res.status === 200)
+            expect(res.headers.get("content-disposition")).toMatch(/^attachment; filename="hoopwise-[a-z0-9-]+\.json"$/);
           else expectErrorsDoc(json);
           return;
         }

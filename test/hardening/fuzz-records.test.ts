@@ -30,22 +30,49 @@ const seeded = store.createCheck({ input: DEMOS[0].document, calcNumber: "FUZZ-S
 const exported = store.exportCheck(seeded.id);
 
 /** A text field as a client might send it: a fair value most of the time, anything at all otherwise. */
-const field = (fair: fc.Arbitrary<unknown>) => fc.option(fc.oneof({ weight: 3, arbitrary: fair }, { weight: 2, arbitrary: hostileValue }), { nil: undefined });
+const field = (fair: fc.Arbitrary<unknown>) =>
+  fc.option(fc.oneof({ weight: 3, arbitrary: fair }, { weight: 2, arbitrary: hostileValue }), { nil: undefined });
 const person = fc.constantFrom(SIGNER.name, "Ansel Duroq", "", " ", "ilse  MARROW-quint");
 const calcNumber = fc.oneof(fc.stringMatching(/^[A-Z]{2}-[0-9]{1,4}$/), fc.constantFrom("", "x".repeat(41), "a\nb", "L30-FUS-017"));
 
 const request = fc.oneof(
-  fc.record({ path: fc.constant("/api/v1/checks"), body: fc.record({ input: plan.map(documentOf), title: field(fc.string()), calcNumber: field(calcNumber), savedBy: field(person) }, { requiredKeys: [] }) }),
-  fc.record({ path: fc.constantFrom(`/api/v1/checks/${seeded.id}/revisions`, "/api/v1/checks/no-such-id/revisions"), body: fc.record({ input: plan.map(documentOf), savedBy: field(person) }, { requiredKeys: [] }) }),
-  fc.record({ path: fc.constant("/api/v1/checks/import"), body: fc.array(edit, { minLength: 1, maxLength: 3 }).map((e) => applyEdits(exported, e)) }),
-  fc.record({ path: fc.constant("/api/v1/signers"), body: fc.record({ name: field(person), passphrase: field(fc.string({ minLength: 8, maxLength: 30 })) }, { requiredKeys: [] }) }),
+  fc.record({
+    path: fc.constant("/api/v1/checks"),
+    body: fc.record(
+      { input: plan.map(documentOf), title: field(fc.string()), calcNumber: field(calcNumber), savedBy: field(person) },
+      { requiredKeys: [] },
+    ),
+  }),
+  fc.record({
+    path: fc.constantFrom(`/api/v1/checks/${seeded.id}/revisions`, "/api/v1/checks/no-such-id/revisions"),
+    body: fc.record({ input: plan.map(documentOf), savedBy: field(person) }, { requiredKeys: [] }),
+  }),
+  fc.record({
+    path: fc.constant("/api/v1/checks/import"),
+    body: fc.array(edit, { minLength: 1, maxLength: 3 }).map((e) => applyEdits(exported, e)),
+  }),
+  fc.record({
+    path: fc.constant("/api/v1/signers"),
+    body: fc.record({ name: field(person), passphrase: field(fc.string({ minLength: 8, maxLength: 30 })) }, { requiredKeys: [] }),
+  }),
   fc.record({
     path: fc.constant(`/api/v1/checks/${seeded.id}/signoffs`),
-    body: fc.record({ revision: field(fc.integer({ min: 0, max: 3 })), role: field(fc.constantFrom("prepared", "checked", "approved")), name: field(person), passphrase: field(fc.constant(SIGNER.passphrase)) }, { requiredKeys: [] }),
+    body: fc.record(
+      {
+        revision: field(fc.integer({ min: 0, max: 3 })),
+        role: field(fc.constantFrom("prepared", "checked", "approved")),
+        name: field(person),
+        passphrase: field(fc.constant(SIGNER.passphrase)),
+      },
+      { requiredKeys: [] },
+    ),
   }),
   fc.record({ path: fc.constantFrom("/api/v1/checks", "/api/v1/signers", "/api/v1/checks/import"), body: hostileValue }),
 );
-const contentType = fc.oneof({ weight: 9, arbitrary: fc.constant("application/json") }, { weight: 1, arbitrary: fc.constantFrom("text/plain", "application/x-www-form-urlencoded", "") });
+const contentType = fc.oneof(
+  { weight: 9, arbitrary: fc.constant("application/json") },
+  { weight: 1, arbitrary: fc.constantFrom("text/plain", "application/x-www-form-urlencoded", "") },
+);
 
 const ALLOWED = [200, 201, 400, 403, 404, 409, 415, 422];
 
@@ -57,7 +84,10 @@ describe("records routes under 1 000 generated requests", () => {
     const statuses = new Set<number>();
     await fc.assert(
       fc.asyncProperty(request, contentType, async ({ path, body }, type) => {
-        const res = await bounded(`POST ${path}`, app.request(path, { method: "POST", headers: { "content-type": type }, body: bodyOf(body) }));
+        const res = await bounded(
+          `POST ${path}`,
+          app.request(path, { method: "POST", headers: { "content-type": type }, body: bodyOf(body) }),
+        );
         expect(ALLOWED).toContain(res.status);
         statuses.add(res.status);
         const json = await res.json();

@@ -95,8 +95,26 @@ describe("POST /api/v1/check: what is not a JSON document", () => {
 });
 
 describe("every route that reads a body", () => {
-  const JSON_ROUTES = ["/api/v1/check", "/api/v1/sheet", "/api/v1/checks", "/api/v1/checks/import", "/api/v1/checks/x/revisions", "/api/v1/checks/x/signoffs", "/api/v1/signers"];
-  const FORM_ROUTES = ["/", "/recalc", "/export", "/sheet", "/import", "/records/save", "/records/x/revisions", "/records/x/sign", "/records/signers"];
+  const JSON_ROUTES = [
+    "/api/v1/check",
+    "/api/v1/sheet",
+    "/api/v1/checks",
+    "/api/v1/checks/import",
+    "/api/v1/checks/x/revisions",
+    "/api/v1/checks/x/signoffs",
+    "/api/v1/signers",
+  ];
+  const FORM_ROUTES = [
+    "/",
+    "/recalc",
+    "/export",
+    "/sheet",
+    "/import",
+    "/records/save",
+    "/records/x/revisions",
+    "/records/x/sign",
+    "/records/signers",
+  ];
 
   it("refuses a body over its limit with 413 before reading it, and JSON routes say the limit", { timeout: 60_000 }, async () => {
     const whole = wholeApp();
@@ -104,7 +122,10 @@ describe("every route that reads a body", () => {
       const big = "x".repeat(MAX_JSON_BYTES + 1);
       for (const path of [...JSON_ROUTES, ...FORM_ROUTES]) {
         const json = JSON_ROUTES.includes(path);
-        const headers = { "content-type": json ? "application/json" : "application/x-www-form-urlencoded", "content-length": String(big.length) };
+        const headers = {
+          "content-type": json ? "application/json" : "application/x-www-form-urlencoded",
+          "content-length": String(big.length),
+        };
         const res = await bounded(path, whole.app.request(path, { method: "POST", headers, body: big }));
         expect(res.status, path).toBe(413);
         const text = await res.text();

@@ -53,7 +53,12 @@ function routeFamilies(id: string): [string, string, RequestInit, number][] {
     ["check API, invalid", "/api/v1/check", { method: "POST", headers: json, body: "{}" }, 422],
     ["check API, not JSON", "/api/v1/check", { method: "POST", headers: json, body: "{" }, 400],
     ["check API, wrong type", "/api/v1/check", { method: "POST", headers: { "content-type": "text/plain" }, body: cabin }, 415],
-    ["check API, too large", "/api/v1/check", { method: "POST", headers: { ...json, "content-length": String(MAX_JSON_BYTES + 1) }, body: "x".repeat(MAX_JSON_BYTES + 1) }, 413],
+    [
+      "check API, too large",
+      "/api/v1/check",
+      { method: "POST", headers: { ...json, "content-length": String(MAX_JSON_BYTES + 1) }, body: "x".repeat(MAX_JSON_BYTES + 1) },
+      413,
+    ],
     ["records list", "/api/v1/checks", {}, 200],
     ["record", `/api/v1/checks/${id}`, {}, 200],
     ["record missing", "/api/v1/checks/none", {}, 404],
@@ -103,7 +108,10 @@ describe("in-process, every route family", () => {
     const last = await createApp({ mounts: [throwing] }).request("/boom");
     expect(last.status).toBe(500);
     expectSecurityHeaders(last, "app 500");
-    expect(log.mock.calls.map((c) => String(c[0]))).toEqual([expect.stringContaining("database connection is not open"), expect.stringContaining("an invented fault")]);
+    expect(log.mock.calls.map((c) => String(c[0]))).toEqual([
+      expect.stringContaining("database connection is not open"),
+      expect.stringContaining("an invented fault"),
+    ]);
     log.mockRestore();
   });
 });

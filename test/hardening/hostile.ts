@@ -8,7 +8,9 @@ import fc from "fast-check";
 import { DEMOS } from "../../src/demo/index.ts";
 import { MEAN_STRESS_CRITERIA } from "../../src/schema/index.ts";
 
-export const FORMAT_EXAMPLE: Record<string, unknown> = JSON.parse(readFileSync(new URL("../fixtures/format-example.json", import.meta.url), "utf8"));
+export const FORMAT_EXAMPLE: Record<string, unknown> = JSON.parse(
+  readFileSync(new URL("../fixtures/format-example.json", import.meta.url), "utf8"),
+);
 export const BASES: readonly unknown[] = [...DEMOS.map((d) => d.document), FORMAT_EXAMPLE];
 
 /**
@@ -32,28 +34,89 @@ export const hostileValue: fc.Arbitrary<unknown> = fc.oneof(
   fc.double({ noNaN: true, noDefaultInfinity: true }),
   fc.integer(),
   fc.constantFrom(...RAW_TOKENS).map((t) => `${RAW_MARK}${t}`),
-  fc.constantFrom("NaN", "Infinity", "-Infinity", "1e999", "", " ", "0x10", "1,5", "12 mm", "true", "null", "\u0000", "\ud800", "١٢٣", "−1"),
+  fc.constantFrom(
+    "NaN",
+    "Infinity",
+    "-Infinity",
+    "1e999",
+    "",
+    " ",
+    "0x10",
+    "1,5",
+    "12 mm",
+    "true",
+    "null",
+    "\u0000",
+    "\ud800",
+    "١٢٣",
+    "−1",
+  ),
   fc.string({ maxLength: 40 }),
   fc.string({ unit: "grapheme", maxLength: 20 }),
   fc.integer({ min: 1_000, max: 200_000 }).map((n) => "x".repeat(n)),
   fc.constantFrom(null, true, false, [], {}, [1, 2, 3], [null], { max_MPa: 1 }),
-  fc.tuple(fc.constantFrom("array", "object"), fc.integer({ min: 10, max: 50_000 })).map(([kind, depth]) => `${RAW_MARK}deep-${kind}-${depth}`),
+  fc
+    .tuple(fc.constantFrom("array", "object"), fc.integer({ min: 10, max: 50_000 }))
+    .map(([kind, depth]) => `${RAW_MARK}deep-${kind}-${depth}`),
   fc.array(fc.double({ noNaN: true, noDefaultInfinity: true }), { maxLength: 50 }),
   fc.jsonValue({ maxDepth: 3 }),
 );
 
 /** Magnitudes at and past the ends of what a double holds, and the edges of the schema's ranges (accepted ones included, so the engine runs there). */
 const extremeNumber = fc.constantFrom(
-  5e-324, -5e-324, 1e-300, 1e-30, 1e-20, 1e-12, 1e-6, 1e-3, 0.1, 0.5, 0.9999, 0.999999, 1, 1.000001, 1e4, 1e5, 1e7, 1e12, 1e15, 1e300, 1e308, -1e308, -1e4, -1, -0.01, -0.99,
+  5e-324,
+  -5e-324,
+  1e-300,
+  1e-30,
+  1e-20,
+  1e-12,
+  1e-6,
+  1e-3,
+  0.1,
+  0.5,
+  0.9999,
+  0.999999,
+  1,
+  1.000001,
+  1e4,
+  1e5,
+  1e7,
+  1e12,
+  1e15,
+  1e300,
+  1e308,
+  -1e308,
+  -1e4,
+  -1,
+  -0.01,
+  -0.99,
 );
 
 /** Names from the schema, so a mutation often lands on a valid choice and the engine runs on it. */
 const ENUM_WORDS = [
   ...MEAN_STRESS_CRITERIA,
-  "cylinder", "sphere", "inner", "mean", "outer", "auto", "thin", "thick",
-  "none", "circular-hole", "elliptical-hole", "given",
-  "center-through", "edge-through", "hole-through", "basquin", "welded", "thickness", "pressure",
-  "al-2024-t3", "steel-p265gh", "no-such-material",
+  "cylinder",
+  "sphere",
+  "inner",
+  "mean",
+  "outer",
+  "auto",
+  "thin",
+  "thick",
+  "none",
+  "circular-hole",
+  "elliptical-hole",
+  "given",
+  "center-through",
+  "edge-through",
+  "hole-through",
+  "basquin",
+  "welded",
+  "thickness",
+  "pressure",
+  "al-2024-t3",
+  "steel-p265gh",
+  "no-such-material",
 ];
 
 type Path = (string | number)[];
@@ -81,7 +144,15 @@ export const edit: fc.Arbitrary<Edit> = fc.oneof(
   { weight: 3, arbitrary: fc.record({ op: fc.constant("extreme" as const), at, value: extremeNumber }) },
   { weight: 2, arbitrary: fc.record({ op: fc.constant("word" as const), at, word: fc.constantFrom(...ENUM_WORDS) }) },
   { weight: 2, arbitrary: fc.record({ op: fc.constant("delete" as const), at }) },
-  { weight: 1, arbitrary: fc.record({ op: fc.constant("unknownKey" as const), at, key: fc.oneof(fc.string({ maxLength: 12 }), fc.constantFrom("__proto__", "constructor", "toString")), value: hostileValue }) },
+  {
+    weight: 1,
+    arbitrary: fc.record({
+      op: fc.constant("unknownKey" as const),
+      at,
+      key: fc.oneof(fc.string({ maxLength: 12 }), fc.constantFrom("__proto__", "constructor", "toString")),
+      value: hostileValue,
+    }),
+  },
   { weight: 1, arbitrary: fc.record({ op: fc.constant("wrapInArray" as const), at }) },
 );
 

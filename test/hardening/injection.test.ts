@@ -45,14 +45,18 @@ const hostile = checkWith((f) => HOSTILE_TEXT[f]);
 const benign = checkWith((f) => `plain words for the ${f}`);
 
 /** How the page's templates escape text, in body and attribute alike. */
-const escaped = (s: string) => s.replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/"/g, "&quot;").replace(/'/g, "&#39;");
+const escaped = (s: string) =>
+  s.replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/"/g, "&quot;").replace(/'/g, "&#39;");
 const linkOf = (doc: unknown) => deflateRawSync(Buffer.from(JSON.stringify(doc), "utf8")).toString("base64url");
 
 /** Each tag's name and attributes, read as a browser reads them (escaped text cannot open a tag or end a value). */
 function tags(html: string): { name: string; attrs: [string, string][] }[] {
   const out: { name: string; attrs: [string, string][] }[] = [];
   for (const m of html.matchAll(/<([a-zA-Z][\w:-]*)((?:\s+[^\s=>/]+(?:\s*=\s*(?:"[^"]*"|'[^']*'|[^\s>]+))?)*)\s*\/?>/g)) {
-    const attrs: [string, string][] = [...m[2].matchAll(/\s+([^\s=>/]+)(?:\s*=\s*("[^"]*"|'[^']*'|[^\s>]+))?/g)].map((a) => [a[1].toLowerCase(), (a[2] ?? "").replace(/^["']|["']$/g, "")]);
+    const attrs: [string, string][] = [...m[2].matchAll(/\s+([^\s=>/]+)(?:\s*=\s*("[^"]*"|'[^']*'|[^\s>]+))?/g)].map((a) => [
+      a[1].toLowerCase(),
+      (a[2] ?? "").replace(/^["']|["']$/g, ""),
+    ]);
     out.push({ name: m[1].toLowerCase(), attrs });
   }
   return out;
@@ -83,7 +87,13 @@ afterAll(async () => {
 /** The page's answers for a document: opened from a link, posted as a form, its htmx fragment and its plots. */
 async function pagesFor(doc: object): Promise<Record<string, string>> {
   const units = unitsFrom(undefined);
-  const form = new URLSearchParams({ ...writeForm(doc, units), "units.length": units.length, "units.stress": units.stress, "units.pressure": units.pressure, "units.altitude": units.altitude });
+  const form = new URLSearchParams({
+    ...writeForm(doc, units),
+    "units.length": units.length,
+    "units.stress": units.stress,
+    "units.pressure": units.pressure,
+    "units.altitude": units.altitude,
+  });
   const posted = { "content-type": "application/x-www-form-urlencoded" };
   const answers = {
     link: await whole.app.request(`/?c=${linkOf(doc)}`),
@@ -116,13 +126,21 @@ describe("on the page", () => {
 
 describe("in the JSON", () => {
   it("returns the text as plain strings, as JSON that no browser would sniff as a page", async () => {
-    const res = await whole.app.request("/api/v1/check", { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify(hostile) });
+    const res = await whole.app.request("/api/v1/check", {
+      method: "POST",
+      headers: { "content-type": "application/json" },
+      body: JSON.stringify(hostile),
+    });
     expect(res.status).toBe(200);
     expect(res.headers.get("content-type")).toMatch(/^application\/json/);
     expect(res.headers.get("x-content-type-options")).toBe("nosniff");
     expect((await res.json()).title).toBe(HOSTILE_TEXT.title);
 
-    const saved = await whole.app.request("/api/v1/checks", { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify({ input: hostile, title: HOSTILE_TEXT.project }) });
+    const saved = await whole.app.request("/api/v1/checks", {
+      method: "POST",
+      headers: { "content-type": "application/json" },
+      body: JSON.stringify({ input: hostile, title: HOSTILE_TEXT.project }),
+    });
     expect(saved.status).toBe(201);
     const { id } = await saved.json();
     const record = await (await whole.app.request(`/api/v1/checks/${id}`)).json();

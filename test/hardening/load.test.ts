@@ -42,7 +42,8 @@ afterAll(async () => {
   await server?.dispose();
 });
 
-const post = (what: string, path: string, body: string) => bounded(what, send(`${server.base}${path}`, { method: "POST", headers: JSON_TYPE, body }));
+const post = (what: string, path: string, body: string) =>
+  bounded(what, send(`${server.base}${path}`, { method: "POST", headers: JSON_TYPE, body }));
 const check = (i: number) => post(`check ${i}`, "/api/v1/check", DOCS[i % DOCS.length]);
 const sheet = (i: number) => post(`sheet ${i}`, "/api/v1/sheet", DOCS[i % DOCS.length]);
 
@@ -60,23 +61,32 @@ function sheetOutcome(res: Answer): "pdf" | "busy" {
 }
 
 describe("the server under load and faults", () => {
-  it("answers 200 checks and 20 sheets at once: every check, and every sheet or a clean 503, within bounded memory and processes", { timeout: 180_000 }, async () => {
+  it("answers 200 checks and 20 sheets at once: every check, and every sheet or a clean 503, within bounded memory and processes", {
+    timeout: 180_000,
+  }, async () => {
     expect(await sheetOutcome(await sheet(0))).toBe("pdf"); // Chromium started before the burst
-    const [checks, sheets] = await Promise.all([Promise.all(Array.from({ length: 200 }, (_, i) => check(i))), Promise.all(Array.from({ length: 20 }, (_, i) => sheet(i)))]);
+    const [checks, sheets] = await Promise.all([
+      Promise.all(Array.from({ length: 200 }, (_, i) => check(i))),
+      Promise.all(Array.from({ length: 20 }, (_, i) => sheet(i))),
+    ]);
     for (const res of checks) {
       expect(res.status).toBe(200);
       expectResult(jsonOf(res));
     }
     const outcomes = sheets.map(sheetOutcome);
     const busy = outcomes.filter((o) => o === "busy").length;
-    console.log(`load: 200 checks, 20 sheets (${20 - busy} PDFs, ${busy} × 503); peak RSS ${(peak.rss / 2 ** 20).toFixed(0)} MiB, peak Chromium processes ${peak.chromium} (${peak.samples} samples)`);
+    console.log(
+      `load: 200 checks, 20 sheets (${20 - busy} PDFs, ${busy} × 503); peak RSS ${(peak.rss / 2 ** 20).toFixed(0)} MiB, peak Chromium processes ${peak.chromium} (${peak.samples} samples)`,
+    );
     expect(outcomes.filter((o) => o === "pdf").length).toBeGreaterThan(0);
     expect(peak.samples).toBeGreaterThan(0);
     expect(peak.rss).toBeLessThan(RSS_BOUND);
     expect(peak.chromium).toBeLessThanOrEqual(CHROMIUM_BOUND);
   });
 
-  it("recovers when Chromium is killed mid-render: those renders get a clean 503, the next sheet prints", { timeout: 120_000 }, async () => {
+  it("recovers when Chromium is killed mid-render: those renders get a clean 503, the next sheet prints", {
+    timeout: 120_000,
+  }, async () => {
     const [browser] = chromiumBrowsers(server.pid);
     expect(browser).toBeGreaterThan(0);
     let settled = 0;

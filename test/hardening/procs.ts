@@ -34,7 +34,13 @@ function table(): Proc[] {
     if (!stat) continue;
     // The command name sits in parentheses and may itself hold spaces or parentheses.
     const f = stat.slice(stat.lastIndexOf(")") + 2).split(" ");
-    out.push({ pid: Number(name), ppid: Number(f[1]), pgid: Number(f[2]), zombie: f[0] === "Z", cmdline: (read(`/proc/${name}/cmdline`) ?? "").replace(/\0/g, " ") });
+    out.push({
+      pid: Number(name),
+      ppid: Number(f[1]),
+      pgid: Number(f[2]),
+      zombie: f[0] === "Z",
+      cmdline: (read(`/proc/${name}/cmdline`) ?? "").replace(/\0/g, " "),
+    });
   }
   return out;
 }

@@ -34,7 +34,9 @@ export async function startServer(extraEnv: Record<string, string> = {}): Promis
   let output = "";
   child.stdout.setEncoding("utf8").on("data", (s: string) => (output += s));
   child.stderr.setEncoding("utf8").on("data", (s: string) => (output += s));
-  const exited = new Promise<{ code: number | null; signal: NodeJS.Signals | null }>((resolve) => child.on("exit", (code, signal) => resolve({ code, signal })));
+  const exited = new Promise<{ code: number | null; signal: NodeJS.Signals | null }>((resolve) =>
+    child.on("exit", (code, signal) => resolve({ code, signal })),
+  );
   const dispose = async () => {
     if (child.exitCode === null && child.signalCode === null) {
       child.kill("SIGKILL");
@@ -43,7 +45,10 @@ export async function startServer(extraEnv: Record<string, string> = {}): Promis
     rmSync(dir, { recursive: true, force: true });
   };
   const base = await new Promise<string>((resolve, reject) => {
-    const timer = setTimeout(() => reject(new Error(`the server did not say where it serves within ${START_LIMIT_MS / 1000} s:\n${output}`)), START_LIMIT_MS);
+    const timer = setTimeout(
+      () => reject(new Error(`the server did not say where it serves within ${START_LIMIT_MS / 1000} s:\n${output}`)),
+      START_LIMIT_MS,
+    );
     const look = () => {
       const m = /serving on (http:\/\/[^\s/]+)\//.exec(output);
       if (m) {

@@ -74,7 +74,14 @@ describe("crack growth", () => {
       { curve: [], critical_mm: NaN, inspectionInterval_cycles: 0, initial_mm: NaN },
       { ...base, inspectionInterval_cycles: Infinity, critical_mm: Infinity },
       { ...base, inspectionInterval_cycles: null },
-      { ...base, curve: [{ a_mm: NaN, n_cycles: 5 }, { a_mm: 2, n_cycles: Infinity }], inspectionInterval_cycles: -5 },
+      {
+        ...base,
+        curve: [
+          { a_mm: NaN, n_cycles: 5 },
+          { a_mm: 2, n_cycles: Infinity },
+        ],
+        inspectionInterval_cycles: -5,
+      },
       { curve: null, critical_mm: null, inspectionInterval_cycles: null, initial_mm: null } as unknown as CrackGrowthData,
     ];
     for (const d of bad) {

@@ -21,7 +21,13 @@ describe("escaping", () => {
   it("any heading and label text yields well-formed markup that reads back as the text, less control characters", () => {
     fc.assert(
       fc.property(fc.string({ unit: "binary", maxLength: 60 }), (s) => {
-        const svg = makeFrame({ name: "t", heading: null, label: s, x: { kind: "linear", domain: [0, 1], title: "x (mm)" }, y: { kind: "linear", domain: [0, 1], title: "y (MPa)" } }).render([]);
+        const svg = makeFrame({
+          name: "t",
+          heading: null,
+          label: s,
+          x: { kind: "linear", domain: [0, 1], title: "x (mm)" },
+          y: { kind: "linear", domain: [0, 1], title: "y (MPa)" },
+        }).render([]);
         assertWellFormed(svg);
         // eslint-disable-next-line no-control-regex
         const printable = s.replace(/[\u0000-\u0008\u000B\u000C\u000E-\u001F\uFFFE\uFFFF]/g, "");
@@ -94,18 +100,48 @@ describe("clipping", () => {
   const rect = { left: 0, top: 0, right: 100, bottom: 100 };
 
   it("cuts a line where it leaves the plot area", () => {
-    const pieces = clipPolyline([[50, 50], [150, 50]], rect);
-    expect(pieces).toEqual([[[50, 50], [100, 50]]]);
+    const pieces = clipPolyline(
+      [
+        [50, 50],
+        [150, 50],
+      ],
+      rect,
+    );
+    expect(pieces).toEqual([
+      [
+        [50, 50],
+        [100, 50],
+      ],
+    ]);
   });
 
   it("splits at a point that is not finite and where the line leaves and re-enters", () => {
-    const pts: Point[] = [[10, 10], [20, 20], [NaN, 5], [30, 30], [40, 40], [40, 200], [60, 60], [70, 70]];
+    const pts: Point[] = [
+      [10, 10],
+      [20, 20],
+      [NaN, 5],
+      [30, 30],
+      [40, 40],
+      [40, 200],
+      [60, 60],
+      [70, 70],
+    ];
     const pieces = clipPolyline(pts, rect);
     expect(pieces.length).toBe(3);
-    expect(pieces[0]).toEqual([[10, 10], [20, 20]]);
-    expect(pieces[1]).toEqual([[30, 30], [40, 40], [40, 100]]);
+    expect(pieces[0]).toEqual([
+      [10, 10],
+      [20, 20],
+    ]);
+    expect(pieces[1]).toEqual([
+      [30, 30],
+      [40, 40],
+      [40, 100],
+    ]);
     expect(pieces[2][0][1]).toBeCloseTo(100, 9);
-    expect(pieces[2].slice(1)).toEqual([[60, 60], [70, 70]]);
+    expect(pieces[2].slice(1)).toEqual([
+      [60, 60],
+      [70, 70],
+    ]);
     for (const piece of pieces) for (const [x, y] of piece) expect(x >= 0 && x <= 100 && y >= 0 && y <= 100).toBe(true);
   });
 });
@@ -168,14 +204,26 @@ describe("frame", () => {
   });
 
   it("falls back to a drawable domain when given nonsense", () => {
-    const bad = makeFrame({ name: "bad", heading: null, label: "bad", x: { kind: "log", domain: [NaN, -1], title: "x" }, y: { kind: "linear", domain: [3, 3], title: "y" } }).render([]);
+    const bad = makeFrame({
+      name: "bad",
+      heading: null,
+      label: "bad",
+      x: { kind: "log", domain: [NaN, -1], title: "x" },
+      y: { kind: "linear", domain: [3, 3], title: "y" },
+    }).render([]);
     assertWellFormed(bad);
     expect(bad).not.toMatch(/NaN|Infinity/);
   });
 
   it("shortens a heading too long for the width but keeps it whole in the accessible name", () => {
     const long = "Cabin barrel frame station 1234 to 1456, left-hand side, below the passenger window belt, skin panel 7";
-    const s = makeFrame({ name: "l", heading: long, label: long, x: { kind: "linear", domain: [0, 1], title: "x" }, y: { kind: "linear", domain: [0, 1], title: "y" } }).render([]);
+    const s = makeFrame({
+      name: "l",
+      heading: long,
+      label: long,
+      x: { kind: "linear", domain: [0, 1], title: "x" },
+      y: { kind: "linear", domain: [0, 1], title: "y" },
+    }).render([]);
     expect(s).toContain(`<title>${long}</title>`);
     const heading = s.match(/class="heading"[^>]*>([^<]*)</)![1];
     expect(heading.endsWith("…")).toBe(true);

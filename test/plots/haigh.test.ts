@@ -17,7 +17,9 @@ const sar = base.equivalentAmplitude_MPa;
 function lineVertices(svg: string, series: string): [number, number][] {
   const readX = axisRead(svg, "x", "linear");
   const readY = axisRead(svg, "y", "linear");
-  return elements(svg, `data-series="${series}"`).flatMap((tag) => pathPoints(tag).map(([px, py]): [number, number] => [readX(px), readY(py)]));
+  return elements(svg, `data-series="${series}"`).flatMap((tag) =>
+    pathPoints(tag).map(([px, py]): [number, number] => [readX(px), readY(py)]),
+  );
 }
 
 describe("Haigh diagram", () => {
@@ -26,7 +28,9 @@ describe("Haigh diagram", () => {
   it("is well formed, accessible and titled with units on both axes", () => {
     assertWellFormed(svg);
     assertNoArtefacts(svg);
-    expect(svg).toMatch(/^<svg [^>]*role="img" aria-label="Constant-life diagram \(Haigh\): [^"]*operating point at mean 95 MPa, amplitude 95 MPa/);
+    expect(svg).toMatch(
+      /^<svg [^>]*role="img" aria-label="Constant-life diagram \(Haigh\): [^"]*operating point at mean 95 MPa, amplitude 95 MPa/,
+    );
     const text = visibleText(svg);
     expect(text).toContain("Mean stress σm (MPa)");
     expect(text).toContain("Stress amplitude σa (MPa)");

@@ -85,8 +85,24 @@ describe("life against thickness", () => {
   it("survives nulls, NaN and Infinity without printing them", () => {
     const bad: LifeThicknessData[] = [
       { points: [], current_mm: NaN, requiredLife_cycles: Infinity },
-      { points: [{ thickness_mm: 1, life_cycles: null }, { thickness_mm: 2, life_cycles: null }], current_mm: 1.5, requiredLife_cycles: 1e5 },
-      { points: [{ thickness_mm: NaN, life_cycles: 5 }, { thickness_mm: 1.5, life_cycles: Infinity }, { thickness_mm: 1.6, life_cycles: 1e5 }], current_mm: 1.6, requiredLife_cycles: NaN, minimumThickness_mm: -2 },
+      {
+        points: [
+          { thickness_mm: 1, life_cycles: null },
+          { thickness_mm: 2, life_cycles: null },
+        ],
+        current_mm: 1.5,
+        requiredLife_cycles: 1e5,
+      },
+      {
+        points: [
+          { thickness_mm: NaN, life_cycles: 5 },
+          { thickness_mm: 1.5, life_cycles: Infinity },
+          { thickness_mm: 1.6, life_cycles: 1e5 },
+        ],
+        current_mm: 1.6,
+        requiredLife_cycles: NaN,
+        minimumThickness_mm: -2,
+      },
       { points: null, current_mm: null, requiredLife_cycles: null } as unknown as LifeThicknessData,
     ];
     for (const d of bad) {

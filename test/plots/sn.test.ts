@@ -125,7 +125,12 @@ describe("S-N curve", () => {
       { ...base, fatigueStrengthExponent: 0.1 },
       { ...base, fatigueStrengthCoefficient_MPa: NaN, enduranceLimit_MPa: Infinity },
       { ...base, designLife_cycles: NaN, scatterFactor: Infinity, operating: { equivalentAmplitude_MPa: NaN, life_cycles: Infinity } },
-      { ...base, validRange_cycles: [5e5, 1e3], coupons: [{ amplitude_MPa: NaN, life_cycles: -1 }], band: [{ amplitude_MPa: 1, lower_cycles: NaN, upper_cycles: 2 }] },
+      {
+        ...base,
+        validRange_cycles: [5e5, 1e3],
+        coupons: [{ amplitude_MPa: NaN, life_cycles: -1 }],
+        band: [{ amplitude_MPa: 1, lower_cycles: NaN, upper_cycles: 2 }],
+      },
       { ...base, operating: null } as unknown as SnData,
     ];
     for (const d of bad) {

@@ -16,7 +16,8 @@ const base: SpectrumData = {
   ],
 };
 
-const bars = (svg: string) => elements(svg, 'class="bar"').map((t) => ({ tag: t, from: attr(t, "data-from"), to: attr(t, "data-to"), count: attr(t, "data-count") }));
+const bars = (svg: string) =>
+  elements(svg, 'class="bar"').map((t) => ({ tag: t, from: attr(t, "data-from"), to: attr(t, "data-to"), count: attr(t, "data-count") }));
 
 describe("load spectrum", () => {
   const svg = spectrumPlot(base);
@@ -50,7 +51,13 @@ describe("load spectrum", () => {
   });
 
   it("uses a linear count axis from zero when counts are of one order", () => {
-    const s = spectrumPlot({ cycles: [{ range_MPa: 100, mean_MPa: 50, count: 3 }, { range_MPa: 80, mean_MPa: 60, count: 1.5 }, { range_MPa: 190, mean_MPa: 95, count: 0.5 }] });
+    const s = spectrumPlot({
+      cycles: [
+        { range_MPa: 100, mean_MPa: 50, count: 3 },
+        { range_MPa: 80, mean_MPa: 60, count: 1.5 },
+        { range_MPa: 190, mean_MPa: 95, count: 0.5 },
+      ],
+    });
     const y = axisMap(s, "y", "linear");
     expect(tickLabels(s, "y")[0]).toMatch(/^0(\.0)?$/);
     for (const b of bars(s)) {
@@ -81,7 +88,14 @@ describe("load spectrum", () => {
   it("survives empty and nonsense input and escapes the title", () => {
     const bad: SpectrumData[] = [
       { cycles: [] },
-      { cycles: [{ range_MPa: NaN, mean_MPa: NaN, count: 3 }, { range_MPa: Infinity, mean_MPa: 0, count: 1 }, { range_MPa: 10, mean_MPa: 0, count: -1 }], bins: NaN },
+      {
+        cycles: [
+          { range_MPa: NaN, mean_MPa: NaN, count: 3 },
+          { range_MPa: Infinity, mean_MPa: 0, count: 1 },
+          { range_MPa: 10, mean_MPa: 0, count: -1 },
+        ],
+        bins: NaN,
+      },
       { cycles: [{ range_MPa: 0, mean_MPa: 0, count: 2 }], bins: 0 },
       { cycles: [{ range_MPa: 50, mean_MPa: 0, count: 2 }], bins: 1e9 },
       { cycles: null } as unknown as SpectrumData,

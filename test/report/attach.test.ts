@@ -56,9 +56,7 @@ describe("attachInput and extractAttachment", () => {
     doc.addPage();
     const ctx = doc.context;
     const spec = (name: string, stream: ReturnType<typeof ctx.stream>): PDFRef =>
-      ctx.register(
-        ctx.obj({ Type: "Filespec", F: PDFString.of(name), UF: PDFHexString.fromText(name), EF: { F: ctx.register(stream) } }),
-      );
+      ctx.register(ctx.obj({ Type: "Filespec", F: PDFString.of(name), UF: PDFHexString.fromText(name), EF: { F: ctx.register(stream) } }));
     const bytes = (s: string) => new TextEncoder().encode(s);
     // ISO 32000-1, 7.9.6: leaves hold Names [key value ...] and Limits [first last]; the root holds Kids.
     const leaf = (name: string, ref: PDFRef) =>
@@ -95,9 +93,7 @@ describe("attachInput and extractAttachment", () => {
     blank.addPage();
     const signed = await attachInput(await blank.save(), inputJson, info);
     const size = new TextEncoder().encode(inputJson).length;
-    await expect(extractAttachment(signed, INPUT_ATTACHMENT, { maxBytes: size - 1 })).rejects.toThrow(
-      `larger than ${size - 1} bytes`,
-    );
+    await expect(extractAttachment(signed, INPUT_ATTACHMENT, { maxBytes: size - 1 })).rejects.toThrow(`larger than ${size - 1} bytes`);
     expect(await extractAttachment(signed, INPUT_ATTACHMENT, { maxBytes: size })).toHaveLength(size);
 
     const doc = await PDFDocument.create();

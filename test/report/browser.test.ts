@@ -4,12 +4,7 @@ import { join } from "node:path";
 import { describe, expect, it } from "vitest";
 import { createBrowserPool } from "../../src/report/browser.ts";
 import { resolveChromiumPath } from "../../src/report/chromium.ts";
-import {
-  BrowserCrashedError,
-  BrowserUnavailableError,
-  PoolBusyError,
-  RenderTimeoutError,
-} from "../../src/report/errors.ts";
+import { BrowserCrashedError, BrowserUnavailableError, PoolBusyError, RenderTimeoutError } from "../../src/report/errors.ts";
 import { renderBlankPdf, renderPdf } from "../../src/report/pdf.ts";
 import { chromiumBelow, commandLine, eventually, liveInGroup } from "./processes.ts";
 

@@ -34,7 +34,10 @@ function pdfOf(out: SheetOutcome): Uint8Array {
 /** Replace the bytes of one attached file, as someone editing the PDF by hand would. */
 async function replaceAttachment(pdf: Uint8Array, name: string, bytes: Uint8Array): Promise<Uint8Array> {
   const doc = await PDFDocument.load(pdf, { updateMetadata: false });
-  const names = doc.catalog.lookup(PDFName.of("Names"), PDFDict).lookup(PDFName.of("EmbeddedFiles"), PDFDict).lookup(PDFName.of("Names"), PDFArray);
+  const names = doc.catalog
+    .lookup(PDFName.of("Names"), PDFDict)
+    .lookup(PDFName.of("EmbeddedFiles"), PDFDict)
+    .lookup(PDFName.of("Names"), PDFArray);
   for (let i = 0; i < names.size(); i += 2) {
     const key = names.lookup(i);
     if (!(key instanceof PDFString || key instanceof PDFHexString) || key.decodeText() !== name) continue;
@@ -158,7 +161,9 @@ describe("signed, superseded and paper sizes", () => {
     expect(signed).toContain("CHECKED — AWAITING APPROVAL");
     expect(signed).not.toContain("UNCHECKED DRAFT");
 
-    const old = pdfText(pdfOf(await renderSheet(receiver, { pool, revision: 2, signoffs, superseded: true, now: printedOn, paper: "Letter" })));
+    const old = pdfText(
+      pdfOf(await renderSheet(receiver, { pool, revision: 2, signoffs, superseded: true, now: printedOn, paper: "Letter" })),
+    );
     expect(old).toContain("SUPERSEDED — DO NOT USE");
     expect(old).toContain("This revision is superseded.");
   });
@@ -254,7 +259,11 @@ describe("bad input", () => {
     const unused = createBrowserPool({ executablePath: "/nonexistent/chromium" });
     const bad = await renderSheet({ ...receiver, shell: { ...receiver.shell, thickness_mm: -1 } }, { pool: unused });
     expect(bad).toEqual({ ok: false, errors: [{ path: "shell.thickness_mm", message: "the wall thickness must be greater than 0" }] });
-    const badOptions = await renderSheet(receiver, { pool: unused, revision: 0, signoffs: [{ role: "checked", name: "", signedAt: "2025-01-01" }] });
+    const badOptions = await renderSheet(receiver, {
+      pool: unused,
+      revision: 0,
+      signoffs: [{ role: "checked", name: "", signedAt: "2025-01-01" }],
+    });
     expect(badOptions.ok).toBe(false);
     if (!badOptions.ok) {
       expect(badOptions.errors.map((e) => e.path)).toEqual(["(sheet).revision", "(sheet).signoffs.0.name"]);

@@ -93,7 +93,15 @@ describe("sheetHtml", () => {
     const out = sheetHtml(DEMOS[1].document, { now: new Date("2025-03-14T12:00:00Z") });
     if (!out.ok) throw new Error(JSON.stringify(out.errors));
     const headings = [...out.html.matchAll(/<h2><span class="num">(\d)<\/span>([^<]+)<\/h2>/g)].map((m) => `${m[1]} ${m[2]}`);
-    expect(headings).toEqual(["1 Scope and assumptions", "2 Inputs", "3 Calculation", "4 Results", "5 Plots", "6 Cautions and the governing code", "7 Sign-off"]);
+    expect(headings).toEqual([
+      "1 Scope and assumptions",
+      "2 Inputs",
+      "3 Calculation",
+      "4 Results",
+      "5 Plots",
+      "6 Cautions and the governing code",
+      "7 Sign-off",
+    ]);
     expect(out.headerHtml).toContain("UNCHECKED DRAFT — NOT FOR USE");
     expect(out.headerHtml).toContain("2025-03-14");
     expect(out.footerHtml).toContain(out.result.fingerprint);

@@ -38,7 +38,8 @@ describe("the schema's floors", () => {
 
   it.each(FLOORS)("%s: takes the floor itself, and the engine gives finite numbers there", (path, floor) => {
     const out = checkDocument(withValue(path, floor));
-    if (!out.ok) expect(out.errors.map((e) => e.path)).not.toContain(path); // another field may object to so odd a value
+    if (!out.ok)
+      expect(out.errors.map((e) => e.path)).not.toContain(path); // another field may object to so odd a value
     else expect(nonFiniteNumbers(out.result)).toEqual([]);
   });
 

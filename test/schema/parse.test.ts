@@ -41,7 +41,10 @@ describe("check format parsing", () => {
   it("refuses a positive Basquin exponent with the reason", () => {
     const doc = clone();
     doc.material.fatigueStrengthExponent = 0.1;
-    expect(errorsOf(doc)[0]).toMatchObject({ path: "material.fatigueStrengthExponent", message: expect.stringMatching(/must be negative/) });
+    expect(errorsOf(doc)[0]).toMatchObject({
+      path: "material.fatigueStrengthExponent",
+      message: expect.stringMatching(/must be negative/),
+    });
   });
 
   it("refuses unknown names: fields, enums, library ids, cutout kinds", () => {
@@ -59,7 +62,10 @@ describe("check format parsing", () => {
   it("asks for the crack's material data when a crack is given", () => {
     const doc = clone();
     delete doc.material.parisC;
-    expect(errorsOf(doc)).toContainEqual({ path: "material.parisC", message: "the Paris coefficient C is required because a crack is given" });
+    expect(errorsOf(doc)).toContainEqual({
+      path: "material.parisC",
+      message: "the Paris coefficient C is required because a crack is given",
+    });
   });
 
   it("takes exactly one way of giving the pressure", () => {

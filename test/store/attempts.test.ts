@@ -23,9 +23,13 @@ describe("wrong passphrases", () => {
     await registerPeople(store);
     const { id } = store.createCheck({ input: sampleInput(), calcNumber: "HW-TRIES-2" });
     for (let i = 0; i < MAX_FAILURES - 1; i++) {
-      await expect(store.signOff(id, { revision: 1, role: "prepared", name: PEOPLE.ana.name, passphrase: "a wrong passphrase here" })).rejects.toBeInstanceOf(WrongPassphraseError);
+      await expect(
+        store.signOff(id, { revision: 1, role: "prepared", name: PEOPLE.ana.name, passphrase: "a wrong passphrase here" }),
+      ).rejects.toBeInstanceOf(WrongPassphraseError);
     }
     await store.signOff(id, { revision: 1, role: "prepared", name: PEOPLE.ana.name, passphrase: PEOPLE.ana.passphrase });
-    await expect(store.signOff(id, { revision: 1, role: "checked", name: PEOPLE.bo.name, passphrase: "a wrong passphrase here" })).rejects.toThrow(/is not the one registered/);
+    await expect(
+      store.signOff(id, { revision: 1, role: "checked", name: PEOPLE.bo.name, passphrase: "a wrong passphrase here" }),
+    ).rejects.toThrow(/is not the one registered/);
   });
 });

@@ -11,7 +11,9 @@ describe("openDatabase", () => {
     const db = openDatabase(path);
     expect(existsSync(path)).toBe(true);
     expect(db.pragma("user_version", { simple: true })).toBe(SCHEMA_VERSION);
-    const tables = (db.prepare("SELECT name FROM sqlite_master WHERE type = 'table' ORDER BY name").all() as { name: string }[]).map((t) => t.name);
+    const tables = (db.prepare("SELECT name FROM sqlite_master WHERE type = 'table' ORDER BY name").all() as { name: string }[]).map(
+      (t) => t.name,
+    );
     expect(tables).toEqual(expect.arrayContaining(["checks", "events", "revisions", "signers", "signoffs"]));
     db.close();
   });

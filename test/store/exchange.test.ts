@@ -79,7 +79,9 @@ describe("export and import", () => {
     const { store, id } = await signedHistory();
     const doc = copy(store.exportCheck(id));
     doc.revisions[0].signoffs[1].name = "Someone Trusted";
-    expect(importError(testStore(), doc).errors).toEqual([{ path: "digest", message: expect.stringMatching(/changed after it was exported/) }]);
+    expect(importError(testStore(), doc).errors).toEqual([
+      { path: "digest", message: expect.stringMatching(/changed after it was exported/) },
+    ]);
   });
 
   it("holds imported sign-offs to the four-eyes rule even when the digest is consistent", async () => {

@@ -8,7 +8,11 @@ describe("signers", () => {
     const store = testStore();
     await store.addSigner(PEOPLE.ana);
     await store.addSigner({ name: "Dee Marchetti", passphrase: PEOPLE.ana.passphrase });
-    const rows = store.db.prepare("SELECT name, salt, hash FROM signers ORDER BY name").all() as { name: string; salt: Buffer; hash: Buffer }[];
+    const rows = store.db.prepare("SELECT name, salt, hash FROM signers ORDER BY name").all() as {
+      name: string;
+      salt: Buffer;
+      hash: Buffer;
+    }[];
     const everything = JSON.stringify(store.db.prepare("SELECT * FROM signers").all());
     expect(everything).not.toContain(PEOPLE.ana.passphrase);
     for (const r of rows) expect(r.hash.toString("utf8")).not.toContain(PEOPLE.ana.passphrase);
@@ -41,8 +45,12 @@ describe("signers", () => {
 
   it("keeps names unique regardless of case and spacing, and trims them", async () => {
     const store = testStore();
-    expect(await store.addSigner({ name: "  Ana Brightwater ", passphrase: PEOPLE.ana.passphrase })).toMatchObject({ name: "Ana Brightwater" });
-    await expect(store.addSigner({ name: "ANA  brightwater", passphrase: "another long phrase" })).rejects.toBeInstanceOf(RecordConflictError);
+    expect(await store.addSigner({ name: "  Ana Brightwater ", passphrase: PEOPLE.ana.passphrase })).toMatchObject({
+      name: "Ana Brightwater",
+    });
+    await expect(store.addSigner({ name: "ANA  brightwater", passphrase: "another long phrase" })).rejects.toBeInstanceOf(
+      RecordConflictError,
+    );
     expect(store.listSigners().map((s) => s.name)).toEqual(["Ana Brightwater"]);
   });
 

@@ -9,7 +9,13 @@ async function storeWithCheck(): Promise<{ store: Store; id: string }> {
   return { store, id };
 }
 
-function sign(store: Store, id: string, revision: number, role: "prepared" | "checked" | "approved", who: { name: string; passphrase: string }) {
+function sign(
+  store: Store,
+  id: string,
+  revision: number,
+  role: "prepared" | "checked" | "approved",
+  who: { name: string; passphrase: string },
+) {
   return store.signOff(id, { revision, role, ...who });
 }
 
@@ -26,7 +32,12 @@ describe("sign-off", () => {
       ["checked", PEOPLE.bo.name, false],
       ["approved", PEOPLE.cy.name, false],
     ]);
-    expect(store.getCheck(id).events.filter((e) => e.kind === "signed").map((e) => [e.actor, e.detail])).toEqual([
+    expect(
+      store
+        .getCheck(id)
+        .events.filter((e) => e.kind === "signed")
+        .map((e) => [e.actor, e.detail]),
+    ).toEqual([
       [PEOPLE.ana.name, { role: "prepared" }],
       [PEOPLE.bo.name, { role: "checked" }],
       [PEOPLE.cy.name, { role: "approved" }],

@@ -10,6 +10,14 @@ export function launchTestBrowser(profileDir: string): Promise<Browser> {
   return puppeteer.launch({
     executablePath: resolveChromiumPath(),
     headless: true,
-    args: ["--no-sandbox", "--disable-gpu", "--disable-quic", "--disable-component-update", "--no-first-run", "--disable-background-networking", `--user-data-dir=${profileDir}`],
+    args: [
+      "--no-sandbox",
+      "--disable-gpu",
+      "--disable-quic",
+      "--disable-component-update",
+      "--no-first-run",
+      "--disable-background-networking",
+      `--user-data-dir=${profileDir}`,
+    ],
   });
 }

@@ -50,7 +50,12 @@ describe("on the page", () => {
     const html = await (await app.request(`/?c=${encodeCheck(doc)}`)).text();
     const carry = /name="carry" value="([^"]*)"/.exec(html);
     expect(carry).not.toBeNull();
-    const value = carry![1].replace(/&quot;/g, '"').replace(/&amp;/g, "&").replace(/&lt;/g, "<").replace(/&gt;/g, ">").replace(/&#39;/g, "'");
+    const value = carry![1]
+      .replace(/&quot;/g, '"')
+      .replace(/&amp;/g, "&")
+      .replace(/&lt;/g, "<")
+      .replace(/&gt;/g, ">")
+      .replace(/&#39;/g, "'");
     expect(JSON.parse(value)["material.coupons"]).toEqual(doc.material.coupons);
   });
 });

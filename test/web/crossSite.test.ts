@@ -4,7 +4,11 @@ import { pageRoutes } from "../../src/web/page.tsx";
 
 const app = createApp({ mounts: [pageRoutes()] });
 const form = (headers: Record<string, string>) =>
-  app.request("http://127.0.0.1:8080/", { method: "POST", headers: { "content-type": "application/x-www-form-urlencoded", ...headers }, body: "shell.thickness=2" });
+  app.request("http://127.0.0.1:8080/", {
+    method: "POST",
+    headers: { "content-type": "application/x-www-form-urlencoded", ...headers },
+    body: "shell.thickness=2",
+  });
 
 describe("requests from other sites", () => {
   it("a post another site's page makes through the browser is refused with a reason", async () => {

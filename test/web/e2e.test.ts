@@ -82,7 +82,9 @@ describe("the checker page in Chromium", () => {
       // A thinner skin carries more stress per cycle, so it lives fewer cycles.
       expect(await lifeValue()).toBeLessThan(beforeValue);
       // The plots follow the numbers a moment later: the life-against-thickness plot marks the new thickness.
-      await page.waitForFunction(() => document.querySelector("#plot-thickness")?.textContent?.includes("current thickness 0.6 mm"), { timeout: 15_000 });
+      await page.waitForFunction(() => document.querySelector("#plot-thickness")?.textContent?.includes("current thickness 0.6 mm"), {
+        timeout: 15_000,
+      });
       expect(new URL(page.url()).searchParams.get("c")).toBeTruthy();
       expect(problems).toEqual([]);
       await page.close();
@@ -131,11 +133,17 @@ describe("the checker page in Chromium", () => {
         timeout: 15_000,
       });
       await page.select("#f-units-stress", "ksi");
-      await page.waitForFunction(() => document.querySelector("label[for=f-material-sigmaF]")?.textContent?.includes("ksi"), { timeout: 15_000 });
+      await page.waitForFunction(() => document.querySelector("label[for=f-material-sigmaF]")?.textContent?.includes("ksi"), {
+        timeout: 15_000,
+      });
       await page.select("#f-units-pressure", "psi");
-      await page.waitForFunction(() => document.querySelector("label[for=f-altitude-min]")?.textContent?.includes("psi"), { timeout: 15_000 });
+      await page.waitForFunction(() => document.querySelector("label[for=f-altitude-min]")?.textContent?.includes("psi"), {
+        timeout: 15_000,
+      });
       await page.select("#f-units-altitude", "ft");
-      await page.waitForFunction(() => (document.querySelector("#f-altitude-flight") as HTMLInputElement | null)?.value === "25000", { timeout: 15_000 });
+      await page.waitForFunction(() => (document.querySelector("#f-altitude-flight") as HTMLInputElement | null)?.value === "25000", {
+        timeout: 15_000,
+      });
       expect(await text(page, "[data-testid=life]")).toBe(life);
       expect(await text(page, "[data-testid=allowable-life]")).toBe(allowable);
       expect(await text(page, "#verdict")).toMatch(/Passes/);

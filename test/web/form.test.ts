@@ -10,7 +10,8 @@ const US: Units = { length: "in", stress: "psi", pressure: "psi", altitude: "ft"
 function numbers(x: unknown, path = ""): Map<string, number> {
   const out = new Map<string, number>();
   if (typeof x === "number") out.set(path, x);
-  else if (x && typeof x === "object") for (const [k, v] of Object.entries(x)) for (const [p, n] of numbers(v, `${path}.${k}`)) out.set(p, n);
+  else if (x && typeof x === "object")
+    for (const [k, v] of Object.entries(x)) for (const [p, n] of numbers(v, `${path}.${k}`)) out.set(p, n);
   return out;
 }
 
@@ -51,8 +52,14 @@ describe("form ↔ check document", () => {
   });
 
   it("gives the same SI document from millimetres and megapascals as from inches and psi", () => {
-    const si = readForm({ "shell.thickness": "1.6", "pressure.mode": "direct", "pressure.max": "0.06", "material.ultimate": "470" }, SI_UNITS).document;
-    const us = readForm({ "shell.thickness": "0.0629921", "pressure.mode": "direct", "pressure.max": "8.70226", "material.ultimate": "68167.7" }, US).document;
+    const si = readForm(
+      { "shell.thickness": "1.6", "pressure.mode": "direct", "pressure.max": "0.06", "material.ultimate": "470" },
+      SI_UNITS,
+    ).document;
+    const us = readForm(
+      { "shell.thickness": "0.0629921", "pressure.mode": "direct", "pressure.max": "8.70226", "material.ultimate": "68167.7" },
+      US,
+    ).document;
     expectSameNumbers({ ...si, display: {} }, { ...us, display: {} }, 1e-5);
   });
 
@@ -64,7 +71,14 @@ describe("form ↔ check document", () => {
 
   it("puts an error on a block back on the row it came from, past blank rows", () => {
     const read = readForm(
-      { "pressure.mode": "blocks", "blocks.0.max": "", "blocks.0.min": "", "blocks.0.cycles": "", "blocks.1.max": "1", "blocks.1.cycles": "x" },
+      {
+        "pressure.mode": "blocks",
+        "blocks.0.max": "",
+        "blocks.0.min": "",
+        "blocks.0.cycles": "",
+        "blocks.1.max": "1",
+        "blocks.1.cycles": "x",
+      },
       SI_UNITS,
     );
     expect((read.document.pressure as { blocks: unknown[] }).blocks).toHaveLength(1);
@@ -74,7 +88,10 @@ describe("form ↔ check document", () => {
   });
 
   it("converts what is on the page when the units change, and keeps what is not a number", () => {
-    const v = convertValues({ "shell.thickness": "25.4", "shell.radius": "big", "history.text": "0 100 0" }, SI_UNITS, { ...US, pressure: "kPa" });
+    const v = convertValues({ "shell.thickness": "25.4", "shell.radius": "big", "history.text": "0 100 0" }, SI_UNITS, {
+      ...US,
+      pressure: "kPa",
+    });
     expect(v["shell.thickness"]).toBe("1");
     expect(v["shell.radius"]).toBe("big");
     expect(v["history.text"]).toBe("0, 100000, 0");

@@ -2,7 +2,10 @@ import { writeForm } from "../../src/web/form/index.ts";
 import { unitsFrom, unitsKey, type Units } from "../../src/web/units.ts";
 
 /** The fields a browser posts for a check as the checker draws it: its values plus the hidden units and material markers. */
-export function postedForm(doc: unknown, units: Units = unitsFrom((doc as { display?: Record<string, string> }).display)): Record<string, string> {
+export function postedForm(
+  doc: unknown,
+  units: Units = unitsFrom((doc as { display?: Record<string, string> }).display),
+): Record<string, string> {
   return {
     ...writeForm(doc, units),
     "units.shown": unitsKey(units),

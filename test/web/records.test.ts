@@ -44,7 +44,9 @@ describe("records API: saving", () => {
       expect.objectContaining({ id, title: "Receiver R-2 shell", calcNumber: "HW-WEB-1", latestRevision: 1, state: "draft" }),
     ]);
     const check = await send("GET", `/api/v1/checks/${id}`);
-    expect(check.json.revisions).toEqual([expect.objectContaining({ number: 1, fingerprint: created.json.fingerprint, state: "draft", signoffs: [] })]);
+    expect(check.json.revisions).toEqual([
+      expect.objectContaining({ number: 1, fingerprint: created.json.fingerprint, state: "draft", signoffs: [] }),
+    ]);
     expect(check.json.events.map((e: Json) => e.kind)).toEqual(["saved"]);
   });
 
@@ -145,7 +147,12 @@ describe("records API: signers and sign-off", () => {
 
   it("answers a wrong passphrase with 403", async () => {
     const { send, id } = await withSigners();
-    const res = await send("POST", `/api/v1/checks/${id}/signoffs`, { revision: 1, role: "prepared", name: PEOPLE.ana.name, passphrase: "not the right phrase" });
+    const res = await send("POST", `/api/v1/checks/${id}/signoffs`, {
+      revision: 1,
+      role: "prepared",
+      name: PEOPLE.ana.name,
+      passphrase: "not the right phrase",
+    });
     expect(res).toMatchObject({ status: 403, json: { errors: [{ path: "passphrase" }] } });
   });
 
@@ -187,7 +194,10 @@ describe("records API: export and import", () => {
     const imported = await other.send("POST", "/api/v1/checks/import", exported.json);
     expect(imported).toMatchObject({ status: 201, json: { id, calcNumber: "HW-WEB-1", revisions: 1 } });
     const check = await other.send("GET", `/api/v1/checks/${id}`);
-    expect(check.json.revisions[0]).toMatchObject({ state: "prepared", signoffs: [{ role: "prepared", name: PEOPLE.ana.name, imported: true }] });
+    expect(check.json.revisions[0]).toMatchObject({
+      state: "prepared",
+      signoffs: [{ role: "prepared", name: PEOPLE.ana.name, imported: true }],
+    });
     expect((await other.send("POST", "/api/v1/checks/import", exported.json)).status).toBe(409);
   });
 

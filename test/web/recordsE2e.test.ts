@@ -88,7 +88,9 @@ describe("the records in Chromium", () => {
       await page.click("#f-shell-thickness", { count: 3 });
       await page.keyboard.press("Backspace");
       await page.type("#f-shell-thickness", "1.2");
-      await page.waitForFunction(() => document.querySelector("#plot-thickness")?.textContent?.includes("current thickness 1.2 mm"), { timeout: 15_000 });
+      await page.waitForFunction(() => document.querySelector("#plot-thickness")?.textContent?.includes("current thickness 1.2 mm"), {
+        timeout: 15_000,
+      });
       expect(await text(page, "#save-record")).toBe("Save as a new revision");
       // Leaving the field sends one more edit (its change event); let it land before the page is left.
       await page.$eval("#f-shell-thickness", (e) => (e as HTMLInputElement).blur());
@@ -133,7 +135,12 @@ describe("the records in Chromium", () => {
       const pdf = await page.evaluate(async (url) => {
         const res = await fetch(url);
         const bytes = new Uint8Array(await res.arrayBuffer());
-        return { status: res.status, type: res.headers.get("content-type"), head: String.fromCharCode(...bytes.slice(0, 5)), size: bytes.length };
+        return {
+          status: res.status,
+          type: res.headers.get("content-type"),
+          head: String.fromCharCode(...bytes.slice(0, 5)),
+          size: bytes.length,
+        };
       }, href!);
       expect(pdf).toMatchObject({ status: 200, type: "application/pdf", head: "%PDF-" });
       expect(pdf.size).toBeGreaterThan(10_000);

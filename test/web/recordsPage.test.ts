@@ -78,7 +78,12 @@ describe("the list of saved checks", () => {
       expect(row).toContain('data-state="draft"');
       expect(row).toContain(`/api/v1/checks/${c.id}/revisions/1/sheet`);
     }
-    expect(s.store.listChecks().map((c) => c.calcNumber).sort()).toEqual(["AR500-SHELL-003", "L30-FUS-017"]);
+    expect(
+      s.store
+        .listChecks()
+        .map((c) => c.calcNumber)
+        .sort(),
+    ).toEqual(["AR500-SHELL-003", "L30-FUS-017"]);
     expect(html).toContain("not a code-compliance certificate");
     expect(html).toContain("licensed or authorized engineer");
     expect(html).not.toMatch(/\sstyle="|<script(?![^>]*\ssrc=)/);
@@ -138,10 +143,16 @@ describe("saving from the checker", () => {
     expect(ask.status).toBe(409);
     expect(ask.html).toContain("Save as revision 2 of L30-FUS-017");
     expect(s.store.getCheck(existing.id).revisions).toHaveLength(1);
-    const document = /name="document" value="([^"]*)"/.exec(ask.html)![1].replace(/&quot;/g, '"').replace(/&amp;/g, "&");
+    const document = /name="document" value="([^"]*)"/
+      .exec(ask.html)![1]
+      .replace(/&quot;/g, '"')
+      .replace(/&amp;/g, "&");
     const done = await s.post(`/records/${existing.id}/revisions`, { document });
     expect(done.location).toBe(`/records/${existing.id}?saved=2`);
-    expect((s.store.getCheck(existing.id).revisions[1].input as { shell: { thickness_mm: number } }).shell.thickness_mm).toBeCloseTo(1.1, 12);
+    expect((s.store.getCheck(existing.id).revisions[1].input as { shell: { thickness_mm: number } }).shell.thickness_mm).toBeCloseTo(
+      1.1,
+      12,
+    );
   });
 
   it("sends a check with mistakes back to the checker with the message beside the field, and saves nothing", async () => {

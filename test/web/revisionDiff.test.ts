@@ -7,7 +7,11 @@ const receiver = findDemo("receiver")!.document;
 
 describe("the input difference", () => {
   it("flattens nested objects and lists of objects to dot paths, and keeps a list of plain values whole", () => {
-    const flat = flatten({ shell: { thickness_mm: 5 }, pressure: { blocks: [{ cycles: 300 }, { cycles: 20 }] }, evidence: { lives_cycles: [1, 2] } });
+    const flat = flatten({
+      shell: { thickness_mm: 5 },
+      pressure: { blocks: [{ cycles: 300 }, { cycles: 20 }] },
+      evidence: { lives_cycles: [1, 2] },
+    });
     expect([...flat.entries()]).toEqual([
       ["shell.thickness_mm", 5],
       ["pressure.blocks.0.cycles", 300],

@@ -19,7 +19,9 @@ describe("POST /api/v1/sheet", () => {
     const res = await post(JSON.stringify(cabin));
     expect(res.status).toBe(200);
     expect(res.headers.get("content-type")).toBe("application/pdf");
-    expect(res.headers.get("content-disposition")).toBe(`attachment; filename="L30-FUS-017-sheet.pdf"; filename*=UTF-8''L30-FUS-017-sheet.pdf`);
+    expect(res.headers.get("content-disposition")).toBe(
+      `attachment; filename="L30-FUS-017-sheet.pdf"; filename*=UTF-8''L30-FUS-017-sheet.pdf`,
+    );
     const expected = checkDocument(cabin);
     if (!expected.ok) throw new Error("the cabin demo must be valid");
     expect(res.headers.get("x-hoopwise-fingerprint")).toBe(expected.result.fingerprint);
@@ -31,7 +33,9 @@ describe("POST /api/v1/sheet", () => {
   it("answers a bad check with 422 and the errors document naming the field", async () => {
     const res = await post(JSON.stringify({ ...cabin, fatigue: { ...cabin.fatigue, designLife_cycles: 0 } }));
     expect(res.status).toBe(422);
-    expect(await res.json()).toEqual({ errors: [{ path: "fatigue.designLife_cycles", message: "the design life must be greater than 0" }] });
+    expect(await res.json()).toEqual({
+      errors: [{ path: "fatigue.designLife_cycles", message: "the design life must be greater than 0" }],
+    });
   });
 
   it("answers a body that is not JSON, or an unknown paper, without a 500", async () => {

@@ -86,7 +86,13 @@ export function TextInput({ s, name, label, hint, placeholder, wide, multiline }
   return (
     <div class={wide ? "field wide" : "field"}>
       <label for={fieldId(name)}>{label}</label>
-      {multiline ? <textarea {...common} rows={2}>{s.values[name] ?? ""}</textarea> : <input type="text" {...common} value={s.values[name] ?? ""} />}
+      {multiline ? (
+        <textarea {...common} rows={2}>
+          {s.values[name] ?? ""}
+        </textarea>
+      ) : (
+        <input type="text" {...common} value={s.values[name] ?? ""} />
+      )}
       <Hint name={name} hint={hint} />
       <ErrorSlot name={name} messages={errs} />
     </div>
@@ -98,7 +104,14 @@ export interface Option {
   label: string;
 }
 
-export function Select({ s, name, label, hint, options, fallback }: FieldProps & { name: string; options: readonly Option[]; fallback?: string }) {
+export function Select({
+  s,
+  name,
+  label,
+  hint,
+  options,
+  fallback,
+}: FieldProps & { name: string; options: readonly Option[]; fallback?: string }) {
   const errs = s.errors.get(name);
   const chosen = s.values[name] ?? fallback ?? options[0]?.value;
   return (
@@ -127,7 +140,19 @@ export function Select({ s, name, label, hint, options, fallback }: FieldProps &
  * fields sit in a panel after the choices; the stylesheet shows only the chosen panel, and a
  * browser without that support simply shows them all, every one still labelled.
  */
-export function Choice({ s, name, legend, options, fallback }: { s: FormState; name: string; legend: Child; options: readonly Option[]; fallback: string }) {
+export function Choice({
+  s,
+  name,
+  legend,
+  options,
+  fallback,
+}: {
+  s: FormState;
+  name: string;
+  legend: Child;
+  options: readonly Option[];
+  fallback: string;
+}) {
   const chosen = s.values[name] ?? fallback;
   const errs = s.errors.get(name);
   return (

@@ -20,7 +20,12 @@ export function CrackSection({ s }: { s: FormState }) {
               { value: "hole-through", label: "Through crack from a hole" },
             ]}
           />
-          <NumberInput s={s} name="crack.initial" label="Initial size" hint="Half-length for a crack in open skin; length from the edge or hole otherwise." />
+          <NumberInput
+            s={s}
+            name="crack.initial"
+            label="Initial size"
+            hint="Half-length for a crack in open skin; length from the edge or hole otherwise."
+          />
           <NumberInput s={s} name="crack.width" label="Panel width" hint="Optional: finite-width correction." />
           <div class="when-hole">
             <NumberInput s={s} name="crack.holeRadius" label="Hole radius" />
@@ -37,7 +42,13 @@ export function CrackSection({ s }: { s: FormState }) {
               ]}
             />
           </div>
-          <NumberInput s={s} name="crack.inspectionFactor" label="Inspection factor" placeholder="2" hint="Growth life ÷ this = the interval between inspections." />
+          <NumberInput
+            s={s}
+            name="crack.inspectionFactor"
+            label="Inspection factor"
+            placeholder="2"
+            hint="Growth life ÷ this = the interval between inspections."
+          />
         </div>
         <label class="check">
           <input type="checkbox" name="crack.bulging" value="on" checked={Boolean(s.values["crack.bulging"])} />

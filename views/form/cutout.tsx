@@ -20,7 +20,12 @@ export function CutoutSection({ s }: { s: FormState }) {
       />
       <Panel name="cutout.kind" value="circular-hole">
         <div class="grid">
-          <NumberInput s={s} name="circle.radius" label="Hole radius" hint="Optional: needed only for notch sensitivity from a material constant." />
+          <NumberInput
+            s={s}
+            name="circle.radius"
+            label="Hole radius"
+            hint="Optional: needed only for notch sensitivity from a material constant."
+          />
         </div>
       </Panel>
       <Panel name="cutout.kind" value="elliptical-hole">
@@ -32,8 +37,19 @@ export function CutoutSection({ s }: { s: FormState }) {
       <Panel name="cutout.kind" value="given">
         <div class="grid">
           <NumberInput s={s} name="given.kt" label="Kt, referred to the nominal hoop stress" />
-          <NumberInput s={s} name="given.rootRadius" label="Notch root radius" hint="Optional: for notch sensitivity from a material constant." />
-          <TextInput s={s} name="given.basis" label="Where this Kt comes from" wide placeholder="chart, finite-element model, strain-gauge test…" />
+          <NumberInput
+            s={s}
+            name="given.rootRadius"
+            label="Notch root radius"
+            hint="Optional: for notch sensitivity from a material constant."
+          />
+          <TextInput
+            s={s}
+            name="given.basis"
+            label="Where this Kt comes from"
+            wide
+            placeholder="chart, finite-element model, strain-gauge test…"
+          />
         </div>
       </Panel>
     </fieldset>

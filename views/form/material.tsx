@@ -43,18 +43,24 @@ export function MaterialSection({ s }: { s: FormState }) {
           fallback=""
           options={[{ value: "", label: "Own values (typed below)" }, ...MATERIALS.map((m) => ({ value: m.id, label: m.name }))]}
         />
-        <TextInput s={s} name="material.name" label="Name on the sheet" placeholder={lib?.name ?? "e.g. plate to the purchase specification"} />
+        <TextInput
+          s={s}
+          name="material.name"
+          label="Name on the sheet"
+          placeholder={lib?.name ?? "e.g. plate to the purchase specification"}
+        />
       </div>
       <p class={lib ? "flag" : "flag own"}>
         {lib ? (
           <>
-            <strong>Typical values — verify against certified data.</strong> Blank fields keep the library value shown in grey; type a value to
-            replace it for this check. Source: {lib.source}
+            <strong>Typical values — verify against certified data.</strong> Blank fields keep the library value shown in grey; type a value
+            to replace it for this check. Source: {lib.source}
           </>
         ) : (
           <>
-            <strong>Your own values.</strong> Give at least the strengths, the modulus and the Basquin constants; toughness and Paris constants are
-            needed only for crack growth. Material values must come from certified data ({TYPICAL_FLAG} when taken from a handbook).
+            <strong>Your own values.</strong> Give at least the strengths, the modulus and the Basquin constants; toughness and Paris
+            constants are needed only for crack growth. Material values must come from certified data ({TYPICAL_FLAG} when taken from a
+            handbook).
           </>
         )}
       </p>

@@ -3,7 +3,9 @@ import type { FormState } from "./state.ts";
 
 /** Settings most checks leave alone; folded away so the main path stays short. */
 export function OptionsSection({ s }: { s: FormState }) {
-  const used = ["axial.max", "axial.min", "static.yieldFactor", "fatigue.surface", "fatigue.reliability", "fatigue.size"].some((n) => s.values[n]);
+  const used = ["axial.max", "axial.min", "static.yieldFactor", "fatigue.surface", "fatigue.reliability", "fatigue.size"].some(
+    (n) => s.values[n],
+  );
   const errs = [...s.errors.keys()].some((n) => /^(axial|static)\.|^fatigue\.(surface|reliability|size|localYield)$/.test(n));
   return (
     <details class="section" id="sec-options" open={used || errs || s.values["fatigue.localYield"] === "shakedown"}>
@@ -18,7 +20,13 @@ export function OptionsSection({ s }: { s: FormState }) {
       <fieldset>
         <legend>Static strength and local yield</legend>
         <div class="grid">
-          <NumberInput s={s} name="static.yieldFactor" label="Factor on yield" placeholder="1.5" hint="Von Mises stress × this must not exceed yield." />
+          <NumberInput
+            s={s}
+            name="static.yieldFactor"
+            label="Factor on yield"
+            placeholder="1.5"
+            hint="Von Mises stress × this must not exceed yield."
+          />
           <Select
             s={s}
             name="fatigue.localYield"

@@ -66,8 +66,8 @@ function HistoryInput({ s }: { s: FormState }) {
           {s.values[name] ?? ""}
         </textarea>
         <p class="hint" id={`${fieldId(name)}-hint`}>
-          Numbers in order, separated by spaces, commas or new lines; or a CSV table, of which the last column is read. It is counted into cycles
-          by rainflow (ASTM E1049); one pass of the history counts as one use against the design life.
+          Numbers in order, separated by spaces, commas or new lines; or a CSV table, of which the last column is read. It is counted into
+          cycles by rainflow (ASTM E1049); one pass of the history counts as one use against the design life.
         </p>
         <ErrorSlot name={name} messages={errs} />
       </div>

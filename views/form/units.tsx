@@ -11,7 +11,10 @@ const opts = (xs: readonly string[]) => xs.map((x) => ({ value: x, label: x }));
  */
 export function UnitsSection({ s }: { s: FormState }) {
   const u = s.units;
-  const v = { ...s, values: { ...s.values, "units.length": u.length, "units.stress": u.stress, "units.pressure": u.pressure, "units.altitude": u.altitude } };
+  const v = {
+    ...s,
+    values: { ...s.values, "units.length": u.length, "units.stress": u.stress, "units.pressure": u.pressure, "units.altitude": u.altitude },
+  };
   return (
     <fieldset class="section" id="sec-units">
       <legend>Units</legend>

@@ -32,7 +32,9 @@ export function CompareView(p: Comparison) {
         <button type="submit">Compare</button>
       </form>
       {p.check.revisions.length < 2 ? <p class="empty">This check has one revision so far: there is nothing to compare it with.</p> : null}
-      {p.check.revisions.length > 1 && !p.pair && p.errors.size === 0 ? <p class="empty">Pick two different revisions to compare.</p> : null}
+      {p.check.revisions.length > 1 && !p.pair && p.errors.size === 0 ? (
+        <p class="empty">Pick two different revisions to compare.</p>
+      ) : null}
       {p.pair ? <Pair {...p.pair} engineVersion={p.engineVersion} /> : null}
     </>
   );
@@ -47,11 +49,7 @@ function Pair({ a, b, input, worked, engineVersion }: NonNullable<Comparison["pa
       </div>
       <section class="panel-box" aria-labelledby="h-input-diff" id="input-diff">
         <h2 id="h-input-diff">What changed in the input</h2>
-        {input.changes.length === 0 ? (
-          <p class="empty">The inputs are the same.</p>
-        ) : (
-          <InputTable a={a.number} b={b.number} diff={input} />
-        )}
+        {input.changes.length === 0 ? <p class="empty">The inputs are the same.</p> : <InputTable a={a.number} b={b.number} diff={input} />}
       </section>
       <section class="panel-box" aria-labelledby="h-result-diff" id="result-diff">
         <h2 id="h-result-diff">What changed in the results</h2>
@@ -111,7 +109,8 @@ function InputTable({ a, b, diff }: { a: number; b: number; diff: InputDiff }) {
 
 /** A saved value as it was typed: numbers in full, a long list by its length. */
 function inputText(v: unknown): string {
-  if (Array.isArray(v)) return v.length <= 12 ? v.map(String).join(", ") : `${v.length} values (${v.slice(0, 3).map(String).join(", ")}, …)`;
+  if (Array.isArray(v))
+    return v.length <= 12 ? v.map(String).join(", ") : `${v.length} values (${v.slice(0, 3).map(String).join(", ")}, …)`;
   if (typeof v === "string") return v;
   return JSON.stringify(v) ?? "";
 }
@@ -147,7 +146,7 @@ function ResultTable({ a, b, worked }: { a: number; b: number; worked: [WorkedRe
                 <th scope="row">{fa.label}</th>
                 <td class="before">{figureText(fa)}</td>
                 <td class="after">{figureText(fb)}</td>
-                <td class="change">{changed ? (rel === undefined ? "changed" : percent(rel)) : <span class="hint">same</span>}</td>
+                <td class="change">{changed ? rel === undefined ? "changed" : percent(rel) : <span class="hint">same</span>}</td>
               </tr>
             );
           })}

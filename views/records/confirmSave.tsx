@@ -7,7 +7,17 @@ import { StateBadge } from "./state.tsx";
  * the new revision would supersede the latest one, signed or not, so the user says so first.
  * The check travels in the form as its JSON document, whatever its size.
  */
-export function ConfirmSave({ existing, document, savedBy, back }: { existing: CheckSummary; document: unknown; savedBy?: string; back?: string }) {
+export function ConfirmSave({
+  existing,
+  document,
+  savedBy,
+  back,
+}: {
+  existing: CheckSummary;
+  document: unknown;
+  savedBy?: string;
+  back?: string;
+}) {
   return (
     <section class="panel-box" aria-labelledby="h-confirm">
       <h1 id="h-confirm">This calculation number is already in the records</h1>

@@ -73,7 +73,12 @@ export function SelectField(props: Common & { value?: string; options: readonly 
   return (
     <div class="field">
       <label for={props.id}>{props.label}</label>
-      <select id={props.id} name={props.name} aria-describedby={describedBy(props)} aria-invalid={props.errors?.length ? "true" : undefined}>
+      <select
+        id={props.id}
+        name={props.name}
+        aria-describedby={describedBy(props)}
+        aria-invalid={props.errors?.length ? "true" : undefined}
+      >
         {props.options.map((o) => (
           <option value={o.value} selected={o.value === props.value}>
             {o.label}

@@ -73,7 +73,13 @@ export function SignForm({ check, signers, form }: { check: CheckRecord; signers
               hint="The checker must be someone other than the preparer."
               errors={e.get("name")}
             />
-            <PassphraseField id="sign-passphrase" name="passphrase" label="Passphrase" autocomplete="current-password" errors={e.get("passphrase")} />
+            <PassphraseField
+              id="sign-passphrase"
+              name="passphrase"
+              label="Passphrase"
+              autocomplete="current-password"
+              errors={e.get("passphrase")}
+            />
           </div>
           <div class="actions">
             <button type="submit" class="primary">

@@ -13,8 +13,8 @@ export function SignersView({ signers, name, errors }: { signers: readonly Signe
     <>
       <h1>People who sign</h1>
       <p class="lead">
-        A sign-off needs the signer’s own passphrase. It is kept only as a salted hash: no one, including Hoopwise, can read it back. A forgotten
-        passphrase cannot be recovered.
+        A sign-off needs the signer’s own passphrase. It is kept only as a salted hash: no one, including Hoopwise, can read it back. A
+        forgotten passphrase cannot be recovered.
       </p>
       <section class="panel-box" aria-labelledby="h-registered">
         <h2 id="h-registered">Registered</h2>
@@ -24,7 +24,10 @@ export function SignersView({ signers, name, errors }: { signers: readonly Signe
           <ul class="people" id="signers">
             {signers.map((s) => (
               <li>
-                <strong>{s.name}</strong> <span class="hint">since <When at={s.createdAt} /></span>
+                <strong>{s.name}</strong>{" "}
+                <span class="hint">
+                  since <When at={s.createdAt} />
+                </span>
               </li>
             ))}
           </ul>
@@ -35,7 +38,14 @@ export function SignersView({ signers, name, errors }: { signers: readonly Signe
         <form method="post" action={SIGNERS_PATH} class="signer-form">
           <FormProblems messages={errors.general} />
           <div class="grid">
-            <TextField id="signer-name" name="name" label="Name as it is printed on sheets" value={name} autocomplete="name" errors={e.get("name")} />
+            <TextField
+              id="signer-name"
+              name="name"
+              label="Name as it is printed on sheets"
+              value={name}
+              autocomplete="name"
+              errors={e.get("name")}
+            />
             <PassphraseField
               id="signer-passphrase"
               name="passphrase"
@@ -45,7 +55,13 @@ export function SignersView({ signers, name, errors }: { signers: readonly Signe
               hint={`At least ${MIN_PASSPHRASE_LENGTH} characters; a few unrelated words work well.`}
               errors={e.get("passphrase")}
             />
-            <PassphraseField id="signer-again" name="again" label="The passphrase again" autocomplete="new-password" errors={e.get("again")} />
+            <PassphraseField
+              id="signer-again"
+              name="again"
+              label="The passphrase again"
+              autocomplete="new-password"
+              errors={e.get("again")}
+            />
           </div>
           <div class="actions">
             <button type="submit" class="primary">

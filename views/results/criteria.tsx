@@ -18,7 +18,8 @@ export function CriteriaTable({ result, units }: { result: CheckResult; units: U
       <h3 id="h-criteria">Mean-stress criteria side by side</h3>
       {f.criteria.length === 0 ? (
         <p>
-          Not compared here: the welded detail curve is a curve of stress range and carries the effect of mean and residual stress within it.
+          Not compared here: the welded detail curve is a curve of stress range and carries the effect of mean and residual stress within
+          it.
         </p>
       ) : (
         <div class="scroll">

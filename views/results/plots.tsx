@@ -88,13 +88,22 @@ export function Plots({ v }: { v: ResultView }) {
             id="crack"
             caption="Crack size against pressure cycles (Paris law), with the critical size and the inspections."
             svg={crackGrowthPlot(
-              { curve: r.crack.curve, critical_mm: r.crack.critical_mm, inspectionInterval_cycles: r.crack.inspectionInterval_cycles ?? Number.NaN, initial_mm: r.crack.initial_mm },
+              {
+                curve: r.crack.curve,
+                critical_mm: r.crack.critical_mm,
+                inspectionInterval_cycles: r.crack.inspectionInterval_cycles ?? Number.NaN,
+                initial_mm: r.crack.initial_mm,
+              },
               opts,
             )}
           />
         ) : null}
         {r.spectrum ? (
-          <Plot id="spectrum" caption="The counted cycles of one pass, by range of the nominal hoop stress." svg={spectrumPlot({ cycles: r.spectrum.cycles }, opts)} />
+          <Plot
+            id="spectrum"
+            caption="The counted cycles of one pass, by range of the nominal hoop stress."
+            svg={spectrumPlot({ cycles: r.spectrum.cycles }, opts)}
+          />
         ) : null}
       </div>
       {!(material && singleCycle) ? (

@@ -17,7 +17,8 @@ export function Solution({ result, units, canUsePressure }: { result: CheckResul
     <section class="block solution" aria-labelledby="h-solution">
       <h3 id="h-solution">{thickness ? "Least wall thickness that passes" : "Highest pressure that passes"}</h3>
       <p class="solved">
-        <strong data-testid="solution">{value === undefined ? "—" : quantity(value, thickness ? "length" : "pressure", units)}</strong>, set by {s.governs}
+        <strong data-testid="solution">{value === undefined ? "—" : quantity(value, thickness ? "length" : "pressure", units)}</strong>, set
+        by {s.governs}
       </p>
       <p class="hint">
         Found in {s.iterations} iterations ({s.evaluations} evaluations of the whole check); every other input held as given.

@@ -18,7 +18,9 @@ export function Steps({ steps }: { steps: readonly Step[] }) {
             <p class="eq sym">{st.equation}</p>
             <p class="eq sub">
               {st.substituted}
-              <span class="val">{st.value === null ? " → unlimited" : ` → ${sig(st.value, 4)}${st.unit && st.unit !== "—" ? ` ${st.unit}` : ""}`}</span>
+              <span class="val">
+                {st.value === null ? " → unlimited" : ` → ${sig(st.value, 4)}${st.unit && st.unit !== "—" ? ` ${st.unit}` : ""}`}
+              </span>
             </p>
             <p class="source">{st.source}</p>
           </li>

@@ -25,7 +25,10 @@ export function VerdictSummary({ result }: { result: CheckResult }) {
         {row && row.margin !== null ? (
           <>
             {" "}
-            — <strong>{row.margin >= 0 ? "reserve" : "shortfall"} {margin(row.margin)}</strong>
+            —{" "}
+            <strong>
+              {row.margin >= 0 ? "reserve" : "shortfall"} {margin(row.margin)}
+            </strong>
           </>
         ) : null}
       </p>

@@ -83,7 +83,16 @@ export const fieldId = (name: string) => `f-${name.replace(/\./g, "-")}`;
 export const errorId = (name: string) => `e-${name.replace(/\./g, "-")}`;
 
 /** Text and choice fields, each with an error slot beside it on the page. */
-export const TEXT_FIELDS = ["title", "project", "calcNumber", "notes", "material.name", "given.basis", "history.text", "evidence.lives"] as const;
+export const TEXT_FIELDS = [
+  "title",
+  "project",
+  "calcNumber",
+  "notes",
+  "material.name",
+  "given.basis",
+  "history.text",
+  "evidence.lives",
+] as const;
 export const CHOICE_FIELDS = [
   "units.length",
   "units.stress",

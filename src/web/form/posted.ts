@@ -1,6 +1,14 @@
 import { findMaterial } from "../../materials/library.ts";
 import { fromSI, formNumber, parseUnitsKey, sameUnits, unitsFrom, type Units } from "../units.ts";
-import { BLOCK_COLUMNS, blockField, MATERIAL_VALUE_FIELDS, NUMBER_FIELDS, SPARE_BLOCK_ROWS, type BlockColumn, type FormValues } from "./fields.ts";
+import {
+  BLOCK_COLUMNS,
+  blockField,
+  MATERIAL_VALUE_FIELDS,
+  NUMBER_FIELDS,
+  SPARE_BLOCK_ROWS,
+  type BlockColumn,
+  type FormValues,
+} from "./fields.ts";
 import { applyCarried } from "./carry.ts";
 import { blockRows, readForm, type ReadForm } from "./read.ts";
 import { convertValues } from "./write.ts";
@@ -64,7 +72,12 @@ async function parseForm(req: Request): Promise<Body> {
 /** The posted values plus what the buttons asked for, turned into a document and the values to show. */
 export function understand(posted: FormValues, historyFile?: string): Posted {
   const values = { ...posted };
-  const chosen = unitsFrom({ length: values["units.length"], stress: values["units.stress"], pressure: values["units.pressure"], altitude: values["units.altitude"] });
+  const chosen = unitsFrom({
+    length: values["units.length"],
+    stress: values["units.stress"],
+    pressure: values["units.pressure"],
+    altitude: values["units.altitude"],
+  });
   // The numbers on the page are in the units they were drawn in; the choice may since have changed.
   const shown = parseUnitsKey(values["units.shown"]) ?? chosen;
   let redraw = false;
@@ -121,7 +134,9 @@ function fillFromLibrary(values: FormValues, previousId: string, units: Units) {
 /** Rows of the block table: at least those posted, and always a few blank ones after the last filled row. */
 function rowsToShow(values: FormValues, more: boolean): number[] {
   const posted = blockRows(values);
-  const filled = posted.filter((r) => (Object.keys(BLOCK_COLUMNS) as BlockColumn[]).some((c) => (values[blockField(r, c)] ?? "").trim() !== ""));
+  const filled = posted.filter((r) =>
+    (Object.keys(BLOCK_COLUMNS) as BlockColumn[]).some((c) => (values[blockField(r, c)] ?? "").trim() !== ""),
+  );
   const lastFilled = filled.length ? filled[filled.length - 1] : -1;
   // Rows follow what is filled in, not the highest row number posted: an empty field named
   // blocks.9999 must not make the page draw ten thousand rows.

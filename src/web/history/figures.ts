@@ -38,7 +38,13 @@ const FIGURES: readonly FigureRule[] = [
   { id: "life", label: "Fatigue life", kind: "life", unit: lifeUnit, get: (r) => r.fatigue.life_cycles },
   { id: "allowable", label: "Allowable life (after scatter)", kind: "life", unit: lifeUnit, get: (r) => r.fatigue.allowableLife_cycles },
   { id: "damage", label: "Fatigue damage", kind: "damage", get: (r) => r.fatigue.damage },
-  { id: "interval", label: "Crack inspection interval", kind: "interval", unit: () => "cycles", get: (r) => r.crack?.inspectionInterval_cycles },
+  {
+    id: "interval",
+    label: "Crack inspection interval",
+    kind: "interval",
+    unit: () => "cycles",
+    get: (r) => r.crack?.inspectionInterval_cycles,
+  },
   { id: "bound", label: "Test evidence lower bound", kind: "bound", unit: () => "cycles", get: (r) => r.evidence?.lowerBound_cycles },
 ];
 
