@@ -1,5 +1,5 @@
 import { serve } from "@hono/node-server";
-import { closeSharedPool } from "./report/browser.ts";
+import { closeSharedPool } from "./pdf/browser.ts";
 import { openStore } from "./store/index.ts";
 import { seedDemos } from "./web/seed.ts";
 import { wholeApp } from "./web/whole.ts";

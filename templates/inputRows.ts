@@ -1,4 +1,4 @@
-import type { Quantity } from "../src/web/units.ts";
+import type { Quantity } from "../src/schema/units.ts";
 import { numberList, percent, sig } from "./format.ts";
 import { CRITERION_NAMES, CUTOUT_NAMES, CRACK_NAMES } from "./names.ts";
 import type { SheetModel } from "./model.ts";

@@ -1,6 +1,7 @@
 import type { CheckResult } from "../src/engine/index.ts";
-import type { ParsedCheck, ResolvedMaterial } from "../src/schema/index.ts";
-import type { Units } from "../src/web/units.ts";
+import type { ResolvedMaterial } from "../src/engine/input.ts";
+import type { ParsedCheck } from "../src/schema/index.ts";
+import type { Units } from "../src/schema/units.ts";
 
 export type Paper = "A4" | "Letter";
 export type SignOffRole = "prepared" | "checked" | "approved";

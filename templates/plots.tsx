@@ -1,6 +1,6 @@
 import { raw } from "hono/html";
 import { crackGrowthPlot, haighDiagram, lifeThicknessPlot, snCurve, spectrumPlot, type PlotOptions } from "../src/plots/index.ts";
-import type { Units } from "../src/web/units.ts";
+import type { Units } from "../src/schema/units.ts";
 import type { SheetModel } from "./model.ts";
 
 interface Figure {

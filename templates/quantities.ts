@@ -1,4 +1,4 @@
-import { fromSI, unitLabel, type Quantity, type Units } from "../src/web/units.ts";
+import { fromSI, unitLabel, type Quantity, type Units } from "../src/schema/units.ts";
 import { sig } from "./format.ts";
 
 /** The SI unit the engine works in, per quantity. */

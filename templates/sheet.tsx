@@ -4,7 +4,6 @@ import { Cautions } from "./cautions.tsx";
 import { Front } from "./front.tsx";
 import { htmlOf } from "./html.ts";
 import { Inputs } from "./inputs.tsx";
-import { footerHtml, headerHtml } from "./margins.tsx";
 import type { SheetModel } from "./model.ts";
 import { Plots } from "./plots.tsx";
 import { Results } from "./results.tsx";
@@ -19,15 +18,9 @@ export { stepResultText } from "./steps.tsx";
 /** Read once: the stylesheet is ours and does not change while the process runs. */
 const STYLE = readFileSync(new URL("./sheet.css", import.meta.url), "utf8");
 
-/** The sheet as Chromium prints it: the page body, and the header and footer for every page. */
-export interface SheetDocument {
-  html: string;
-  headerHtml: string;
-  footerHtml: string;
-}
-
-export function sheetDocument(m: SheetModel): SheetDocument {
-  return { html: "<!doctype html>" + htmlOf(<Sheet m={m} />), headerHtml: headerHtml(m), footerHtml: footerHtml(m) };
+/** The sheet's page body as HTML; the printer's header and footer come from src/sheet/margins.tsx. */
+export function sheetBody(m: SheetModel): string {
+  return "<!doctype html>" + htmlOf(<Sheet m={m} />);
 }
 
 function Sheet({ m }: { m: SheetModel }) {

@@ -1,4 +1,4 @@
-import { INPUT_ATTACHMENT } from "../src/report/attach.ts";
+import { INPUT_ATTACHMENT } from "../src/sheet/attach.ts";
 import { signedAtText } from "./format.ts";
 import type { SheetModel, SignOffRole } from "./model.ts";
 import { statusMark } from "./status.ts";

@@ -1,4 +1,4 @@
-import { fromSI, type Quantity, type Units, unitLabel } from "../src/web/units.ts";
+import { fromSI, type Quantity, type Units, unitLabel } from "../src/schema/units.ts";
 
 /**
  * Numbers as the page shows them: four significant figures, a true minus sign, powers of ten

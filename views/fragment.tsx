@@ -1,4 +1,4 @@
-import { errorSlotNames } from "../src/web/form/fields.ts";
+import { errorSlotNames } from "./form/fields.ts";
 import { ErrorSlot } from "./form/controls.tsx";
 import type { FormState } from "./form/state.ts";
 import { PlotsLoader, ResultDetails, ResultTop } from "./results/index.tsx";

@@ -1,6 +1,6 @@
 import type { Child } from "hono/jsx";
 import { DEMOS } from "../src/demo/index.ts";
-import { assetUrl } from "../src/web/assets.ts";
+import { assetUrl } from "./assetFiles.ts";
 import { Cautions } from "./cautions.tsx";
 
 /** htmx settings: no injected inline style (the CSP forbids it; site.css styles the indicator) and no evaluated script. */

@@ -1,8 +1,8 @@
 import { readFileSync, renameSync, rmSync, writeFileSync } from "node:fs";
-import { closeSharedPool } from "../report/browser.ts";
-import { BrowserCrashedError, BrowserUnavailableError, PoolBusyError, RenderTimeoutError } from "../report/errors.ts";
-import { renderSheet } from "../report/sheet.ts";
-import { verifySheet, type VerifyReport } from "../report/verify.ts";
+import { closeSharedPool } from "../pdf/browser.ts";
+import { BrowserCrashedError, BrowserUnavailableError, PoolBusyError, RenderTimeoutError } from "../pdf/errors.ts";
+import { renderSheet } from "../sheet/sheet.ts";
+import { verifySheet, type VerifyReport } from "../sheet/verify.ts";
 import { readJsonArg, type Io } from "./io.ts";
 
 type ArgErrors = { path: string; message: string }[];

@@ -1,6 +1,6 @@
 import { MEAN_STRESS_CRITERIA } from "../schema/check.ts";
-import { fingerprint } from "../schema/canonical.ts";
-import type { ResolvedCheck } from "../schema/resolve.ts";
+import { fingerprint } from "./fingerprint.ts";
+import type { ResolvedCheck } from "./input.ts";
 import { fitCoupons } from "./coupons.ts";
 import { crackGrowth } from "./crack.ts";
 import { InputError } from "./errors.ts";

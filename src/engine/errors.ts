@@ -13,7 +13,5 @@ export class InputError extends Error {
   }
 }
 
-export interface FieldError {
-  path: string;
-  message: string;
-}
+/** The errors document's entry lives with the format; re-exported for the engine's callers. */
+export type { FieldError } from "../schema/errors.ts";

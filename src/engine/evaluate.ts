@@ -1,5 +1,5 @@
 import type { MeanStressCriterion } from "../schema/check.ts";
-import type { ResolvedCheck } from "../schema/resolve.ts";
+import type { ResolvedCheck } from "./input.ts";
 import { concentration, type Concentration } from "./concentration.ts";
 import type { Load } from "./load.ts";
 import { CRITERION_LABEL, CRITERION_SOURCE, criterionWorking, equivalentAmplitude, type Strengths } from "./meanStress.ts";

@@ -1,4 +1,4 @@
-import { parseCheck } from "../schema/index.ts";
+import { parseCheck } from "./input.ts";
 import { runCheck } from "./check.ts";
 import { InputError, type FieldError } from "./errors.ts";
 import type { CheckResult } from "./result.ts";
@@ -8,6 +8,8 @@ export { InputError, type FieldError } from "./errors.ts";
 export type { CheckResult, CriterionRow, VerdictRow, SpectrumCycle } from "./result.ts";
 export type { Step } from "./step.ts";
 export { ENGINE_VERSION } from "./version.ts";
+export { fingerprint } from "./fingerprint.ts";
+export { parseCheck, type ParseResult, type ResolvedCheck, type ResolvedMaterial } from "./input.ts";
 
 export type Outcome = { ok: true; result: CheckResult } | { ok: false; errors: FieldError[] };
 

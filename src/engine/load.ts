@@ -1,4 +1,4 @@
-import type { ResolvedCheck } from "../schema/resolve.ts";
+import type { ResolvedCheck } from "./input.ts";
 import { cabinDifferential } from "./atmosphere.ts";
 import { countHistory } from "./rainflowMatrix.ts";
 import { fmt, step, type Step } from "./step.ts";

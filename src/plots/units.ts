@@ -1,10 +1,11 @@
 /**
- * Display units. Data always arrives in SI (MPa, mm, cycles); a plot converts only
- * what it shows, so a US-customary reader sees ksi or inches on the axes while the
- * engine's numbers stay untouched.
+ * Display units of a plot. Data always arrives in SI (MPa, mm, cycles); a plot converts only
+ * what it shows, so a US-customary reader sees ksi or inches on the axes while the engine's
+ * numbers stay untouched. The units and their factors are the format's (src/schema/units.ts).
  */
-export type StressUnit = "MPa" | "ksi" | "psi";
-export type LengthUnit = "mm" | "in";
+import { fromSI, type LengthUnit, SI_UNITS, STRESS_UNITS, LENGTH_UNITS, type StressUnit, type Units } from "../schema/units.ts";
+
+export type { LengthUnit, StressUnit } from "../schema/units.ts";
 
 export interface PlotOptions {
   /** viewBox width; the SVG itself is 100 % wide and scales. Default 800 (≈ 16 cm printed at 0.2 mm per unit). */
@@ -16,9 +17,6 @@ export interface PlotOptions {
   units?: { stress?: StressUnit; length?: LengthUnit };
 }
 
-const PER_MPA: Record<StressUnit, number> = { MPa: 1, ksi: 0.1450377, psi: 145.0377 };
-const PER_MM: Record<LengthUnit, number> = { mm: 1, in: 1 / 25.4 };
-
 export interface DisplayUnits {
   stressUnit: StressUnit;
   lengthUnit: LengthUnit;
@@ -29,9 +27,10 @@ export interface DisplayUnits {
 }
 
 export function displayUnits(opts: PlotOptions | undefined): DisplayUnits {
-  const stressUnit = opts?.units?.stress && opts.units.stress in PER_MPA ? opts.units.stress : "MPa";
-  const lengthUnit = opts?.units?.length && opts.units.length in PER_MM ? opts.units.length : "mm";
-  const ks = PER_MPA[stressUnit];
-  const kl = PER_MM[lengthUnit];
-  return { stressUnit, lengthUnit, stress: (v) => v * ks, length: (v) => v * kl };
+  const s = opts?.units?.stress;
+  const l = opts?.units?.length;
+  const stressUnit: StressUnit = s && (STRESS_UNITS as readonly string[]).includes(s) ? s : "MPa";
+  const lengthUnit: LengthUnit = l && (LENGTH_UNITS as readonly string[]).includes(l) ? l : "mm";
+  const u: Units = { ...SI_UNITS, stress: stressUnit, length: lengthUnit };
+  return { stressUnit, lengthUnit, stress: (v) => fromSI(v, "stress", u), length: (v) => fromSI(v, "length", u) };
 }

@@ -1,6 +1,3 @@
-import { createHash } from "node:crypto";
-import { ENGINE_VERSION } from "../engine/version.ts";
-
 /**
  * Canonical JSON: object keys sorted at every depth, no whitespace, numbers as JavaScript prints them.
  * Two inputs that mean the same check give the same text, so the same fingerprint.
@@ -20,11 +17,4 @@ function sortKeys(v: unknown): unknown {
     return out;
   }
   return v;
-}
-
-/** SHA-256 (hex) of the canonical input JSON followed by a newline and the engine version. */
-export function fingerprint(input: unknown, engineVersion: string = ENGINE_VERSION): string {
-  return createHash("sha256")
-    .update(canonicalJson(input) + "\n" + engineVersion)
-    .digest("hex");
 }

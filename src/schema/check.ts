@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { ALTITUDE_UNITS, LENGTH_UNITS, PRESSURE_UNITS, STRESS_UNITS } from "./units.ts";
 
 /**
  * The check format, version 1: the one definition of a check.
@@ -333,13 +334,11 @@ export const evidenceSchema = z.strictObject({
   assumedLogStdDev: positive("the assumed log standard deviation", 5).optional(),
 });
 
-const lengthUnits = ["mm", "in"] as const;
-const stressUnits = ["MPa", "kPa", "bar", "psi", "ksi"] as const;
 export const displaySchema = z.strictObject({
-  length: z.enum(lengthUnits, { error: 'length unit must be "mm" or "in"' }).default("mm"),
-  stress: z.enum(stressUnits, { error: `stress unit must be one of ${stressUnits.join(", ")}` }).default("MPa"),
-  pressure: z.enum(stressUnits, { error: `pressure unit must be one of ${stressUnits.join(", ")}` }).default("MPa"),
-  altitude: z.enum(["m", "ft"], { error: 'altitude unit must be "m" or "ft"' }).default("m"),
+  length: z.enum(LENGTH_UNITS, { error: `length unit must be ${LENGTH_UNITS.map((u) => `"${u}"`).join(" or ")}` }).default("mm"),
+  stress: z.enum(STRESS_UNITS, { error: `stress unit must be one of ${STRESS_UNITS.join(", ")}` }).default("MPa"),
+  pressure: z.enum(PRESSURE_UNITS, { error: `pressure unit must be one of ${PRESSURE_UNITS.join(", ")}` }).default("MPa"),
+  altitude: z.enum(ALTITUDE_UNITS, { error: `altitude unit must be ${ALTITUDE_UNITS.map((u) => `"${u}"`).join(" or ")}` }).default("m"),
 });
 
 export const checkSchema = z.strictObject({

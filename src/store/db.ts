@@ -6,7 +6,7 @@ import { MIGRATIONS, SCHEMA_VERSION } from "./migrations.ts";
 
 export type Db = Database.Database;
 
-const REPO_ROOT = fileURLToPath(new URL("../../", import.meta.url));
+const REPO_ROOT = fileURLToPath(new URL("../..", import.meta.url));
 
 /** How long a writer waits for another process's write lock before giving up (ms). */
 const BUSY_TIMEOUT_MS = 5000;

@@ -1,6 +1,7 @@
 import { createHash } from "node:crypto";
 import { z } from "zod";
-import { canonicalJson, fingerprint } from "../schema/canonical.ts";
+import { fingerprint } from "../engine/fingerprint.ts";
+import { canonicalJson } from "../schema/canonical.ts";
 import type { FieldError } from "../engine/errors.ts";
 import { isoNow, validInput, type StoreContext } from "./context.ts";
 import { assertCalcNumberFree, insertRevision } from "./checks.ts";

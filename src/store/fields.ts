@@ -1,5 +1,5 @@
 import { z } from "zod";
-import type { FieldError } from "../engine/errors.ts";
+import { type FieldError, type IssueWords, toFieldErrors } from "../schema/errors.ts";
 import { InvalidRecordError } from "./errors.ts";
 import { ROLES } from "./state.ts";
 
@@ -57,24 +57,15 @@ export const roleField = z.enum(ROLES, { error: need(`must be one of ${ROLES.map
 export const revisionNumberField = z.int({ error: need("must be a whole number") }).min(1, "must be 1 or more");
 
 /** Turn zod's issues into Hoopwise's errors document entries, with dot paths under `prefix`. */
+/** How the records word a key they do not take; the translation itself is the format's (src/schema/errors.ts). */
+const RECORD_WORDS: IssueWords = {
+  unknownKey: () => "is not a field this record takes",
+  blankKey: (key) => `holds a field with a blank name (${JSON.stringify(key)}), which this record does not take`,
+  rewordFromInput: false,
+};
+
 export function zodFieldErrors(error: z.ZodError, prefix = ""): FieldError[] {
-  // "(document)" names the record as a whole, as the rest of Hoopwise does.
-  const entry = (path: string, message: string) => ({ path: path || "(document)", message });
-  const out: FieldError[] = [];
-  for (const issue of error.issues) {
-    const at = joinPath(prefix, issue.path.map(String).join("."));
-    if (issue.code === "unrecognized_keys") {
-      for (const key of issue.keys) {
-        // A blank key would make a path of spaces, which names nothing: name the record that holds it.
-        if (key.trim() === "")
-          out.push(entry(at, `holds a field with a blank name (${JSON.stringify(key)}), which this record does not take`));
-        else out.push(entry(joinPath(at, key), "is not a field this record takes"));
-      }
-    } else {
-      out.push(entry(at, issue.message));
-    }
-  }
-  return out;
+  return toFieldErrors(error.issues, undefined, prefix, RECORD_WORDS);
 }
 
 export function joinPath(prefix: string, path: string): string {

@@ -1,5 +1,5 @@
 import { ENGINE_VERSION } from "../engine/version.ts";
-import { validateCheckDocument } from "./check-validator.ts";
+import { validateCheckDocument } from "./checkValidator.ts";
 import type { StoreContext, Validator } from "./context.ts";
 import { defaultDbPath, openDatabase, type Db } from "./db.ts";
 import { addRevision, createCheck, type CreatedCheck, type NewCheck, type NewRevision, type SavedRevision } from "./checks.ts";

@@ -4,7 +4,7 @@ import { compress } from "hono/compress";
 import { findDemo, DEMOS } from "../demo/index.ts";
 import { checkDocument, type FieldError } from "../engine/index.ts";
 import { findMaterial } from "../materials/library.ts";
-import { parseCheck } from "../schema/index.ts";
+import { parseCheck } from "../engine/input.ts";
 import { Page } from "../../views/page.tsx";
 import { Workspace, type Outcome } from "../../views/workspace.tsx";
 import type { FormState } from "../../views/form/state.ts";
@@ -17,7 +17,7 @@ import { readForm, readPosted, SPARE_BLOCK_ROWS, valueAt, writeForm, type FormVa
 import { MAX_JSON_DEPTH, tooDeepAt } from "./depth.ts";
 import { unshownParts } from "./form/carry.ts";
 import { decodeCheck, encodeCheck } from "./link.ts";
-import { unitsFrom, type Units } from "./units.ts";
+import { unitsFrom, type Units } from "../schema/units.ts";
 
 /**
  * The checker page. One handler shape for every way in: a link or example (GET), a plain form

@@ -1,7 +1,7 @@
 import { Hono } from "hono";
 import type { NewCheck, NewRevision, NewSigner, SignOffRequest, Store } from "../store/index.ts";
 import { readJson, tooLarge } from "./api.ts";
-import { recordsErrorResponse } from "./records-http.ts";
+import { recordsErrorResponse } from "./recordsHttp.ts";
 
 export interface RecordsDeps {
   /** The open records store; it validates check inputs with the validator it was opened with. */

@@ -15,7 +15,7 @@ import { SIGNER_FIELDS, SignersView } from "../../views/records/signers.tsx";
 import { diffInputs } from "./history/diff.ts";
 import { workRevision } from "./history/figures.ts";
 import { encodeCheck, MAX_LINK_CHARS } from "./link.ts";
-import { isDatabaseBusy, statusOf } from "./records-http.ts";
+import { isDatabaseBusy, statusOf } from "./recordsHttp.ts";
 import { formErrors, NO_ERRORS, postedFields, type FormErrors } from "./recordsForms.ts";
 import { saveRoutes } from "./recordsSave.tsx";
 

@@ -1,7 +1,7 @@
 import { Hono, type Context } from "hono";
 import { bodyLimit } from "hono/body-limit";
 import type { FieldError } from "../engine/index.ts";
-import { parseCheck } from "../schema/index.ts";
+import { parseCheck } from "../engine/input.ts";
 import { RecordError, type SavedRevision, type Store } from "../store/index.ts";
 import { ConfirmSave } from "../../views/records/confirmSave.tsx";
 import { pageHtml, RecordsLayout } from "../../views/records/layout.tsx";
@@ -10,7 +10,7 @@ import { MAX_JSON_BYTES } from "./api.ts";
 import { readPosted, type Posted } from "./form/index.ts";
 import { encodeCheck, MAX_LINK_CHARS } from "./link.ts";
 import { showPosted } from "./page.tsx";
-import { statusOf } from "./records-http.ts";
+import { statusOf } from "./recordsHttp.ts";
 import { postedFields } from "./recordsForms.ts";
 
 const formLimit = bodyLimit({

@@ -1,7 +1,7 @@
 import { Hono } from "hono";
 import type { Store } from "../store/index.ts";
 import { errorsDoc } from "./api.ts";
-import { recordsErrorResponse } from "./records-http.ts";
+import { recordsErrorResponse } from "./recordsHttp.ts";
 import { sheetResponse } from "./sheet.ts";
 
 /**

@@ -1,6 +1,6 @@
 import { Hono } from "hono";
-import { BrowserCrashedError, BrowserUnavailableError, PoolBusyError, RenderTimeoutError } from "../report/errors.ts";
-import { renderSheet, type SheetOptions } from "../report/sheet.ts";
+import { BrowserCrashedError, BrowserUnavailableError, PoolBusyError, RenderTimeoutError } from "../pdf/errors.ts";
+import { renderSheet, type SheetOptions } from "../sheet/sheet.ts";
 import { errorsDoc, readJson, tooLarge } from "./api.ts";
 
 /**

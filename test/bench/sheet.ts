@@ -1,7 +1,7 @@
 import { DEMOS } from "../../src/demo/index.ts";
-import { createBrowserPool } from "../../src/report/browser.ts";
-import { renderBlankPdf } from "../../src/report/pdf.ts";
-import { renderSheet, sheetHtml } from "../../src/report/sheet.ts";
+import { createBrowserPool } from "../../src/pdf/browser.ts";
+import { renderBlankPdf } from "../../src/pdf/pdf.ts";
+import { renderSheet, sheetHtml } from "../../src/sheet/sheet.ts";
 
 const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
 

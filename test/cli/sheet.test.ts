@@ -6,7 +6,7 @@ import { afterAll, describe, expect, it } from "vitest";
 import { sheetCommand, verifyCommand } from "../../src/cli/sheet.ts";
 import type { Io } from "../../src/cli/io.ts";
 import { DEMOS } from "../../src/demo/index.ts";
-import { chromiumBelow } from "../report/processes.ts";
+import { chromiumBelow } from "../pdf/processes.ts";
 
 const dir = mkdtempSync(join(tmpdir(), "hoopwise-cli-sheet-"));
 afterAll(() => rmSync(dir, { recursive: true, force: true }));

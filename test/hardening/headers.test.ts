@@ -8,7 +8,7 @@ import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { DEMOS } from "../../src/demo/index.ts";
 import { MAX_JSON_BYTES } from "../../src/web/api.ts";
 import { createApp } from "../../src/web/app.ts";
-import { assetUrl } from "../../src/web/assets.ts";
+import { assetUrl } from "../../views/assetFiles.ts";
 import { wholeApp, type WholeApp } from "./app.ts";
 import { startServer, type ServerChild } from "./server.ts";
 

@@ -4,13 +4,13 @@
  */
 import { deflateRawSync } from "node:zlib";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { closeSharedPool } from "../../src/report/browser.ts";
-import type { RequestRecord } from "../../src/report/pdf.ts";
-import { renderSheet } from "../../src/report/sheet.ts";
+import { closeSharedPool } from "../../src/pdf/browser.ts";
+import type { RequestRecord } from "../../src/pdf/pdf.ts";
+import { renderSheet } from "../../src/sheet/sheet.ts";
 import { writeForm } from "../../src/web/form/index.ts";
 import { sheetFilename } from "../../src/web/sheet.ts";
-import { unitsFrom } from "../../src/web/units.ts";
-import { pdfText } from "../report/poppler.ts";
+import { unitsFrom } from "../../src/schema/units.ts";
+import { pdfText } from "../sheet/poppler.ts";
 import { wholeApp, type WholeApp } from "./app.ts";
 import { FORMAT_EXAMPLE } from "./hostile.ts";
 

@@ -6,7 +6,7 @@
 import Database from "better-sqlite3";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { DEMOS } from "../../src/demo/index.ts";
-import { liveInGroup } from "../report/processes.ts";
+import { liveInGroup } from "../pdf/processes.ts";
 import { bounded, expectErrorsDoc, expectResult } from "./answers.ts";
 import { FORMAT_EXAMPLE } from "./hostile.ts";
 import { jsonOf, send, type Answer } from "./http.ts";

@@ -1,6 +1,6 @@
 /**
  * The server's processes as /proc shows them: its memory, and the Chromium processes under it
- * (by command line and parent chain; test/report/processes.ts has the process-group view).
+ * (by command line and parent chain; test/pdf/processes.ts has the process-group view).
  */
 import { readdirSync, readFileSync } from "node:fs";
 

@@ -1,7 +1,7 @@
 import { readFileSync } from "node:fs";
 import { describe, expect, it } from "vitest";
 import { checkDocument } from "../../src/engine/index.ts";
-import { parseCheck } from "../../src/schema/index.ts";
+import { parseCheck } from "../../src/engine/input.ts";
 import { nonFiniteNumbers } from "../hardening/answers.ts";
 
 /** The format example with the crack and evidence sections, so every floored field is in play. */

@@ -1,7 +1,7 @@
 import { readFileSync } from "node:fs";
 import { describe, expect, it } from "vitest";
-import { parseCheck } from "../../src/schema/index.ts";
-import { fingerprint } from "../../src/schema/canonical.ts";
+import { parseCheck } from "../../src/engine/input.ts";
+import { fingerprint } from "../../src/engine/fingerprint.ts";
 
 const example = JSON.parse(readFileSync(new URL("../fixtures/format-example.json", import.meta.url), "utf8"));
 const clone = () => structuredClone(example);

@@ -1,6 +1,6 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { fingerprint } from "../../src/schema/canonical.ts";
+import { fingerprint } from "../../src/engine/fingerprint.ts";
 import { InvalidRecordError, RecordConflictError, RecordNotFoundError } from "../../src/store/index.ts";
 import { fakeValidate, sampleInput, tempDbPath, testStore } from "./helpers.ts";
 

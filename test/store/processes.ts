@@ -1,7 +1,7 @@
 import { spawn, type ChildProcessWithoutNullStreams } from "node:child_process";
 import { fileURLToPath } from "node:url";
 
-const SAVE_LOOP = fileURLToPath(new URL("./fixtures/save-loop.ts", import.meta.url));
+const SAVE_LOOP = fileURLToPath(new URL("./fixtures/saveLoop.ts", import.meta.url));
 
 /** A save-loop child process and the revision numbers it has reported as committed. */
 export interface Saver {

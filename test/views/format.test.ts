@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { cycles, inUnits, margin, quantity, sig } from "../../views/format.ts";
-import { SI_UNITS } from "../../src/web/units.ts";
+import { SI_UNITS } from "../../src/schema/units.ts";
 
 describe("numbers as the page shows them", () => {
   it("writes four significant figures with a true minus and thin-space thousands", () => {

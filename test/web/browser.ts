@@ -1,8 +1,8 @@
 import puppeteer, { type Browser } from "puppeteer-core";
-import { resolveChromiumPath } from "../../src/report/chromium.ts";
+import { resolveChromiumPath } from "../../src/pdf/chromium.ts";
 
 /**
- * Debian's Chromium for browser tests of the page. Unlike the sheet renderer's (src/report/chromium.ts),
+ * Debian's Chromium for browser tests of the page. Unlike the sheet renderer's (src/pdf/chromium.ts),
  * this one must reach the test server on loopback, so only the flags that keep it quiet and offline
  * otherwise are set; the profile folder is the caller's, removed by the caller.
  */

@@ -3,7 +3,7 @@ import { DEMOS } from "../../src/demo/index.ts";
 import { applyCarried, unshownParts } from "../../src/web/form/carry.ts";
 import { writeForm } from "../../src/web/form/index.ts";
 import { understand } from "../../src/web/form/posted.ts";
-import { unitsFrom } from "../../src/web/units.ts";
+import { unitsFrom } from "../../src/schema/units.ts";
 
 const SI = unitsFrom({});
 /** A check with parts the form has no field for: coupon data and a crack-growth Walker exponent. */

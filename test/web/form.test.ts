@@ -1,8 +1,8 @@
 import { describe, expect, it } from "vitest";
 import { DEMOS } from "../../src/demo/index.ts";
-import { parseCheck } from "../../src/schema/index.ts";
+import { parseCheck } from "../../src/engine/input.ts";
 import { convertValues, parseNumberList, readForm, understand, writeForm } from "../../src/web/form/index.ts";
-import { SI_UNITS, unitsKey, type Units } from "../../src/web/units.ts";
+import { SI_UNITS, unitsKey, type Units } from "../../src/schema/units.ts";
 
 const US: Units = { length: "in", stress: "psi", pressure: "psi", altitude: "ft" };
 

@@ -6,7 +6,7 @@ import { DEMOS, findDemo } from "../../src/demo/index.ts";
 import { createApp } from "../../src/web/app.ts";
 import { decodeCheck, encodeCheck } from "../../src/web/link.ts";
 import { pageRoutes } from "../../src/web/page.tsx";
-import { unitsFrom, type Units } from "../../src/web/units.ts";
+import { unitsFrom, type Units } from "../../src/schema/units.ts";
 
 const app = createApp({ mounts: [pageRoutes()] });
 const cabin = findDemo("cabin")!.document;

@@ -1,5 +1,5 @@
 import { writeForm } from "../../src/web/form/index.ts";
-import { unitsFrom, unitsKey, type Units } from "../../src/web/units.ts";
+import { unitsFrom, unitsKey, type Units } from "../../src/schema/units.ts";
 
 /** The fields a browser posts for a check as the checker draws it: its values plus the hidden units and material markers. */
 export function postedForm(

@@ -6,7 +6,7 @@ import { serve, type ServerType } from "@hono/node-server";
 import type { Browser, Page } from "puppeteer-core";
 import { launchTestBrowser } from "./browser.ts";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { closeSharedPool } from "../../src/report/browser.ts";
+import { closeSharedPool } from "../../src/pdf/browser.ts";
 import { openStore, type Store } from "../../src/store/index.ts";
 import { createApp } from "../../src/web/app.ts";
 import { pageRoutes } from "../../src/web/page.tsx";

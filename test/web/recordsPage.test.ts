@@ -1,7 +1,7 @@
 import { postedForm } from "./postedForm.ts";
 import { describe, expect, it } from "vitest";
 import { findDemo } from "../../src/demo/index.ts";
-import { validateCheckDocument } from "../../src/store/check-validator.ts";
+import { validateCheckDocument } from "../../src/store/checkValidator.ts";
 import { createApp } from "../../src/web/app.ts";
 import { pageRoutes } from "../../src/web/page.tsx";
 import { recordsApi } from "../../src/web/records.ts";

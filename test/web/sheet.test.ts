@@ -1,8 +1,8 @@
 import { afterAll, describe, expect, it } from "vitest";
 import { DEMOS } from "../../src/demo/index.ts";
 import { checkDocument } from "../../src/engine/index.ts";
-import { closeSharedPool, createBrowserPool } from "../../src/report/browser.ts";
-import { verifySheet } from "../../src/report/verify.ts";
+import { closeSharedPool, createBrowserPool } from "../../src/pdf/browser.ts";
+import { verifySheet } from "../../src/sheet/verify.ts";
 import { createApp } from "../../src/web/app.ts";
 import { sheetApi, sheetFilename, sheetResponse } from "../../src/web/sheet.ts";
 

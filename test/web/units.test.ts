@@ -15,7 +15,7 @@ import {
   unitsFrom,
   unitsKey,
   type Units,
-} from "../../src/web/units.ts";
+} from "../../src/schema/units.ts";
 
 const US: Units = { length: "in", stress: "ksi", pressure: "psi", altitude: "ft" };
 

@@ -1,6 +1,6 @@
 import type { Child } from "hono/jsx";
-import { errorId, fieldId, NUMBER_FIELDS, type NumberFieldName } from "../../src/web/form/fields.ts";
-import { unitLabel } from "../../src/web/units.ts";
+import { errorId, fieldId, NUMBER_FIELDS, type NumberFieldName } from "./fields.ts";
+import { unitLabel } from "../../src/schema/units.ts";
 import type { FormState } from "./state.ts";
 
 /**

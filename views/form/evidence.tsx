@@ -1,4 +1,4 @@
-import { errorId, fieldId } from "../../src/web/form/fields.ts";
+import { errorId, fieldId } from "./fields.ts";
 import { ErrorSlot, NumberInput, Toggle } from "./controls.tsx";
 import type { FormState } from "./state.ts";
 

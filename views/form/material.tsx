@@ -1,6 +1,6 @@
 import { MATERIALS, TYPICAL_FLAG } from "../../src/materials/library.ts";
-import { MATERIAL_VALUE_FIELDS, NUMBER_FIELDS, type NumberFieldName } from "../../src/web/form/fields.ts";
-import { formNumber, fromSI } from "../../src/web/units.ts";
+import { MATERIAL_VALUE_FIELDS, NUMBER_FIELDS, type NumberFieldName } from "./fields.ts";
+import { formNumber, fromSI } from "../../src/schema/units.ts";
 import { NumberInput, Select, TextInput } from "./controls.tsx";
 import type { FormState } from "./state.ts";
 

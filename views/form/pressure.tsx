@@ -1,5 +1,5 @@
-import { blockField, errorId, fieldId } from "../../src/web/form/fields.ts";
-import { unitLabel } from "../../src/web/units.ts";
+import { blockField, errorId, fieldId } from "./fields.ts";
+import { unitLabel } from "../../src/schema/units.ts";
 import { Choice, ErrorSlot, NumberInput, Panel } from "./controls.tsx";
 import type { FormState } from "./state.ts";
 

@@ -1,6 +1,6 @@
 import type { LibraryMaterial } from "../../src/materials/library.ts";
-import type { FormValues } from "../../src/web/form/fields.ts";
-import type { Units } from "../../src/web/units.ts";
+import type { FormValues } from "./fields.ts";
+import type { Units } from "../../src/schema/units.ts";
 
 /** Everything a form section needs to draw itself: the text in each field, the errors beside them, the units. */
 export interface FormState {

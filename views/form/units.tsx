@@ -1,4 +1,4 @@
-import { ALTITUDE_UNITS, LENGTH_UNITS, PRESSURE_UNITS, STRESS_UNITS, unitsKey } from "../../src/web/units.ts";
+import { ALTITUDE_UNITS, LENGTH_UNITS, PRESSURE_UNITS, STRESS_UNITS, unitsKey } from "../../src/schema/units.ts";
 import { Select } from "./controls.tsx";
 import type { FormState } from "./state.ts";
 

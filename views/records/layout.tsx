@@ -1,6 +1,6 @@
 import type { Child } from "hono/jsx";
 import type { JSX } from "hono/jsx/jsx-runtime";
-import { assetUrl } from "../../src/web/assets.ts";
+import { assetUrl } from "../assetFiles.ts";
 import { CautionStrip } from "../cautions.tsx";
 
 /** A message at the top of a page: the outcome of what was just done, or why it was not. */

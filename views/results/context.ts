@@ -1,6 +1,6 @@
 import type { CheckResult } from "../../src/engine/index.ts";
-import type { ResolvedMaterial } from "../../src/schema/index.ts";
-import type { Units } from "../../src/web/units.ts";
+import type { ResolvedMaterial } from "../../src/engine/input.ts";
+import type { Units } from "../../src/schema/units.ts";
 
 /** What the result views draw from: the engine's result, the material values it used, the display units. */
 export interface ResultView {

@@ -1,5 +1,5 @@
 import type { CheckResult } from "../../src/engine/index.ts";
-import type { Units } from "../../src/web/units.ts";
+import type { Units } from "../../src/schema/units.ts";
 import { cycles, inUnits, sig } from "../format.ts";
 
 const STATUS_WORDS = {

@@ -1,6 +1,6 @@
 import type { Child } from "hono/jsx";
 import type { CheckResult } from "../../src/engine/index.ts";
-import type { Units } from "../../src/web/units.ts";
+import type { Units } from "../../src/schema/units.ts";
 import { cycles, quantity, sig } from "../format.ts";
 
 function Figure({ label, children }: { label: Child; children: Child }) {

@@ -1,7 +1,7 @@
 import type { Child } from "hono/jsx";
 import { raw } from "hono/html";
 import { crackGrowthPlot, haighDiagram, lifeThicknessPlot, snCurve, spectrumPlot, type PlotOptions } from "../../src/plots/index.ts";
-import type { Units } from "../../src/web/units.ts";
+import type { Units } from "../../src/schema/units.ts";
 import type { ResultView } from "./context.ts";
 
 /** The plots draw stresses in MPa, ksi or psi; pressures-style units (kPa, bar) fall back to MPa there. */

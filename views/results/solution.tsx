@@ -1,5 +1,5 @@
 import type { CheckResult } from "../../src/engine/index.ts";
-import type { Units } from "../../src/web/units.ts";
+import type { Units } from "../../src/schema/units.ts";
 import { RECALC_BUTTON } from "../actions.tsx";
 import { quantity } from "../format.ts";
 

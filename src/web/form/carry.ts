@@ -1,4 +1,4 @@
-import type { Units } from "../units.ts";
+import type { Units } from "../../schema/units.ts";
 import { readForm } from "./read.ts";
 import { valueAt, writeForm } from "./write.ts";
 

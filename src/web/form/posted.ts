@@ -1,5 +1,5 @@
 import { findMaterial } from "../../materials/library.ts";
-import { fromSI, formNumber, parseUnitsKey, sameUnits, unitsFrom, type Units } from "../units.ts";
+import { fromSI, formNumber, parseUnitsKey, sameUnits, unitsFrom, type Units } from "../../schema/units.ts";
 import {
   BLOCK_COLUMNS,
   blockField,
@@ -8,7 +8,7 @@ import {
   SPARE_BLOCK_ROWS,
   type BlockColumn,
   type FormValues,
-} from "./fields.ts";
+} from "../../../views/form/fields.ts";
 import { applyCarried } from "./carry.ts";
 import { blockRows, readForm, type ReadForm } from "./read.ts";
 import { convertValues } from "./write.ts";

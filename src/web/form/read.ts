@@ -1,6 +1,6 @@
-import { BLOCK_COLUMNS, blockField, NUMBER_FIELDS, type FormValues, type NumberFieldName } from "./fields.ts";
+import { BLOCK_COLUMNS, blockField, NUMBER_FIELDS, type FormValues, type NumberFieldName } from "../../../views/form/fields.ts";
 import { parseNumber, parseNumberList } from "./lists.ts";
-import { toSI, type Units } from "../units.ts";
+import { toSI, type Units } from "../../schema/units.ts";
 
 /**
  * Form → check document. Numbers are read in the user's units and written in SI. Nothing is

@@ -1,6 +1,6 @@
-import { blockField, NUMBER_FIELDS, type FormValues, type NumberFieldName } from "./fields.ts";
+import { blockField, NUMBER_FIELDS, type FormValues, type NumberFieldName } from "../../../views/form/fields.ts";
 import { formatNumberList, parseNumber, parseNumberList } from "./lists.ts";
-import { formNumber, fromSI, toSI, type Quantity, type Units } from "../units.ts";
+import { formNumber, fromSI, toSI, type Quantity, type Units } from "../../schema/units.ts";
 
 /**
  * Check document → form values in the chosen units. The document may come from a link or an

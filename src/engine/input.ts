@@ -1,6 +1,12 @@
-import type { FieldError } from "../engine/errors.ts";
+import { toFieldErrors, type FieldError } from "../schema/errors.ts";
 import { MATERIALS, findMaterial, TYPICAL_FLAG } from "../materials/library.ts";
-import type { MaterialFamily, ParsedCheck } from "./check.ts";
+import { checkSchema, type MaterialFamily, type ParsedCheck } from "../schema/check.ts";
+
+/**
+ * The engine's input: a check document validated by the schema, then resolved against the
+ * materials library and the cross-field rules. The schema knows neither the engine nor the
+ * library; this is where the two meet.
+ */
 
 /** A material with every value the engine needs; optional ones only where a method may go without. */
 export interface ResolvedMaterial {
@@ -124,4 +130,15 @@ export function resolveCheck(parsed: ParsedCheck): { ok: true; value: ResolvedCh
 
 function stripUndefined<T extends object>(o: T): Partial<T> {
   return Object.fromEntries(Object.entries(o).filter(([, v]) => v !== undefined)) as Partial<T>;
+}
+
+export type ParseResult = { ok: true; value: ResolvedCheck } | { ok: false; errors: FieldError[] };
+
+/** Validate a check document: schema first, then the cross-field rules. Never throws. */
+export function parseCheck(json: unknown, pathPrefix = ""): ParseResult {
+  const parsed = checkSchema.safeParse(json);
+  if (!parsed.success) return { ok: false, errors: toFieldErrors(parsed.error.issues, json, pathPrefix) };
+  const resolved = resolveCheck(parsed.data);
+  if (!resolved.ok && pathPrefix) return { ok: false, errors: resolved.errors.map((e) => ({ ...e, path: `${pathPrefix}.${e.path}` })) };
+  return resolved;
 }

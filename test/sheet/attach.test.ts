@@ -1,10 +1,10 @@
 import { afterAll, describe, expect, it } from "vitest";
 import { PDFDict, PDFDocument, PDFHexString, PDFName, PDFString, type PDFRef } from "pdf-lib";
 import { ENGINE_VERSION } from "../../src/engine/version.ts";
-import { attachInput, extractAttachment, INPUT_ATTACHMENT, readSheetInfo } from "../../src/report/attach.ts";
-import { createBrowserPool } from "../../src/report/browser.ts";
-import { renderPdf } from "../../src/report/pdf.ts";
-import { fingerprint } from "../../src/schema/canonical.ts";
+import { attachInput, extractAttachment, INPUT_ATTACHMENT, readSheetInfo } from "../../src/sheet/attach.ts";
+import { createBrowserPool } from "../../src/pdf/browser.ts";
+import { renderPdf } from "../../src/pdf/pdf.ts";
+import { fingerprint } from "../../src/engine/fingerprint.ts";
 import { pdfdetachList, pdfdetachSave, pdfInfo } from "./poppler.ts";
 
 const pool = createBrowserPool({ concurrency: 1 });

@@ -35,12 +35,8 @@ export interface Margins {
   left: string;
 }
 
-/**
- * Calculation-sheet margins: room at the top for a header of up to three lines and at the bottom
- * for the page count and fingerprint; the wider left edge leaves space to punch and file the sheet
- * (common practice).
- */
-export const SHEET_MARGINS: Margins = { top: "26mm", right: "15mm", bottom: "20mm", left: "22mm" };
+/** Margins when the caller gives none (the check sheet passes its own, src/sheet/margins.tsx). */
+const DEFAULT_MARGINS: Margins = { top: "26mm", right: "15mm", bottom: "20mm", left: "22mm" };
 
 /** "Page X of Y" in Chromium's template classes, to place in a header or footer. */
 export const PAGE_X_OF_Y = 'Page <span class="pageNumber"></span> of <span class="totalPages"></span>';
@@ -49,7 +45,7 @@ export const PAGE_X_OF_Y = 'Page <span class="pageNumber"></span> of <span class
 const EMPTY_HEADER = "<span></span>";
 
 const DEFAULT_FOOTER =
-  `<div style="width:100%;box-sizing:border-box;padding:0 ${SHEET_MARGINS.right} 0 ${SHEET_MARGINS.left};` +
+  `<div style="width:100%;box-sizing:border-box;padding:0 ${DEFAULT_MARGINS.right} 0 ${DEFAULT_MARGINS.left};` +
   `font:8pt sans-serif;text-align:right">${PAGE_X_OF_Y}</div>`;
 
 export interface PdfOptions {
@@ -58,7 +54,7 @@ export interface PdfOptions {
   headerHtml?: string;
   /** Footer template on every page. Default: "Page X of Y" at the right. */
   footerHtml?: string;
-  /** Page margins as CSS lengths. Default SHEET_MARGINS. */
+  /** Page margins as CSS lengths. Default: 26 mm top, 20 mm bottom, 15 mm right, 22 mm left. */
   margin?: Margins;
   /** Time limit of this render. Default: the pool's (30 s unless configured). */
   timeout_ms?: number;
@@ -85,7 +81,7 @@ export async function renderPdf(html: string, options: PdfOptions): Promise<Buff
           displayHeaderFooter: true,
           headerTemplate: options.headerHtml ?? EMPTY_HEADER,
           footerTemplate: options.footerHtml ?? DEFAULT_FOOTER,
-          margin: options.margin ?? SHEET_MARGINS,
+          margin: options.margin ?? DEFAULT_MARGINS,
           timeout: 0,
         });
         return Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength);

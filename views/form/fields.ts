@@ -1,4 +1,4 @@
-import type { Quantity } from "../units.ts";
+import type { Quantity } from "../../src/schema/units.ts";
 
 /**
  * The form's number fields: each field's name on the page, where its value lands in the check

@@ -1,6 +1,7 @@
 /**
- * Display units for the page. The check document is always SI (mm, MPa, m); the form shows
- * and reads values in the units the user picked, and these functions convert at that edge.
+ * Display units, the one home of units and their SI factors for the format, the form, the plots
+ * and the sheet. The check document is always SI (mm, MPa, m); the form shows and reads values
+ * in the units the user picked, and these functions convert at that edge.
  * Factors: 1 in = 25.4 mm and 1 ft = 0.3048 m (exact, international yard and pound, 1959);
  * 1 psi = 6894.757293168 Pa (NIST SP 811, B.8); 1 bar = 0.1 MPa (exact).
  */

@@ -1,8 +1,8 @@
 import { createServer, type Server } from "node:net";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { createBrowserPool, type BrowserPool } from "../../src/report/browser.ts";
-import { PAGE_X_OF_Y, renderBlankPdf, renderPdf, type RequestRecord } from "../../src/report/pdf.ts";
-import { pdfInfo, pdfText } from "./poppler.ts";
+import { createBrowserPool, type BrowserPool } from "../../src/pdf/browser.ts";
+import { PAGE_X_OF_Y, renderBlankPdf, renderPdf, type RequestRecord } from "../../src/pdf/pdf.ts";
+import { pdfInfo, pdfText } from "../sheet/poppler.ts";
 
 const pool = createBrowserPool({ concurrency: 2 });
 afterAll(() => pool.close());

@@ -3,7 +3,7 @@ import { Fragment, jsx } from "hono/jsx";
 import { describe, expect, it } from "vitest";
 import { DEMOS } from "../../src/demo/index.ts";
 import type { Step } from "../../src/engine/index.ts";
-import { sheetHtml } from "../../src/report/sheet.ts";
+import { sheetHtml } from "../../src/sheet/sheet.ts";
 import { life, margin, sig, signedAtText } from "../../templates/format.ts";
 import { typeset } from "../../templates/math.tsx";
 import { dualText } from "../../templates/quantities.ts";

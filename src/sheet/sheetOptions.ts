@@ -1,5 +1,5 @@
 import { z } from "zod";
-import type { FieldError } from "../engine/errors.ts";
+import { type FieldError, toFieldErrors } from "../schema/errors.ts";
 import type { SignOff } from "../../templates/sheet.tsx";
 
 /**
@@ -51,8 +51,5 @@ export interface SheetLayoutOptions {
 export function parseSheetOptions(opts: unknown): { ok: true; value: SheetLayoutOptions } | { ok: false; errors: FieldError[] } {
   const parsed = optionsSchema.safeParse(opts);
   if (parsed.success) return { ok: true, value: parsed.data };
-  return {
-    ok: false,
-    errors: parsed.error.issues.map((i) => ({ path: `(sheet).${i.path.map(String).join(".")}`.replace(/\.$/, ""), message: i.message })),
-  };
+  return { ok: false, errors: toFieldErrors(parsed.error.issues, opts, "(sheet)") };
 }

@@ -1,11 +1,11 @@
 import { raw } from "hono/html";
 // PAGE_X_OF_Y is our own constant markup (Chromium fills its pageNumber and totalPages spans).
-import { PAGE_X_OF_Y, SHEET_MARGINS } from "../src/report/pdf.ts";
-import { CAUTION_SHORT } from "./cautions.tsx";
-import { isoDate } from "./format.ts";
-import { htmlOf } from "./html.ts";
-import type { SheetModel } from "./model.ts";
-import { statusMark } from "./status.ts";
+import { type Margins, PAGE_X_OF_Y } from "../pdf/pdf.ts";
+import { CAUTION_SHORT } from "../../templates/cautions.tsx";
+import { isoDate } from "../../templates/format.ts";
+import { htmlOf } from "../../templates/html.ts";
+import type { SheetModel } from "../../templates/model.ts";
+import { statusMark } from "../../templates/status.ts";
 
 /**
  * Chromium's header and footer templates: printed in the page margins of every page. They see
@@ -13,6 +13,13 @@ import { statusMark } from "./status.ts";
  * prints them tiny). Text runs through JSX like the body, so user text is escaped here too.
  * One line each, cut with an ellipsis: a long title must not push into the page body.
  */
+/**
+ * Calculation-sheet margins: room at the top for a header of up to three lines and at the bottom
+ * for the page count and fingerprint; the wider left edge leaves space to punch and file the sheet
+ * (common practice).
+ */
+export const SHEET_MARGINS: Margins = { top: "26mm", right: "15mm", bottom: "20mm", left: "22mm" };
+
 const SIDE = `0 ${SHEET_MARGINS.right} 0 ${SHEET_MARGINS.left}`;
 const FONT = "'DejaVu Sans', sans-serif";
 const ONE_LINE = "white-space:nowrap;overflow:hidden;text-overflow:ellipsis";

@@ -2,10 +2,10 @@ import { existsSync, mkdtempSync, rmSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { describe, expect, it } from "vitest";
-import { createBrowserPool } from "../../src/report/browser.ts";
-import { resolveChromiumPath } from "../../src/report/chromium.ts";
-import { BrowserCrashedError, BrowserUnavailableError, PoolBusyError, RenderTimeoutError } from "../../src/report/errors.ts";
-import { renderBlankPdf, renderPdf } from "../../src/report/pdf.ts";
+import { createBrowserPool } from "../../src/pdf/browser.ts";
+import { resolveChromiumPath } from "../../src/pdf/chromium.ts";
+import { BrowserCrashedError, BrowserUnavailableError, PoolBusyError, RenderTimeoutError } from "../../src/pdf/errors.ts";
+import { renderBlankPdf, renderPdf } from "../../src/pdf/pdf.ts";
 import { chromiumBelow, commandLine, eventually, liveInGroup } from "./processes.ts";
 
 /** A promise with its resolve exposed, to hold a page for as long as a test needs. */

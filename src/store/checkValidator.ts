@@ -1,4 +1,4 @@
-import { parseCheck } from "../schema/index.ts";
+import { parseCheck } from "../engine/input.ts";
 import type { Validator } from "./context.ts";
 
 /**

@@ -4,7 +4,7 @@ import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { launch, type Browser } from "puppeteer-core";
 import { BrowserUnavailableError } from "./errors.ts";
-import { killProcessGroup, waitForGroupExit } from "./process-group.ts";
+import { killProcessGroup, waitForGroupExit } from "./processGroup.ts";
 
 /** Debian's chromium package puts its launcher here. */
 export const DEFAULT_CHROMIUM_PATH = "/usr/bin/chromium";

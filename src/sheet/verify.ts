@@ -16,8 +16,9 @@
  * gives the fingerprint to compare with the one printed on every page.
  */
 import { ENGINE_VERSION, InputError, runCheck, type CheckResult } from "../engine/index.ts";
-import type { FieldError } from "../engine/errors.ts";
-import { fingerprint, parseCheck } from "../schema/index.ts";
+import { fingerprint } from "../engine/fingerprint.ts";
+import { parseCheck } from "../engine/input.ts";
+import type { FieldError } from "../schema/errors.ts";
 import { extractAttachment, INPUT_ATTACHMENT, readSheetInfo, type SheetInfoFound } from "./attach.ts";
 import { compareRecords, readRecord, recordOf, RESULT_ATTACHMENT, type Difference, type SheetRecord } from "./record.ts";
 

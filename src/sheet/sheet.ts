@@ -13,15 +13,16 @@
  * RenderTimeoutError, BrowserCrashedError) for the face to map.
  */
 import { InputError, runCheck, type CheckResult } from "../engine/index.ts";
-import type { FieldError } from "../engine/errors.ts";
-import { canonicalJson, parseCheck } from "../schema/index.ts";
-import { unitsFrom } from "../web/units.ts";
-import { sheetDocument, type SheetDocument, type SheetModel, type SignOff } from "../../templates/sheet.tsx";
+import { parseCheck } from "../engine/input.ts";
+import { canonicalJson, type FieldError } from "../schema/index.ts";
+import { unitsFrom } from "../schema/units.ts";
+import { sheetBody, type SheetModel, type SignOff } from "../../templates/sheet.tsx";
+import { footerHtml, headerHtml, SHEET_MARGINS } from "./margins.tsx";
 import { attachInput } from "./attach.ts";
-import type { BrowserPool } from "./browser.ts";
-import { renderPdf, type RequestRecord } from "./pdf.ts";
+import type { BrowserPool } from "../pdf/browser.ts";
+import { renderPdf, type RequestRecord } from "../pdf/pdf.ts";
 import { attachRecord, recordOf } from "./record.ts";
-import { parseSheetOptions } from "./sheet-options.ts";
+import { parseSheetOptions } from "./sheetOptions.ts";
 
 export type { SignOff } from "../../templates/sheet.tsx";
 
@@ -44,6 +45,13 @@ export interface SheetOptions {
 }
 
 export type SheetOutcome = { ok: true; pdf: Uint8Array; result: CheckResult; fingerprint: string } | { ok: false; errors: FieldError[] };
+
+/** The sheet as Chromium prints it: the page body, and the header and footer for every page. */
+export interface SheetDocument {
+  html: string;
+  headerHtml: string;
+  footerHtml: string;
+}
 
 export type SheetHtmlOutcome =
   | ({ ok: true; result: CheckResult; model: SheetModel; canonicalInput: string } & SheetDocument)
@@ -72,7 +80,15 @@ export function sheetHtml(json: unknown, opts: Omit<SheetOptions, "pool" | "requ
     printedOn: opts.now ?? new Date(),
     paper: layout.value.paper,
   };
-  return { ok: true, result, model, canonicalInput: canonicalJson(parsed.value.document), ...sheetDocument(model) };
+  return {
+    ok: true,
+    result,
+    model,
+    canonicalInput: canonicalJson(parsed.value.document),
+    html: sheetBody(model),
+    headerHtml: headerHtml(model),
+    footerHtml: footerHtml(model),
+  };
 }
 
 export async function renderSheet(json: unknown, opts: SheetOptions = {}): Promise<SheetOutcome> {
@@ -83,6 +99,7 @@ export async function renderSheet(json: unknown, opts: SheetOptions = {}): Promi
     paper: model.paper,
     headerHtml: sheet.headerHtml,
     footerHtml: sheet.footerHtml,
+    margin: SHEET_MARGINS,
     pool: opts.pool,
     requestLog: opts.requestLog,
     timeout_ms: opts.timeout_ms,
