@@ -5,7 +5,8 @@ const root = new URL("../..", import.meta.url).pathname;
 const cli = (args: string[], input?: string) =>
   spawnSync(process.execPath, ["--import", "tsx", "src/cli.ts", ...args], { cwd: root, input, encoding: "utf8", timeout: 30_000 });
 
-describe("command line", () => {
+// Each case starts one or two Node processes with tsx; on a loaded machine that takes well over the default 20 s.
+describe("command line", { timeout: 90_000 }, () => {
   it("check answers the format's example with a result document, exit 0", () => {
     const r = cli(["check", "test/fixtures/format-example.json"]);
     expect(r.status).toBe(0);
