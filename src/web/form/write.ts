@@ -1,5 +1,6 @@
 import { blockField, NUMBER_FIELDS, type FormValues, type NumberFieldName } from "../../../views/form/fields.ts";
 import { formatNumberList, parseNumber, parseNumberList } from "./lists.ts";
+import { defaultAt } from "../../schema/defaults.ts";
 import { formNumber, fromSI, toSI, type Quantity, type Units } from "../../schema/units.ts";
 
 /**
@@ -14,6 +15,13 @@ export function writeForm(doc: unknown, units: Units): FormValues {
     const x = at(path);
     if (typeof x === "string" || typeof x === "number" || typeof x === "boolean") v[name] = String(x);
   };
+  // A choice the document leaves out shows the value the schema fills in, not the list's first
+  // option: the form re-posted unchanged must be the same check as the document.
+  const choose = (name: string, path: string) => {
+    put(name, path);
+    const fallback = defaultAt(path);
+    if (v[name] === undefined && fallback !== undefined) v[name] = String(fallback);
+  };
   const putNumber = (name: NumberFieldName) => {
     const f = NUMBER_FIELDS[name];
     const x = at(f.path);
@@ -21,9 +29,9 @@ export function writeForm(doc: unknown, units: Units): FormValues {
   };
 
   for (const k of ["title", "project", "calcNumber", "notes"]) put(k, k);
-  put("shell.form", "shell.form");
-  put("shell.radiusAt", "shell.radiusAt");
-  put("shell.theory", "shell.theory");
+  choose("shell.form", "shell.form");
+  choose("shell.radiusAt", "shell.radiusAt");
+  choose("shell.theory", "shell.theory");
   putNumber("shell.radius");
   putNumber("shell.thickness");
 
@@ -74,10 +82,10 @@ export function writeForm(doc: unknown, units: Units): FormValues {
   put("material.name", "material.name");
   for (const name of Object.keys(NUMBER_FIELDS) as NumberFieldName[]) if (name.startsWith("material.")) putNumber(name);
 
-  put("fatigue.meanStress", "fatigue.meanStress");
-  put("fatigue.curve", "fatigue.curve");
-  put("fatigue.localYield", "fatigue.localYield");
-  put("fatigue.surface", "fatigue.modifiers.surface");
+  choose("fatigue.meanStress", "fatigue.meanStress");
+  choose("fatigue.curve", "fatigue.curve");
+  choose("fatigue.localYield", "fatigue.localYield");
+  choose("fatigue.surface", "fatigue.modifiers.surface");
   for (const name of Object.keys(NUMBER_FIELDS) as NumberFieldName[]) if (name.startsWith("fatigue.")) putNumber(name);
   const constant = at("fatigue.notchConstant");
   v["fatigue.notch"] = typeof constant === "string" ? constant : at("fatigue.notchSensitivity") !== undefined ? "q" : "kt";
@@ -85,8 +93,8 @@ export function writeForm(doc: unknown, units: Units): FormValues {
 
   if (at("crack") !== undefined) {
     v["crack.on"] = "on";
-    put("crack.geometry", "crack.geometry");
-    put("crack.cracksAtHole", "crack.cracksAtHole");
+    choose("crack.geometry", "crack.geometry");
+    choose("crack.cracksAtHole", "crack.cracksAtHole");
     if (at("crack.bulging") === true) v["crack.bulging"] = "on";
     for (const name of Object.keys(NUMBER_FIELDS) as NumberFieldName[]) if (name.startsWith("crack.")) putNumber(name);
   }
