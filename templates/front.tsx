@@ -50,7 +50,7 @@ export function Front({ m }: { m: SheetModel }) {
       <div class="outcome">
         <div class={`verdict ${r.verdict}`}>{r.verdict === "pass" ? "Screening outcome: PASSES" : "Screening outcome: DOES NOT PASS"}</div>
         <div class="governs">
-          <b>Governing check:</b> {typeset(r.governs)}.
+          <b>Governing check:</b> {typeset(r.governing.text)}.
         </div>
         {r.warnings.length > 0 ? (
           <div class="governs">

@@ -2,6 +2,7 @@ import type { CheckResult, VerdictRow } from "../src/engine/index.ts";
 import { capitalise, life, margin, sig } from "./format.ts";
 import { typeset } from "./math.tsx";
 import type { SheetModel } from "./model.ts";
+import { CRITERION_STATUS_WORDS, STATUS_WORDS } from "../src/present/words.ts";
 import { CRITERION_NAMES } from "./names.ts";
 import { dual, dualText } from "./quantities.ts";
 
@@ -26,14 +27,12 @@ export function Results({ m, num }: { m: SheetModel; num: number }) {
   );
 }
 
-const STATUS_WORDS = { pass: "passes", fail: "fails", info: "for information" } as const;
-
-/** The row the verdict names as governing: the engine writes `governs` as "<title>: <detail>". */
+/** The row the verdict names as governing, as the engine names it. */
 function governs(r: CheckResult, row: VerdictRow): boolean {
-  return r.governs === `${row.title}: ${row.detail}`;
+  return r.governing.rowId === row.id;
 }
 
-function VerdictTable({ r }: { r: CheckResult }) {
+export function VerdictTable({ r }: { r: CheckResult }) {
   return (
     <table class="verdict">
       <colgroup>
@@ -140,13 +139,6 @@ function PrincipalResults({ m, num }: { m: SheetModel; num: string }) {
   );
 }
 
-const CRITERION_STATUS = {
-  ok: "",
-  "no-answer": "mean beyond the criterion's range",
-  "no-damage": "never in tension",
-  unlimited: "below the endurance limit",
-} as const;
-
 /** All seven mean-stress criteria on the same cycle, so a reader sees how far the verdict leans on the choice. */
 function CriteriaTable({ m, num }: { m: SheetModel; num: string }) {
   const f = m.result.fatigue;
@@ -182,7 +174,7 @@ function CriteriaTable({ m, num }: { m: SheetModel; num: string }) {
               <td class="n">{life(c.life_cycles, "")}</td>
               <td class="n">{life(c.allowableLife_cycles, "")}</td>
               <td class="n">{sig(c.damage, 3)}</td>
-              <td class="note">{CRITERION_STATUS[c.status]}</td>
+              <td class="note">{CRITERION_STATUS_WORDS[c.status]}</td>
             </tr>
           ))}
         </tbody>

@@ -10,7 +10,7 @@ import { groupSteps } from "./stepGroups.ts";
  * right-hand column, and the published source beneath.
  */
 export function Calculation({ m, num }: { m: SheetModel; num: number }) {
-  const groups = groupSteps(m.result.steps);
+  const groups = groupSteps(m.result.steps, m.result.sections);
   return (
     <section class="calc">
       <h2>

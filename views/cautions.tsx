@@ -1,34 +1,31 @@
+import { CAUTION_SHORT, CAUTIONS, CAUTIONS_ALWAYS } from "../src/present/words.ts";
+
 /**
- * The cautions, in plain words. The full text heads every page; the short form sits under the
- * verdict, so no result is ever shown without it.
+ * The cautions, in plain words (src/present/words.ts, the same text as the sheet's). The
+ * ones no result may be shown without head every page; the rest fold out. The short form sits
+ * under the verdict, so no result is ever shown without it.
  */
 export function Cautions() {
   return (
     <aside class="cautions" aria-labelledby="h-cautions">
       <h2 id="h-cautions">Before you rely on any result</h2>
       <ul>
-        <li>
-          This is a <strong>screening check</strong> on membrane theory and published methods. It is{" "}
-          <strong>not a code-compliance certificate</strong>.
-        </li>
-        <li>
-          The <strong>governing pressure-vessel or airworthiness code</strong>, qualified test evidence, and review and sign-off by a{" "}
-          <strong>licensed or authorized engineer</strong> decide whether the item is fit for service.
-        </li>
-        <li>
-          Material values in the library are <strong>typical</strong>, not design allowables:{" "}
-          <strong>verify them against certified data</strong>.
-        </li>
+        {CAUTIONS.slice(0, CAUTIONS_ALWAYS).map((c) => (
+          <li>{c}</li>
+        ))}
       </ul>
+      <details>
+        <summary>What else lies outside this check</summary>
+        <ul>
+          {CAUTIONS.slice(CAUTIONS_ALWAYS).map((c) => (
+            <li>{c}</li>
+          ))}
+        </ul>
+      </details>
     </aside>
   );
 }
 
 export function CautionStrip() {
-  return (
-    <p class="caution-strip">
-      Screening check only — not a code-compliance certificate. The governing code and a licensed or authorized engineer decide. Material
-      values are typical: verify against certified data.
-    </p>
-  );
+  return <p class="caution-strip">{CAUTION_SHORT}</p>;
 }

@@ -13,6 +13,7 @@ import { modifyingFactors, VALID_LIFE } from "./sn.ts";
 import { solveFor } from "./solvers.ts";
 import { normalQuantile } from "./special.ts";
 import { fmt, step, type Step } from "./step.ts";
+import { inSheetOrder } from "./sections.ts";
 import { verdictTable } from "./verdict.ts";
 import { ENGINE_VERSION } from "./version.ts";
 
@@ -63,7 +64,7 @@ export function runCheck(input: ResolvedCheck): CheckResult {
   const t = input.shell.thickness_mm;
   const e = evaluate(ctx, t, 1, criterion);
   steps.push(...evaluationSteps(ctx, e, criterion));
-  warnings.push(...e.conc.warnings, ...e.notch.warnings, ...validityWarnings(ctx, e));
+  warnings.push(...e.conc.warnings, ...e.notch.warnings, ...(e.governing.welded?.warnings ?? []), ...validityWarnings(ctx, e));
 
   const criteria = input.fatigue.curve === "welded" ? [] : compareCriteria(ctx, e);
 
@@ -74,6 +75,7 @@ export function runCheck(input: ResolvedCheck): CheckResult {
     title: input.title,
     verdict: "pass",
     governs: "",
+    governing: { rowId: "static", text: "" },
     load: { pressureMax_MPa: load.max_MPa, pressureMin_MPa: load.min_MPa, source: load.source },
     membrane: {
       theory: e.theory,
@@ -128,6 +130,7 @@ export function runCheck(input: ResolvedCheck): CheckResult {
     },
     lifeVsThickness: lifeVsThickness(ctx, t),
     verdictTable: [],
+    sections: [],
     material: { id: mat.id, name: mat.name, source: mat.source, typical: mat.id !== undefined },
     steps,
     warnings,
@@ -163,6 +166,10 @@ export function runCheck(input: ResolvedCheck): CheckResult {
   result.verdictTable = table.rows;
   result.verdict = table.verdict;
   result.governs = table.governs;
+  result.governing = table.governing;
+  const ordered = inSheetOrder(result.steps);
+  result.steps = ordered.steps;
+  result.sections = ordered.sections;
   return result;
 }
 

@@ -7,12 +7,12 @@
  * design texts for Goodman, Gerber, Soderberg and ASME elliptic; Dowling for Morrow,
  * Smith–Watson–Topper and Walker).
  */
-import type { MeanStressCriterion } from "../schema/check.ts";
+import { MEAN_STRESS_CRITERIA, type MeanStressCriterion } from "../schema/check.ts";
 
 export type { MeanStressCriterion };
 
-/** Drawing order: the four yield/ultimate lines, then the σ'f and σmax-based ones. */
-export const ALL_CRITERIA: readonly MeanStressCriterion[] = ["goodman", "gerber", "soderberg", "asme-elliptic", "morrow", "swt", "walker"];
+/** Drawing order: the format's list of criteria (the yield/ultimate lines first, then the σmax- and σ'f-based ones). */
+export const ALL_CRITERIA: readonly MeanStressCriterion[] = MEAN_STRESS_CRITERIA;
 
 export interface LineMaterial {
   /** σar: the fully reversed amplitude for the life being drawn, MPa. */

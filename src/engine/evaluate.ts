@@ -59,6 +59,8 @@ export interface CycleOutcome {
   life: number | null;
   status: "ok" | "no-answer" | "no-damage" | "unlimited";
   reason?: string;
+  /** The welded method's own worked steps and warnings (EN 1993-1-9), kept for the sheet. */
+  welded?: { steps: Step[]; warnings: string[] };
 }
 
 export interface Evaluation {
@@ -189,7 +191,14 @@ function cycleOutcome(ctx: Context, criterion: MeanStressCriterion, amplitude: n
       variableAmplitude: spectrum,
       gammaMf: input.fatigue.gammaMf,
     });
-    return { amplitude, mean: m, sigmaAr: amplitude, life: w.life_cycles, status: w.life_cycles === null ? "unlimited" : "ok" };
+    return {
+      amplitude,
+      mean: m,
+      sigmaAr: amplitude,
+      life: w.life_cycles,
+      status: w.life_cycles === null ? "unlimited" : "ok",
+      welded: { steps: w.steps, warnings: w.warnings },
+    };
   }
   const eq = equivalentAmplitude(criterion, amplitude, m, strengths);
   if (eq.sigmaAr === null) return { amplitude, mean: m, sigmaAr: null, life: 0, status: "no-answer", reason: eq.reason };
@@ -384,20 +393,13 @@ export function evaluationSteps(ctx: Context, e: Evaluation, criterion: MeanStre
     } else {
       const k = e.notch.kf * e.unit.hoop * e.scale;
       const lifeOf = (range: number, mean: number) => cycleOutcome(ctx, criterion, (k * range) / 2, k * mean, true).life;
+      // With a welded detail, its design limits (fatigue limit, cut-off) come first: the Miner sum reads each cycle against them.
+      if (g.welded) steps.push(...g.welded.steps.filter((st) => st.id !== "welded-life"));
       steps.push(...minerDamage(load.cycles, lifeOf).steps);
     }
-  } else if (input.fatigue.curve === "welded") {
-    steps.push(
-      step(
-        "life",
-        "Life from the detail-category curve",
-        "N = 2×10⁶·(Δσ_C/(γMf·Δσ))³ above Δσ_D",
-        `Δσ = ${fmt(2 * g.amplitude)} MPa, Δσ_C = ${fmt(input.fatigue.detailCategory_MPa ?? 0)} MPa`,
-        e.life,
-        "cycles",
-        "EN 1993-1-9 §7, Figure 7.1",
-      ),
-    );
+  } else if (g.welded) {
+    // The welded method's own steps: the detail's fatigue limit and the life in its regime.
+    steps.push(...g.welded.steps);
   }
   const sf = input.fatigue.scatterFactor;
   const unit = load.isSpectrum ? "passes" : "cycles";

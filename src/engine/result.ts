@@ -1,5 +1,6 @@
 import type { MeanStressCriterion } from "../schema/check.ts";
 import type { EvidenceResult } from "./evidence.ts";
+import type { Section } from "./sections.ts";
 import type { Step } from "./step.ts";
 
 /** The result document, format "hoopwise.result/1". Keys listed in the check format never change meaning. */
@@ -38,7 +39,10 @@ export interface CheckResult {
   fingerprint: string;
   title?: string;
   verdict: "pass" | "fail";
+  /** What governs, in words: the governing row's title and detail. */
   governs: string;
+  /** The same as a structure, so no face has to find the row by matching the sentence. */
+  governing: { rowId: VerdictRow["id"]; text: string };
   load: { pressureMax_MPa: number; pressureMin_MPa: number; source: "direct" | "altitude" | "history" | "blocks" };
   membrane: {
     theory: "thin" | "thick";
@@ -119,6 +123,9 @@ export interface CheckResult {
   lifeVsThickness: { thickness_mm: number; life_cycles: number | null }[];
   verdictTable: VerdictRow[];
   material: { id?: string; name: string; source: string; typical: boolean };
+  /** The worked steps, in the order of the sheet's sections. */
   steps: Step[];
+  /** The sections the steps fall into, in order: each heading and how many consecutive steps it holds. */
+  sections: Section[];
   warnings: string[];
 }

@@ -6,7 +6,12 @@ import { fmt } from "./step.ts";
  * The verdict fails if any row fails; "info" rows (inspection intervals, leak-before-break)
  * inform without deciding. What governs is the failing row, or else the row with the least reserve.
  */
-export function verdictTable(r: CheckResult): { rows: VerdictRow[]; verdict: "pass" | "fail"; governs: string } {
+export function verdictTable(r: CheckResult): {
+  rows: VerdictRow[];
+  verdict: "pass" | "fail";
+  governs: string;
+  governing: CheckResult["governing"];
+} {
   const rows: VerdictRow[] = [];
   const s = r.static;
   rows.push({
@@ -84,5 +89,6 @@ export function verdictTable(r: CheckResult): { rows: VerdictRow[]; verdict: "pa
     undefined,
   );
   const gov = failing[0] ?? least ?? rows[0];
-  return { rows, verdict: failing.length ? "fail" : "pass", governs: `${gov.title}: ${gov.detail}` };
+  const text = `${gov.title}: ${gov.detail}`;
+  return { rows, verdict: failing.length ? "fail" : "pass", governs: text, governing: { rowId: gov.id, text } };
 }

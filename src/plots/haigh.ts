@@ -5,6 +5,7 @@
  * distance from the others shows how much the verdict leans on that choice.
  */
 import { scaleLinear } from "d3-scale";
+import { CRITERION_LABEL } from "../engine/meanStress.ts";
 import { ALL_CRITERIA, amplitudeOnLine, type LineMaterial, type MeanStressCriterion, zeroAmplitudeMean } from "../engine/constantLife.ts";
 import { formatValue, isFiniteNumber } from "./format.ts";
 import { type Frame, type LegendEntry, makeFrame, notes, OPERATING_LEGEND, operatingPoint } from "./frame.ts";
@@ -39,15 +40,8 @@ const STYLE: Record<MeanStressCriterion, SeriesStyle> = {
 // A broad pale band, unlike every dashed criterion, because it bounds the diagram rather than competing with the lines.
 const YIELD_STYLE: SeriesStyle = { color: "#a3a3a3", dash: DASH.solid, width: 4.5 };
 
-const NAME: Record<MeanStressCriterion, string> = {
-  goodman: "Goodman",
-  gerber: "Gerber",
-  soderberg: "Soderberg",
-  "asme-elliptic": "ASME elliptic",
-  morrow: "Morrow",
-  swt: "Smith–Watson–Topper",
-  walker: "Walker",
-};
+/** Criterion names as the engine words them, so the legend reads like the page and the sheet. */
+const NAME = CRITERION_LABEL;
 
 export function haighDiagram(data: HaighData, opts?: PlotOptions): string {
   const u = displayUnits(opts);

@@ -47,8 +47,9 @@ describe("numbers on the sheet", () => {
     expect(sig(9.427974509167368e-8)).toBe("9.428 × 10⁻⁸");
     expect(sig(null)).toBe("—");
     expect(life(null)).toBe("unlimited");
-    expect(margin(5.1344)).toBe("+5.13");
-    expect(margin(-0.25)).toBe("−0.25");
+    // One way to show a reserve on every face: a signed percentage (src/present/numbers.ts).
+    expect(margin(5.1344)).toBe("+513 %");
+    expect(margin(-0.25)).toBe("−25 %");
   });
 
   it("prints a sign-off time in UTC and anything else as given", () => {

@@ -1,13 +1,7 @@
 import type { CheckResult } from "../../src/engine/index.ts";
 import type { Units } from "../../src/schema/units.ts";
+import { CRITERION_STATUS_WORDS } from "../../src/present/words.ts";
 import { cycles, inUnits, sig } from "../format.ts";
-
-const STATUS_WORDS = {
-  ok: "",
-  "no-answer": "no answer: the mean stress reaches the strength this criterion uses",
-  "no-damage": "no damage: the cycle never reaches tension",
-  unlimited: "unlimited: below the endurance limit",
-} as const;
 
 /** All seven mean-stress criteria worked on the same cycle, so the user sees how much the verdict leans on the choice. */
 export function CriteriaTable({ result, units }: { result: CheckResult; units: Units }) {
@@ -48,7 +42,7 @@ export function CriteriaTable({ result, units }: { result: CheckResult; units: U
                       <td class="num">{sig(c.damage, 3)}</td>
                     </>
                   ) : (
-                    <td colspan={3}>{STATUS_WORDS[c.status]}</td>
+                    <td colspan={3}>{CRITERION_STATUS_WORDS[c.status]}</td>
                   )}
                 </tr>
               ))}

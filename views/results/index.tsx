@@ -31,7 +31,7 @@ export function ResultDetails({ v }: { v: ResultView }) {
   return (
     <>
       <CriteriaTable result={v.result} units={v.units} />
-      <Steps steps={v.result.steps} />
+      <Steps steps={v.result.steps} sections={v.result.sections} />
       <Share link={v.link} />
     </>
   );

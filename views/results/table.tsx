@@ -1,7 +1,7 @@
 import type { CheckResult } from "../../src/engine/index.ts";
+import { engineText } from "../../src/present/numbers.ts";
+import { STATUS_WORDS } from "../../src/present/words.ts";
 import { margin } from "../format.ts";
-
-const STATUS = { pass: "passes", fail: "fails", info: "note" } as const;
 
 /** Every check the verdict weighs, with its demand against capacity in words. */
 export function VerdictTable({ result }: { result: CheckResult }) {
@@ -23,9 +23,9 @@ export function VerdictTable({ result }: { result: CheckResult }) {
               <tr class={`row-${r.status}`}>
                 <th scope="row">{r.title}</th>
                 <td>
-                  <span class={`status status-${r.status}`}>{STATUS[r.status]}</span>
+                  <span class={`status status-${r.status}`}>{STATUS_WORDS[r.status]}</span>
                 </td>
-                <td>{r.detail}</td>
+                <td>{engineText(r.detail)}</td>
                 <td class="num">{margin(r.margin)}</td>
               </tr>
             ))}

@@ -1,9 +1,11 @@
 import type { CheckResult, VerdictRow } from "../../src/engine/index.ts";
+import { engineText } from "../../src/present/numbers.ts";
+import { VERDICT_WORDS } from "../../src/present/words.ts";
 import { cycles, margin, sig } from "../format.ts";
 
-/** The row the verdict rests on: the engine's `governs` text starts with that row's title. */
+/** The row the verdict rests on, as the engine names it. */
 export function governingRow(result: CheckResult): VerdictRow | undefined {
-  return result.verdictTable.find((r) => r.status !== "info" && result.governs.startsWith(r.title));
+  return result.verdictTable.find((r) => r.id === result.governing.rowId);
 }
 
 /**
@@ -17,11 +19,11 @@ export function VerdictSummary({ result }: { result: CheckResult }) {
   return (
     <div class={`verdict verdict-${result.verdict}`}>
       <p class="verdict-word">
-        <span class="badge">{result.verdict === "pass" ? "Passes" : "Fails"}</span>
+        <span class="badge">{VERDICT_WORDS[result.verdict]}</span>
         <span class="verdict-title">{result.title ?? "this check"}</span>
       </p>
       <p class="governs">
-        <strong>Governed by</strong> {result.governs}
+        <strong>Governed by</strong> {engineText(result.governing.text)}
         {row && row.margin !== null ? (
           <>
             {" "}

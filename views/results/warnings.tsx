@@ -1,4 +1,5 @@
 import type { CheckResult } from "../../src/engine/index.ts";
+import { capitalise, engineText } from "../../src/present/numbers.ts";
 
 /** The engine's warnings: where a method was used near or past the edge of its validity. */
 export function Warnings({ result }: { result: CheckResult }) {
@@ -8,7 +9,7 @@ export function Warnings({ result }: { result: CheckResult }) {
       <h3 id="h-warnings">Read before relying on this ({result.warnings.length})</h3>
       <ul>
         {result.warnings.map((w) => (
-          <li>{w.charAt(0).toUpperCase() + w.slice(1)}</li>
+          <li>{capitalise(engineText(w))}</li>
         ))}
       </ul>
     </section>

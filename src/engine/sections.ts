@@ -1,0 +1,81 @@
+import type { Step } from "./step.ts";
+
+/**
+ * @module engine/sections
+ * The sections of the calculation, in the order the sheet prints them and a checker redoes
+ * them: load, membrane stresses, static strength, the opening, the notch, the curve, fatigue,
+ * crack growth, test evidence, the solution. The engine decides which section each step belongs
+ * to, so no face keeps its own list; a step that is worked early (the Marin factors of the
+ * fatigue curve, the coupon fit) still prints under its own heading, after the membrane stresses.
+ */
+export const SECTIONS = [
+  "Load",
+  "Membrane stresses",
+  "Static strength",
+  "Stress concentration at the opening",
+  "Local stresses at the notch",
+  "S-N curve from the coupons",
+  "Fatigue life",
+  "Crack growth",
+  "Test evidence",
+  "Solution",
+] as const;
+
+export type SectionHeading = (typeof SECTIONS)[number];
+
+/** Headings by the first word of a step id; a step whose id is not listed stays under the heading before it. */
+const HEADING_OF: Record<string, SectionHeading> = {
+  isa: "Load",
+  differential: "Load",
+  blocks: "Load",
+  rainflow: "Load",
+  slenderness: "Membrane stresses",
+  hoop: "Membrane stresses",
+  axial: "Membrane stresses",
+  radial: "Membrane stresses",
+  von: "Membrane stresses",
+  static: "Static strength",
+  biaxial: "Stress concentration at the opening",
+  kt: "Stress concentration at the opening",
+  notch: "Stress concentration at the opening",
+  kf: "Stress concentration at the opening",
+  peak: "Local stresses at the notch",
+  amplitude: "Local stresses at the notch",
+  mean: "Local stresses at the notch",
+  coupons: "S-N curve from the coupons",
+  marin: "Fatigue life",
+  sigma: "Fatigue life",
+  weld: "Fatigue life",
+  welded: "Fatigue life",
+  life: "Fatigue life",
+  miner: "Fatigue life",
+  passes: "Fatigue life",
+  allowable: "Fatigue life",
+  damage: "Fatigue life",
+  crack: "Crack growth",
+  evidence: "Test evidence",
+  solve: "Solution",
+};
+
+/** One section of the calculation: its heading and how many of the (reordered) steps it holds. */
+export interface Section {
+  heading: SectionHeading;
+  steps: number;
+}
+
+/** The steps in sheet order (stable within a section) and the sections they fall into. */
+export function inSheetOrder(steps: readonly Step[]): { steps: Step[]; sections: Section[] } {
+  let current: SectionHeading = SECTIONS[0];
+  const tagged = steps.map((step, i) => {
+    current = HEADING_OF[step.id.split("-")[0]] ?? current;
+    return { step, i, order: SECTIONS.indexOf(current), heading: current };
+  });
+  tagged.sort((a, b) => a.order - b.order || a.i - b.i);
+  const sections: Section[] = [];
+  for (const t of tagged) {
+    const last = sections[sections.length - 1];
+    if (last && last.heading === t.heading) last.steps += 1;
+    else sections.push({ heading: t.heading, steps: 1 });
+  }
+  return { steps: tagged.map((t) => t.step), sections };
+}

@@ -1,0 +1,127 @@
+/**
+ * @module present/plots
+ * The plots of a result, built once for every face: which plots a check has, what each is
+ * handed, its caption, and the note when the Haigh and S-N plots do not apply. The page and the
+ * sheet only lay the figures out.
+ */
+import type { CheckResult } from "../engine/index.ts";
+import { crackGrowthPlot, haighDiagram, lifeThicknessPlot, type PlotOptions, snCurve, spectrumPlot } from "../plots/index.ts";
+import type { Units } from "../schema/units.ts";
+
+/** What the check was worked at, beyond the result: the material strengths, Walker's γ and the wall thickness. */
+export interface WorkedAt {
+  ultimate_MPa: number;
+  yield_MPa: number;
+  walkerGamma?: number;
+  thickness_mm: number;
+}
+
+export interface Figure {
+  id: "haigh" | "sn" | "thickness" | "crack" | "spectrum";
+  caption: string;
+  /** SVG from src/plots, which escapes every text it draws. */
+  svg: string;
+}
+
+export interface PlotSet {
+  figures: Figure[];
+  /** Why the Haigh and S-N plots are absent, when they are. */
+  note?: string;
+}
+
+/** The plot options of a face: the user's units, and a heading (the sheet captions each plot itself, so gives ""). */
+export function plotOptions(units: Units, title?: string): PlotOptions {
+  return { ...(title !== undefined ? { title } : {}), units: { stress: units.stress, length: units.length } };
+}
+
+/** Every plot the result gives something to draw, with its caption. */
+export function plotInputs(worked: WorkedAt, r: CheckResult, units: Units, face: { title?: string } = {}): PlotSet {
+  const f = r.fatigue;
+  const opts = plotOptions(units, face.title);
+  const singleCycle = f.lifeCountedIn === "cycles";
+  const basquin = f.curve === "basquin";
+  const figures: Figure[] = [];
+  if (basquin && singleCycle && f.equivalentAmplitude_MPa !== null) {
+    figures.push({
+      id: "haigh",
+      caption:
+        "Haigh diagram: the constant-life line of each mean-stress criterion through the same equivalent amplitude, with the local cycle at the notch.",
+      svg: haighDiagram(
+        {
+          operating: { mean_MPa: f.mean_MPa, amplitude_MPa: f.amplitude_MPa },
+          equivalentAmplitude_MPa: f.equivalentAmplitude_MPa,
+          ultimate_MPa: worked.ultimate_MPa,
+          yield_MPa: worked.yield_MPa,
+          fatigueStrengthCoefficient_MPa: f.curveUsed.fatigueStrengthCoefficient_MPa,
+          walkerGamma: worked.walkerGamma,
+          selected: f.criterion,
+        },
+        opts,
+      ),
+    });
+  }
+  if (basquin && singleCycle) {
+    figures.push({
+      id: "sn",
+      caption: "The S-N curve used, with the operating point, the design life and the life the scatter factor asks for.",
+      svg: snCurve(
+        {
+          fatigueStrengthCoefficient_MPa: f.curveUsed.fatigueStrengthCoefficient_MPa,
+          fatigueStrengthExponent: f.curveUsed.fatigueStrengthExponent,
+          enduranceLimit_MPa: f.curveUsed.enduranceLimit_MPa ?? undefined,
+          operating: { equivalentAmplitude_MPa: f.equivalentAmplitude_MPa ?? Number.NaN, life_cycles: f.life_cycles },
+          designLife_cycles: f.designLife_cycles,
+          scatterFactor: f.scatterFactor,
+          allowableLife_cycles: f.allowableLife_cycles,
+        },
+        opts,
+      ),
+    });
+  }
+  if (r.lifeVsThickness.length > 1) {
+    figures.push({
+      id: "thickness",
+      caption: `Fatigue life (${f.lifeCountedIn}) against wall thickness around the value checked; the required life is the design life times the scatter factor.`,
+      svg: lifeThicknessPlot(
+        {
+          points: r.lifeVsThickness,
+          current_mm: worked.thickness_mm,
+          requiredLife_cycles: f.designLife_cycles * f.scatterFactor,
+          minimumThickness_mm: r.solution?.thickness_mm,
+          lifeUnit: f.lifeCountedIn,
+        },
+        opts,
+      ),
+    });
+  }
+  if (r.crack) {
+    figures.push({
+      id: "crack",
+      caption: "Crack size against pressure cycles (Paris law), with the critical size and the inspections.",
+      svg: crackGrowthPlot(
+        {
+          curve: r.crack.curve,
+          critical_mm: r.crack.critical_mm,
+          inspectionInterval_cycles: r.crack.inspectionInterval_cycles,
+          initial_mm: r.crack.initial_mm,
+        },
+        opts,
+      ),
+    });
+  }
+  if (r.spectrum) {
+    figures.push({
+      id: "spectrum",
+      caption:
+        "The counted cycles of one pass, by range of the local stress at the notch, Kf × the nominal hoop stress (rainflow, ASTM E1049).",
+      svg: spectrumPlot({ cycles: r.spectrum.cycles }, opts),
+    });
+  }
+  const note =
+    basquin && singleCycle
+      ? undefined
+      : basquin
+        ? "No Haigh or S-N plot: they show a single cycle, and this check sums the damage of a spectrum (see the calculation)."
+        : "No Haigh or S-N plot of the material: the welded detail curve is worked in the calculation.";
+  return { figures, note };
+}

@@ -1,0 +1,116 @@
+import { describe, expect, it } from "vitest";
+import { DEMOS, findDemo } from "../../src/demo/index.ts";
+import { checkDocument, type CheckResult } from "../../src/engine/index.ts";
+import { parseCheck } from "../../src/engine/input.ts";
+import { haighDiagram } from "../../src/plots/index.ts";
+import { CRITERION_NAMES } from "../../src/present/words.ts";
+import { MEAN_STRESS_CRITERIA } from "../../src/schema/check.ts";
+import { SI_UNITS } from "../../src/schema/units.ts";
+import { sheetHtml } from "../../src/sheet/sheet.ts";
+import { createApp } from "../../src/web/app.ts";
+import { pageRoutes } from "../../src/web/page.tsx";
+import { VerdictSummary } from "../../views/results/verdict.tsx";
+import { VerdictTable } from "../../templates/results.tsx";
+
+/**
+ * The page and the sheet read one result, so they must say the same thing. Each case here is a
+ * drift the two faces once had; the property under test is agreement between the faces (or with
+ * the engine's own structure), not a reference value.
+ */
+const app = createApp({ mounts: [pageRoutes()] });
+const page = async (demo: string) => (await app.request(`/?demo=${demo}`)).text();
+const sheet = (doc: unknown) => {
+  const out = sheetHtml(doc, { now: new Date("2026-01-01T00:00:00Z") });
+  if (!out.ok) throw new Error(JSON.stringify(out.errors));
+  return out.html;
+};
+const strip = (html: string) => html.replace(/<[^>]+>/g, "").trim();
+
+describe("page and sheet agree", () => {
+  it.each(DEMOS.map((d) => d.id))("%s: every verdict row shows the same reserve on the page and on the sheet", async (id) => {
+    const doc = findDemo(id)!.document;
+    const table = (html: string, start: string) => html.slice(html.indexOf(start), html.indexOf("</table>", html.indexOf(start)));
+    const onPage = [...table(await page(id), 'class="verdict-table"').matchAll(/<td class="num">([^<]*)<\/td>/g)].map((m) => m[1]);
+    const onSheet = [...table(sheet(doc), '<table class="verdict">').matchAll(/<td class="n">([^<]*)<\/td>/g)].map((m) => m[1]);
+    expect(onPage.length).toBeGreaterThan(1);
+    expect(onSheet).toEqual(onPage);
+    // A reserve of 0.2345 reads "+23 %" on both (one formatter, src/present/numbers.ts).
+    expect(onPage.some((t) => /^[+−]\d[\d\u2009]* %$|^over/.test(t))).toBe(true);
+  });
+
+  it("the receiver's life-against-thickness axis counts passes on the page as on the sheet", async () => {
+    const axis = (html: string) => /class="hoopwise-plot plot-life-thickness"[^>]*aria-label="([^"]*)"/.exec(html)?.[1];
+    const receiver = findDemo("receiver")!.document;
+    const onPage = axis(await page("receiver"));
+    const onSheet = axis(sheet(receiver));
+    expect(onPage).toBeDefined();
+    expect(onPage).toMatch(/passes/);
+    expect(onSheet).toBe(onPage);
+  });
+
+  it("both faces mark the row the engine names as governing, without reading its sentence", () => {
+    const run = checkDocument(findDemo("cabin")!.document);
+    if (!run.ok) throw new Error("cabin demo must run");
+    // A paraphrased sentence must not move the mark: only governing.rowId decides it.
+    const r: CheckResult = { ...run.result, governs: "something else entirely", governing: { rowId: "static", text: "Static strength" } };
+    const onSheet = String(VerdictTable({ r }));
+    expect(/<tr class="governs"><td>([^<]*)/.exec(onSheet)?.[1]).toMatch(/^Static strength/);
+    const onPage = String(VerdictSummary({ result: r }));
+    // The page's headline gives the governing row's reserve: the static one.
+    expect(onPage).toContain(`reserve +${Math.round(r.static.margin * 100)}`);
+  });
+
+  it("the cautions say the same on the page and the sheet", async () => {
+    const html = await page("cabin");
+    const printed = strip(sheet(findDemo("cabin")!.document));
+    for (const sentence of ["not a code-compliance certificate", "licensed or authorized engineer", "verify them against certified data"]) {
+      expect(html).toContain(sentence);
+      expect(printed).toContain(sentence);
+    }
+  });
+});
+
+describe("one list of criterion names", () => {
+  it("the Haigh legend names every criterion as the engine and the form do", () => {
+    const svg = haighDiagram(
+      {
+        operating: { mean_MPa: 40, amplitude_MPa: 40 },
+        equivalentAmplitude_MPa: 50,
+        ultimate_MPa: 480,
+        yield_MPa: 345,
+        fatigueStrengthCoefficient_MPa: 900,
+        walkerGamma: 0.5,
+      },
+      { units: SI_UNITS },
+    );
+    const label = /aria-label="[^"]*lines: ([^"]*)"/.exec(svg)?.[1];
+    expect(label?.split(", ")).toEqual(MEAN_STRESS_CRITERIA.map((c) => CRITERION_NAMES[c]));
+  });
+});
+
+describe("the engine orders the calculation", () => {
+  it("with Marin factors the sheet prints the membrane stresses before the fatigue life", () => {
+    const doc = structuredClone(findDemo("receiver")!.document) as Record<string, any>;
+    doc.fatigue = { meanStress: "goodman", designLife_cycles: 20, modifiers: { surface: "machined" } };
+    expect(parseCheck(doc).ok).toBe(true);
+    const headings = [...sheet(doc).matchAll(/<h3>3\.\d+ ([^<]+)<\/h3>/g)].map((m) => m[1]);
+    expect(headings.indexOf("Membrane stresses")).toBeGreaterThanOrEqual(0);
+    expect(headings.indexOf("Membrane stresses")).toBeLessThan(headings.indexOf("Fatigue life"));
+    // Each heading once: a section is never split around another.
+    expect(new Set(headings).size).toBe(headings.length);
+  });
+
+  it("the welded method keeps its own steps and warnings", () => {
+    const doc = structuredClone(findDemo("receiver")!.document) as Record<string, any>;
+    doc.pressure = { max_MPa: 1.1, min_MPa: 0 };
+    doc.fatigue = { ...doc.fatigue, detailCategory_MPa: 70, designLife_cycles: 2000 };
+    const run = checkDocument(doc);
+    if (!run.ok) throw new Error(JSON.stringify(run.errors));
+    const ids = run.result.steps.map((s) => s.id);
+    // EN 1993-1-9 §7.1: the design fatigue limit and the slope-3 life of the detail, as welded.ts works them.
+    expect(ids).toContain("welded-fatigue-limit");
+    expect(ids).toContain("welded-life");
+    // 70 MPa is not a detail category of EN 1993-1-9 Table 8.x; welded.ts warns, and the warning must reach the result.
+    expect(run.result.warnings.some((w) => /not one of the EN 1993-1-9 detail categories/.test(w))).toBe(true);
+  });
+});
