@@ -1,5 +1,6 @@
 import { serve } from "@hono/node-server";
 import { closeSharedPool } from "./pdf/browser.ts";
+import { closeSharedWorkPool, sharedPool } from "./pool/index.ts";
 import { openStore } from "./store/index.ts";
 import { seedDemos } from "./web/seed.ts";
 import { wholeApp } from "./web/whole.ts";
@@ -13,6 +14,7 @@ const port = Number(process.env.PORT ?? 8080);
 const store = openStore();
 const seeded = seedDemos(store);
 const app = wholeApp(store);
+sharedPool();
 
 const server = serve({ fetch: app.fetch, hostname: host, port }, (info) => {
   if (seeded) console.log(`Saved ${seeded} demo checks in ${process.env.HOOPWISE_DB ?? "data/hoopwise.db"}`);
@@ -28,6 +30,7 @@ function shutdown(signal: string) {
   force.unref();
   server.close(async () => {
     await closeSharedPool().catch(() => undefined);
+    await closeSharedWorkPool().catch(() => undefined);
     store.close();
     process.exit(0);
   });

@@ -1,11 +1,14 @@
 import { Hono } from "hono";
 import { secureHeaders } from "hono/secure-headers";
+import type { WorkPool } from "../pool/index.ts";
 import { checkApi, errorsDoc } from "./api.ts";
 import { refuseCrossSite } from "./crossSite.ts";
 
 export interface AppOptions {
   /** Extra sub-apps mounted at the root (sheet, records, page). */
   mounts?: Hono[];
+  /** Worker threads for large check bodies; the process's shared pool unless given. */
+  pool?: WorkPool;
 }
 
 /**
@@ -36,7 +39,7 @@ export function createApp(opts: AppOptions = {}): Hono {
   );
   app.use("*", refuseCrossSite());
   app.get("/healthz", (c) => c.json({ status: "ok" }));
-  app.route("/", checkApi());
+  app.route("/", checkApi({ pool: opts.pool }));
   for (const m of opts.mounts ?? []) app.route("/", m);
   app.notFound((c) => c.json(errorsDoc("(url)", `no such page: ${c.req.method} ${c.req.path}`), 404));
   app.onError((err, c) => {

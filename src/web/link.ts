@@ -1,5 +1,5 @@
 import { deflateRawSync, inflateRawSync } from "node:zlib";
-import { MAX_JSON_DEPTH, tooDeepAt } from "./depth.ts";
+import { MAX_JSON_DEPTH, tooDeepAt } from "../schema/depth.ts";
 
 /**
  * A link that reproduces a check: the check JSON, deflated (raw DEFLATE, RFC 1951) and written

@@ -14,7 +14,7 @@ import { MAX_JSON_BYTES } from "./api.ts";
 import { sheetResponse } from "./sheet.ts";
 import { assetRoutes } from "./assets.ts";
 import { readForm, readPosted, SPARE_BLOCK_ROWS, valueAt, writeForm, type FormValues, type Posted } from "./form/index.ts";
-import { MAX_JSON_DEPTH, tooDeepAt } from "./depth.ts";
+import { MAX_JSON_DEPTH, tooDeepAt } from "../schema/depth.ts";
 import { unshownParts } from "./form/carry.ts";
 import { decodeCheck, encodeCheck } from "./link.ts";
 import { unitsFrom, type Units } from "../schema/units.ts";

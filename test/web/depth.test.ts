@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { MAX_JSON_DEPTH, tooDeepAt } from "../../src/web/depth.ts";
+import { MAX_JSON_DEPTH, tooDeepAt } from "../../src/schema/depth.ts";
 
 /** `depth` arrays, one inside the next, around a number; built in a loop so no recursion is needed. */
 function nested(depth: number): unknown {

@@ -1,0 +1,71 @@
+import { availableParallelism } from "node:os";
+import { Piscina } from "piscina";
+import type { CheckAnswer } from "./work.ts";
+import type { Task } from "./worker.ts";
+
+export { checkText, checkValue, type CheckAnswer } from "./work.ts";
+
+/**
+ * A pool of worker threads (node:worker_threads through piscina) for work too big for the request
+ * thread: a long pressure history is parsed, validated, counted and checked there, so the event loop
+ * keeps answering small requests meanwhile. The workers load TypeScript the way the main thread does
+ * (tsx), whatever flags the parent process was started with.
+ */
+export interface WorkPool {
+  /** Check a document given as text or as UTF-8 bytes (the bytes' buffer is moved to the worker, not copied). */
+  check(doc: string | Uint8Array): Promise<CheckAnswer>;
+  readonly threads: number;
+  close(): Promise<void>;
+}
+
+export interface PoolOptions {
+  /** Worker threads; one per core by default. */
+  threads?: number;
+  /** Tasks that may wait for a thread; beyond it `check` rejects with PoolBusy. */
+  maxQueue?: number;
+}
+
+/** Every thread is busy and the queue is full: the caller answers 503 and asks to come back. */
+export class WorkPoolBusy extends Error {}
+
+const WORKER = new URL("./worker.ts", import.meta.url).href;
+
+export function createPool(opts: PoolOptions = {}): WorkPool {
+  const threads = Math.max(1, opts.threads ?? availableParallelism());
+  const piscina = new Piscina<Task, CheckAnswer>({
+    filename: WORKER,
+    minThreads: threads,
+    maxThreads: threads,
+    idleTimeout: 30_000,
+    maxQueue: opts.maxQueue ?? 64,
+    execArgv: ["--import", "tsx"],
+  });
+  return {
+    threads,
+    async check(doc) {
+      try {
+        if (typeof doc === "string") return await piscina.run({ kind: "check", text: doc });
+        const own = doc.byteOffset === 0 && doc.byteLength === doc.buffer.byteLength ? doc : doc.slice();
+        return await piscina.run({ kind: "check-bytes", bytes: own }, { transferList: [own.buffer as ArrayBuffer] });
+      } catch (err) {
+        if (/queue is at limit/i.test((err as Error).message)) throw new WorkPoolBusy((err as Error).message);
+        throw err;
+      }
+    },
+    close: () => piscina.destroy(),
+  };
+}
+
+let shared: WorkPool | undefined;
+
+/** The process's one pool, started on first use. */
+export function sharedPool(): WorkPool {
+  shared ??= createPool();
+  return shared;
+}
+
+export async function closeSharedWorkPool(): Promise<void> {
+  const p = shared;
+  shared = undefined;
+  await p?.close();
+}

@@ -1,0 +1,19 @@
+/**
+ * The worker thread's entry: piscina calls the default export with one task. Only text crosses the
+ * thread boundary (the document in, the answer out), so nothing is cloned field by field.
+ */
+import "./yield.ts";
+import { checkText, type CheckAnswer } from "./work.ts";
+
+export type Task = { kind: "check"; text: string } | { kind: "check-bytes"; bytes: Uint8Array };
+
+const utf8 = new TextDecoder();
+
+export default function run(task: Task): CheckAnswer {
+  switch (task.kind) {
+    case "check":
+      return checkText(task.text);
+    case "check-bytes":
+      return checkText(utf8.decode(task.bytes));
+  }
+}
