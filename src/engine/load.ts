@@ -27,7 +27,10 @@ export function resolveLoad(p: ResolvedCheck["pressure"]): Load {
     const counted = countHistory(p.history_MPa);
     const cycles = counted.cycles;
     const total = cycles.reduce((s, c) => s + c.count, 0);
-    const binned = counted.binWidth > 0 ? `, gathered in bins of ${fmt(counted.binWidth)} MPa (range and mean rounded up)` : "";
+    const binned =
+      counted.binWidth > 0
+        ? `, reduced to sorted range–mean classes ${fmt(counted.binWidth)} MPa wide: each range and mean is rounded up to its class edge, by less than ${fmt(counted.binWidth)} MPa (conservative)`
+        : "";
     return {
       source: "history",
       max_MPa: counted.max,

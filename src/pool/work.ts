@@ -1,4 +1,5 @@
 import { checkDocument } from "../engine/index.ts";
+import { parseJsonText } from "../schema/jsonText.ts";
 import { MAX_JSON_DEPTH, tooDeepAt } from "../schema/depth.ts";
 
 /**
@@ -17,7 +18,7 @@ const errorsText = (path: string, message: string) => JSON.stringify({ errors: [
 export function checkText(text: string): CheckAnswer {
   let value: unknown;
   try {
-    value = JSON.parse(text);
+    value = parseJsonText(text);
   } catch (err) {
     return { status: 400, body: errorsText("(document)", `the body is not valid JSON: ${(err as Error).message}`) };
   }
