@@ -1,3 +1,4 @@
+import { batchCommand } from "./cli/batch.ts";
 import { checkCommand } from "./cli/check.ts";
 import { materialsCommand, schemaCommand } from "./cli/info.ts";
 import type { Io } from "./cli/io.ts";
@@ -10,6 +11,9 @@ Usage: npm run -s cli -- <command> [options]
 
 Commands:
   check FILE|-                 run a check; prints the result JSON (exit 0), or the errors (exit 2)
+  batch FILE|- [--workers N]   one check per line (NDJSON) in, one result or errors document per line
+                               out, in input order; N worker threads (default one per core); exit 2
+                               if any line had errors
   sheet FILE|- --out SHEET.pdf [--paper A4|Letter]
                                print the check sheet (PDF, with the input embedded); needs Chromium
   verify SHEET.pdf [--json]    recompute a sheet from its embedded input; exit 0 when it still matches
@@ -27,6 +31,7 @@ type Command = (args: string[], io: Io) => number | Promise<number>;
 
 const COMMANDS: Record<string, Command> = {
   check: checkCommand,
+  batch: batchCommand,
   sheet: sheetCommand,
   verify: verifyCommand,
   signer: (args, io) => {

@@ -14,6 +14,8 @@ export { checkText, checkValue, type CheckAnswer } from "./work.ts";
 export interface WorkPool {
   /** Check a document given as text or as UTF-8 bytes (the bytes' buffer is moved to the worker, not copied). */
   check(doc: string | Uint8Array): Promise<CheckAnswer>;
+  /** Several documents in one hand-over to a thread; the answers in the same order. */
+  checkMany(texts: string[]): Promise<CheckAnswer[]>;
   readonly threads: number;
   close(): Promise<void>;
 }
@@ -35,12 +37,13 @@ const WORKER = new URL("./worker.ts", import.meta.url).href;
 
 export function createPool(opts: PoolOptions = {}): WorkPool {
   const threads = Math.max(1, opts.threads ?? availableParallelism());
-  const piscina = new Piscina<Task, CheckAnswer>({
+  const piscina = new Piscina<Task, CheckAnswer | CheckAnswer[]>({
     filename: WORKER,
     minThreads: threads,
     maxThreads: threads,
     idleTimeout: 30_000,
     maxQueue: opts.maxQueue ?? 64,
+    concurrentTasksPerWorker: 1,
     execArgv: ["--import", "tsx"],
     // A long check makes much short-lived garbage (a number's text, a slice of the history); a small
     // young generation collects it often instead of growing to 48 MiB, which keeps a worker's peak
@@ -51,9 +54,17 @@ export function createPool(opts: PoolOptions = {}): WorkPool {
     threads,
     async check(doc) {
       try {
-        if (typeof doc === "string") return await piscina.run({ kind: "check", text: doc });
+        if (typeof doc === "string") return (await piscina.run({ kind: "check", text: doc })) as CheckAnswer;
         const own = doc.byteOffset === 0 && doc.byteLength === doc.buffer.byteLength ? doc : doc.slice();
-        return await piscina.run({ kind: "check-bytes", bytes: own }, { transferList: [own.buffer as ArrayBuffer] });
+        return (await piscina.run({ kind: "check-bytes", bytes: own }, { transferList: [own.buffer as ArrayBuffer] })) as CheckAnswer;
+      } catch (err) {
+        if (/queue is at limit/i.test((err as Error).message)) throw new WorkPoolBusy((err as Error).message);
+        throw err;
+      }
+    },
+    async checkMany(texts) {
+      try {
+        return (await piscina.run({ kind: "check-many", texts })) as CheckAnswer[];
       } catch (err) {
         if (/queue is at limit/i.test((err as Error).message)) throw new WorkPoolBusy((err as Error).message);
         throw err;

@@ -15,12 +15,13 @@ export interface CheckAnswer {
 
 const errorsText = (path: string, message: string) => JSON.stringify({ errors: [{ path, message }] });
 
-export function checkText(text: string): CheckAnswer {
+/** `what` names the text in the message when it is not JSON ("the body", "the line"). */
+export function checkText(text: string, what = "the body"): CheckAnswer {
   let value: unknown;
   try {
     value = parseJsonText(text);
   } catch (err) {
-    return { status: 400, body: errorsText("(document)", `the body is not valid JSON: ${(err as Error).message}`) };
+    return { status: 400, body: errorsText("(document)", `${what} is not valid JSON: ${(err as Error).message}`) };
   }
   return checkValue(value);
 }

@@ -5,15 +5,21 @@
 import "./yield.ts";
 import { checkText, type CheckAnswer } from "./work.ts";
 
-export type Task = { kind: "check"; text: string } | { kind: "check-bytes"; bytes: Uint8Array };
+export type Task =
+  | { kind: "check"; text: string }
+  | { kind: "check-bytes"; bytes: Uint8Array }
+  /** Several small documents at once (a batch run): one hand-over to the thread for all of them. */
+  | { kind: "check-many"; texts: string[] };
 
 const utf8 = new TextDecoder();
 
-export default function run(task: Task): CheckAnswer {
+export default function run(task: Task): CheckAnswer | CheckAnswer[] {
   switch (task.kind) {
     case "check":
       return checkText(task.text);
     case "check-bytes":
       return checkText(utf8.decode(task.bytes));
+    case "check-many":
+      return task.texts.map((t) => checkText(t, "the line"));
   }
 }

@@ -5,9 +5,9 @@ import { parseJsonText } from "../../src/schema/jsonText.ts";
 /** A JSON number token as people and loggers write them: signs, leading zeros after the point, exponents, long mantissas. */
 const numberToken = fc.oneof(
   fc.double({ noNaN: true, noDefaultInfinity: true }).map((x) => JSON.stringify(x)),
-  fc.tuple(fc.boolean(), fc.nat(99999), fc.nat(999999), fc.integer({ min: -30, max: 30 })).map(
-    ([neg, whole, frac, exp]) => `${neg ? "-" : ""}${whole}.${String(frac).padStart(6, "0")}e${exp}`,
-  ),
+  fc
+    .tuple(fc.boolean(), fc.nat(99999), fc.nat(999999), fc.integer({ min: -30, max: 30 }))
+    .map(([neg, whole, frac, exp]) => `${neg ? "-" : ""}${whole}.${String(frac).padStart(6, "0")}e${exp}`),
   fc.tuple(fc.nat(9), fc.stringMatching(/^[0-9]{1,22}$/)).map(([w, f]) => `${w}.${f}`),
   fc.constantFrom("0", "-0", "1E5", "2e-7", "0.1", "123456789012345678", "5e-324", "1.7976931348623157e308"),
 );
