@@ -33,6 +33,10 @@ export function runCheck(input: ResolvedCheck): CheckResult {
     );
   }
   steps.push(...load.steps);
+  if (load.gate && load.gate.removed > 0)
+    warnings.push(
+      `the hysteresis gate of ${fmt(load.gate.gate_MPa)} MPa removed ${load.gate.removed} reversals of the history: the damage of ripples below the gate is not counted`,
+    );
 
   const mat = input.material;
   let fit: ReturnType<typeof fitCoupons> | undefined;

@@ -1,6 +1,7 @@
 import type { ResolvedCheck } from "./input.ts";
 import { cabinDifferential } from "./atmosphere.ts";
-import { countHistory } from "./rainflowMatrix.ts";
+import { InputError } from "./errors.ts";
+import { countHistory, gateHistory } from "./rainflowMatrix.ts";
 import { fmt, step, type Step } from "./step.ts";
 
 /** One pressure cycle (MPa) with how many times it occurs in one pass of the loading. */
@@ -18,13 +19,22 @@ export interface Load {
   cycles: PressureCycle[];
   isSpectrum: boolean;
   historyPoints?: number;
+  /** The hysteresis gate applied to a history, and the reversals it removed. */
+  gate?: { gate_MPa: number; removed: number };
   steps: Step[];
 }
 
 /** The pressure loading in MPa, counted into cycles once so solvers can rescale it without recounting. */
 export function resolveLoad(p: ResolvedCheck["pressure"]): Load {
   if (p.history_MPa) {
-    const counted = countHistory(p.history_MPa);
+    const gate = p.gate_MPa ?? 0;
+    const gated = gate > 0 ? gateHistory(p.history_MPa, gate) : undefined;
+    if (gated && gated.series.length < 2)
+      throw new InputError(
+        "pressure.gate_MPa",
+        `the hysteresis gate (${fmt(gate)} MPa) is larger than every range of the history, so no cycle is left to count; lower it`,
+      );
+    const counted = countHistory(gated ? gated.series : p.history_MPa);
     const cycles = counted.cycles;
     const total = cycles.reduce((s, c) => s + c.count, 0);
     const binned =
@@ -38,12 +48,26 @@ export function resolveLoad(p: ResolvedCheck["pressure"]): Load {
       cycles,
       isSpectrum: true,
       historyPoints: p.history_MPa.length,
+      gate: gated ? { gate_MPa: gate, removed: gated.reversalsBefore - gated.reversalsAfter } : undefined,
       steps: [
+        ...(gated
+          ? [
+              step(
+                "hysteresis-gate",
+                "Hysteresis gate ahead of counting (ripples below the gate dropped)",
+                "reversal kept only once p(t) has moved back from it by ≥ Δp_gate",
+                `Δp_gate = ${fmt(gate)} MPa: ${gated.reversalsBefore} reversals → ${gated.reversalsAfter}, ${gated.reversalsBefore - gated.reversalsAfter} removed`,
+                gated.reversalsBefore - gated.reversalsAfter,
+                "reversals removed",
+                "range (hysteresis) gate before rainflow counting, common practice for logged histories (SAE AE-22 Fatigue Design Handbook, ch. 4, from memory); it lowers the damage, so the gate must stay below the smallest cycle that matters",
+              ),
+            ]
+          : []),
         step(
           "rainflow",
           "Rainflow count of the pressure history",
           "cycles = rainflow(p(t))",
-          `${p.history_MPa.length} points → ${cycles.length} distinct cycles, ${fmt(total)} cycles in all${binned}`,
+          `${gated ? `${gated.series.length} gated reversals of ${p.history_MPa.length} points` : `${p.history_MPa.length} points`} → ${cycles.length} distinct cycles, ${fmt(total)} cycles in all${binned}`,
           total,
           "cycles",
           "ASTM E1049-85, §5.4.4 (rainflow counting)",

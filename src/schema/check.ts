@@ -114,6 +114,10 @@ export const pressureSchema = z
         error: "the pressure history may hold at most 5 000 000 points",
       })
       .optional(),
+    gate_MPa: num("the hysteresis gate")
+      .min(0, { error: "the hysteresis gate must be 0 or more" })
+      .max(1e4, { error: "the hysteresis gate must be at most 10 000 MPa" })
+      .optional(),
     blocks: z
       .array(blockSchema, { error: "the blocks must be a list" })
       .min(1, { error: "give at least one block" })
@@ -156,6 +160,13 @@ export const pressureSchema = z
         code: "custom",
         path: ["min_MPa"],
         message: "min_MPa applies only to a single cycle; a history or blocks carry their own minima",
+      });
+    }
+    if (p.gate_MPa !== undefined && !p.history_MPa) {
+      ctx.addIssue({
+        code: "custom",
+        path: ["gate_MPa"],
+        message: "the hysteresis gate filters a pressure history; give history_MPa with it",
       });
     }
     if (p.history_MPa && p.history_MPa.length < 2) {

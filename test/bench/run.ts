@@ -1,6 +1,8 @@
 import os from "node:os";
 import { apiBench } from "./api.ts";
 import { engineBench, rainflowBench } from "./engine.ts";
+import { historyBench } from "./history.ts";
+import { apiVsEngineBench, batchBench } from "./scale.ts";
 
 /**
  * `npm run bench`: every figure as a ratio against a baseline measured in the same run on the
@@ -25,6 +27,33 @@ for (const shape of ["flights", "random"] as const) {
   );
   add(`Rainflow + Miner peak extra resident memory / input bytes (${shape})`, f(r.peakExtraMemory_overInput, 2), "≤ 3");
 }
+
+const h = historyBench();
+add(
+  `Whole check of a ${h.points.toLocaleString("en")}-point history from JSON text / compiled C rainflow + Miner from text (each less a 50-point run)`,
+  h.ratio === null
+    ? `not compared (${h.peerNote}); ${f(h.hoopwise_ms, 0)} ms`
+    : `${f(h.ratio, 2)} (${f(h.hoopwise_ms, 0)} ms / ${f(h.peer_ms ?? NaN, 0)} ms)`,
+  "≤ 3",
+);
+add(
+  "Whole check of that history: peak extra resident memory / input text bytes (worker's young generation)",
+  f(h.memoryOverInput, 2),
+  "≤ 3",
+);
+
+const b = await batchBench();
+add(
+  `Batch (${b.lines} full checks, NDJSON): 2 worker threads / 1 worker thread`,
+  `${f(b.ratio, 2)} (${f(b.twoWorkers_per_s, 0)} / ${f(b.oneWorker_per_s, 0)} checks/s)`,
+  "≥ 1.7 on 2 cores",
+);
+const ae = await apiVsEngineBench();
+add(
+  "JSON API full checks/s (server in its own process, autocannon, 4 connections) / engine in-process on one core",
+  `${f(ae.ratio, 2)} (${f(ae.api_per_s, 0)} / ${f(ae.engine_per_s, 0)} checks/s)`,
+  "≥ 0.8",
+);
 
 const a = await apiBench();
 add(
