@@ -15,6 +15,11 @@ import { jsonOf, send } from "./http.ts";
 import { startServer, type ServerChild } from "./server.ts";
 
 const POINTS = 5_000_000;
+/**
+ * The long check takes a few seconds on a quiet machine of two cores and up to a minute when other
+ * test files run beside it at low priority; past this it counts as hung.
+ */
+const LONG_CHECK_LIMIT_MS = 150_000;
 const P99_GOAL_MS = 50;
 const STRICT = process.env.HOOPWISE_STRICT_LATENCY === "1";
 const JSON_TYPE = { "content-type": "application/json" };
@@ -48,7 +53,7 @@ afterAll(async () => {
 
 describe("nothing blocks the server", () => {
   it(`answers /healthz and a small check at once (goal: 99th percentile within ${P99_GOAL_MS} ms) while a ${POINTS.toLocaleString("en")}-point history is checked`, {
-    timeout: 4 * HANG_LIMIT_MS,
+    timeout: LONG_CHECK_LIMIT_MS + 2 * HANG_LIMIT_MS,
   }, async () => {
     const big = longHistoryDoc(POINTS);
     const small = JSON.stringify(FORMAT_EXAMPLE);
@@ -60,7 +65,7 @@ describe("nothing blocks the server", () => {
     const heavy = send(`${server.base}/api/v1/check`, { method: "POST", headers: JSON_TYPE, body: big }).finally(() => (done = true));
     const health: number[] = [];
     const checks: number[] = [];
-    while (!done && performance.now() - started < 3 * HANG_LIMIT_MS) {
+    while (!done && performance.now() - started < LONG_CHECK_LIMIT_MS) {
       let t = performance.now();
       const h = await send(`${server.base}/healthz`);
       health.push(performance.now() - t);
