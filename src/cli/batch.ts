@@ -55,7 +55,7 @@ export async function batchCommand(args: string[], io: Io): Promise<number> {
     return 2;
   }
 
-  const pool = createPool({ threads: workers, maxQueue: Number.POSITIVE_INFINITY });
+  const pool = createPool({ threads: workers, maxQueue: Number.POSITIVE_INFINITY, yieldToRequests: false });
   try {
     const { invalid } = await runBatch(stream, io, pool);
     return invalid > 0 ? 2 : 0;

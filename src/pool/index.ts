@@ -23,8 +23,10 @@ export interface WorkPool {
 export interface PoolOptions {
   /** Worker threads; one per core by default. */
   threads?: number;
-  /** Tasks that may wait for a thread; beyond it `check` rejects with PoolBusy. */
+  /** Tasks that may wait for a thread; beyond it `check` rejects with WorkPoolBusy. */
   maxQueue?: number;
+  /** Lower the workers' priority below the request thread's (default); a batch run, with no requests to serve, says false. */
+  yieldToRequests?: boolean;
 }
 
 /** Every thread is busy and the queue is full: the caller answers 503 and asks to come back. */
@@ -45,6 +47,7 @@ export function createPool(opts: PoolOptions = {}): WorkPool {
     maxQueue: opts.maxQueue ?? 64,
     concurrentTasksPerWorker: 1,
     execArgv: ["--import", "tsx"],
+    workerData: { yieldToRequests: opts.yieldToRequests !== false },
     // A long check makes much short-lived garbage (a number's text, a slice of the history); a small
     // young generation collects it often instead of growing to 48 MiB, which keeps a worker's peak
     // memory near the size of the document it works.

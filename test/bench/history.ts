@@ -80,11 +80,30 @@ int main(int argc, char **argv) {
 }
 `;
 
-function wallMs(cmd: string, args: string[]): number {
+/** Wall and CPU time (user + system, from the shell's `times`) of one run of a program, in ms. */
+function runMs(cmd: string, args: string[]): { wall: number; cpu: number } {
   const t = performance.now();
-  const r = spawnSync(cmd, args, { stdio: ["ignore", "pipe", "pipe"] });
+  const script = `"$0" "$@" > /dev/null || exit 1; times`;
+  const r = spawnSync("bash", ["-c", script, cmd, ...args], { encoding: "utf8" });
+  const wall = performance.now() - t;
   if (r.status !== 0) throw new Error(`${cmd} failed: ${r.stderr}`);
-  return performance.now() - t;
+  // `times` prints the shell's own line, then its children's: "0m0.123s 0m0.004s".
+  const child = r.stdout.trim().split("\n").at(-1) ?? "";
+  const secs = [...child.matchAll(/(\d+)m([\d.]+)s/g)].map((m) => Number(m[1]) * 60 + Number(m[2]));
+  return { wall, cpu: 1000 * secs.reduce((a, b) => a + b, 0) };
+}
+
+/** CPU time of one call in this process (user + system), in ms: the median of `runs`. */
+function cpuMs(fn: () => void, runs: number, warmup: number): number {
+  for (let i = 0; i < warmup; i++) fn();
+  const t: number[] = [];
+  for (let i = 0; i < runs; i++) {
+    const c = process.cpuUsage();
+    fn();
+    const d = process.cpuUsage(c);
+    t.push((d.user + d.system) / 1000);
+  }
+  return median(t);
 }
 
 const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
@@ -108,6 +127,7 @@ export function historyBench(points = 1_000_000, runs = 5) {
     if (a.status !== 200) throw new Error(`the long-history check answered ${a.status}: ${a.body.slice(0, 300)}`);
   };
   const hoopwise_ms = medianMs(() => check(bigText), runs, 1) - medianMs(() => check(smallText), 20, 5);
+  const hoopwiseCpu_ms = cpuMs(() => check(bigText), runs, 0) - cpuMs(() => check(smallText), 20, 5);
 
   const dir = mkdtempSync(join(tmpdir(), "hoopwise-bench-"));
   try {
@@ -115,6 +135,7 @@ export function historyBench(points = 1_000_000, runs = 5) {
     writeFileSync(docFile, bigText);
     const memory = memoryOverInput(docFile);
     let peer_ms: number | null = null;
+    let peerCpu_ms: number | null = null;
     let peerNote = "skipped: no C compiler (cc) on this machine";
     const cc = spawnSync("cc", ["--version"], { stdio: "ignore" });
     if (cc.status === 0) {
@@ -123,16 +144,27 @@ export function historyBench(points = 1_000_000, runs = 5) {
       execFileSync("cc", ["-O2", "-o", exe, join(dir, "peer.c"), "-lm"]);
       writeFileSync(join(dir, "big.txt"), big.join("\n"));
       writeFileSync(join(dir, "small.txt"), small.join("\n"));
-      const bigRuns: number[] = [];
-      const smallRuns: number[] = [];
+      const bigRuns: { wall: number; cpu: number }[] = [];
+      const smallRuns: { wall: number; cpu: number }[] = [];
       for (let i = 0; i < runs + 2; i++) {
-        bigRuns.push(wallMs(exe, [join(dir, "big.txt")]));
-        smallRuns.push(wallMs(exe, [join(dir, "small.txt")]));
+        bigRuns.push(runMs(exe, [join(dir, "big.txt")]));
+        smallRuns.push(runMs(exe, [join(dir, "small.txt")]));
       }
-      peer_ms = median(bigRuns) - median(smallRuns);
+      peer_ms = median(bigRuns.map((r) => r.wall)) - median(smallRuns.map((r) => r.wall));
+      peerCpu_ms = median(bigRuns.map((r) => r.cpu)) - median(smallRuns.map((r) => r.cpu));
       peerNote = execFileSync(exe, [join(dir, "big.txt")], { encoding: "utf8" }).trim();
     }
-    return { points, hoopwise_ms, peer_ms, ratio: peer_ms === null ? null : hoopwise_ms / peer_ms, peerNote, memoryOverInput: memory };
+    return {
+      points,
+      hoopwise_ms,
+      peer_ms,
+      ratio: peer_ms === null ? null : hoopwise_ms / peer_ms,
+      hoopwiseCpu_ms,
+      peerCpu_ms,
+      cpuRatio: peerCpu_ms === null || peerCpu_ms <= 0 ? null : hoopwiseCpu_ms / peerCpu_ms,
+      peerNote,
+      memoryOverInput: memory,
+    };
   } finally {
     rmSync(dir, { recursive: true, force: true });
   }

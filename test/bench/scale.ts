@@ -32,7 +32,7 @@ function ndjson(lines: number): string {
 const sink = { write: () => true };
 
 async function batchSeconds(text: string, threads: number): Promise<number> {
-  const pool = createPool({ threads, maxQueue: Number.POSITIVE_INFINITY });
+  const pool = createPool({ threads, maxQueue: Number.POSITIVE_INFINITY, yieldToRequests: false });
   try {
     // Warm: every worker compiles the code once before the clock starts.
     await runBatch(Readable.from([ndjson(threads * 64)]), { stdout: sink, stderr: sink }, pool);
@@ -52,12 +52,19 @@ export async function batchBench(lines = 3000) {
   return { lines, oneWorker_per_s: lines / one, twoWorkers_per_s: lines / two, ratio: one / two };
 }
 
+/** CPU seconds (user + system) a process has used so far, from /proc (Linux); clock ticks of 1/100 s. */
+export function cpuSecondsOf(pid: number): number {
+  const stat = readFileSync(`/proc/${pid}/stat`, "utf8");
+  const fields = stat.slice(stat.lastIndexOf(")") + 2).split(" ");
+  return (Number(fields[11]) + Number(fields[12])) / 100;
+}
+
 /**
  * Full checks per second through POST /api/v1/check — the server in a process of its own, as
  * deployed, the load generator in this one — against the engine in this process on one core
  * (checkDocument on the already parsed document, the result not serialized): goal ≥ 0.8.
  */
-export async function apiVsEngineBench(seconds = 5) {
+export async function apiVsEngineBench(requests = 1500) {
   const doc = JSON.parse(EXAMPLE_TEXT);
   const engine_ms = medianMs(() => checkDocument(doc), 300, 30);
   const dir = mkdtempSync(join(tmpdir(), "hoopwise-bench-"));
@@ -82,13 +89,23 @@ export async function apiVsEngineBench(seconds = 5) {
       headers: { "content-type": "application/json" },
       body: EXAMPLE_TEXT,
     };
-    await autocannon({ ...opts, connections: 4, duration: 1 }); // warm the server's code
-    const r = await autocannon({ ...opts, connections: 4, duration: seconds });
+    await autocannon({ ...opts, connections: 4, amount: 300 }); // warm the server's code
+    const cpu0 = cpuSecondsOf(child.pid!);
+    const r = await autocannon({ ...opts, connections: 4, amount: requests });
+    const serverCpu_s = cpuSecondsOf(child.pid!) - cpu0;
+    // The engine's CPU time per check, in this process, over a fixed number of checks.
+    const n = 400;
+    const c0 = process.cpuUsage();
+    for (let i = 0; i < n; i++) checkDocument(doc);
+    const c1 = process.cpuUsage(c0);
+    const engineCpu_s = (c1.user + c1.system) / 1e6 / n;
     const engine_per_s = 1000 / engine_ms;
     return {
       api_per_s: r.requests.average,
       engine_per_s,
       ratio: r.requests.average / engine_per_s,
+      /** Checks per CPU-second of the server process against the engine's: what one core gives, whatever else the machine runs. */
+      cpuRatio: (r.requests.total / serverCpu_s) * engineCpu_s,
       api_p50_ms: r.latency.p50,
       errors: r.errors + r.non2xx,
     };
