@@ -6,11 +6,11 @@ import { checkDocument } from "../../src/engine/index.ts";
 
 const root = new URL("../..", import.meta.url).pathname;
 const cli = (args: string[], input?: string) =>
-  spawnSync(process.execPath, ["--import", "tsx", "src/cli.ts", ...args], { cwd: root, input, encoding: "utf8", timeout: 60_000 });
+  spawnSync(process.execPath, ["--import", "tsx", "src/cli.ts", ...args], { cwd: root, input, encoding: "utf8", timeout: 90_000 });
 const example = JSON.parse(readFileSync(new URL("../fixtures/format-example.json", import.meta.url), "utf8"));
 
 describe("batch", () => {
-  it("answers each line on its own line, in input order, an invalid line with its errors, and the run goes on", () => {
+  it("answers each line on its own line, in input order, an invalid line with its errors, and the run goes on", { timeout: 120_000 }, () => {
     // Thicknesses that differ per line, so an answer out of order would show in its title and its hoop stress.
     const docs = Array.from({ length: 40 }, (_, i) => ({
       ...example,
@@ -48,7 +48,7 @@ describe("batch", () => {
     expect(r.stderr).toMatch(/batch: 44 of 44 lines answered, 3 with errors/);
   });
 
-  it("exits 0 when every line gives a result; refuses a bad --workers and a missing file with exit 2", () => {
+  it("exits 0 when every line gives a result; refuses a bad --workers and a missing file with exit 2", { timeout: 180_000 }, () => {
     const ok = cli(["batch", "-", "--workers", "1"], `${JSON.stringify(example)}\n${JSON.stringify(example)}`);
     expect(ok.status).toBe(0);
     expect(ok.stdout.trimEnd().split("\n")).toHaveLength(2);

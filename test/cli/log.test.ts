@@ -7,13 +7,13 @@ import { checkDocument } from "../../src/engine/index.ts";
 
 const root = new URL("../..", import.meta.url).pathname;
 const cli = (args: string[]) =>
-  spawnSync(process.execPath, ["--import", "tsx", "src/cli.ts", ...args], { cwd: root, encoding: "utf8", timeout: 60_000 });
+  spawnSync(process.execPath, ["--import", "tsx", "src/cli.ts", ...args], { cwd: root, encoding: "utf8", timeout: 90_000 });
 const example = JSON.parse(readFileSync(new URL("../fixtures/format-example.json", import.meta.url), "utf8"));
 const dir = mkdtempSync(join(tmpdir(), "hoopwise-log-"));
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
 
 describe("check with a pressure log", () => {
-  it("takes the chosen column in kPa with a decimal comma after a preamble, and gates it, as the same history given in MPa", () => {
+  it("takes the chosen column in kPa with a decimal comma after a preamble, and gates it, as the same history given in MPa", { timeout: 120_000 }, () => {
     const kPa = Array.from({ length: 300 }, (_, i) => Math.round((30 + 25 * Math.sin(i / 9) + (i % 2 ? 0.8 : 0)) * 10) / 10);
     const lines = ["invented receiver logger", "n;p_kPa", ...kPa.map((p, i) => `${i};${String(p).replace(".", ",")}`)];
     const file = join(dir, "log.csv");
@@ -33,7 +33,7 @@ describe("check with a pressure log", () => {
     expect(out.steps.find((s: { id: string }) => s.id === "hysteresis-gate").value).toBeGreaterThan(0);
   });
 
-  it("reports a bad cell by line with exit 2, and log options without --log", () => {
+  it("reports a bad cell by line with exit 2, and log options without --log", { timeout: 180_000 }, () => {
     const file = join(dir, "bad.csv");
     writeFileSync(file, "p\n0.01\nx\n");
     const doc = join(dir, "check.json");

