@@ -11,7 +11,7 @@ const plainFingerprint = (v: unknown, version: string) =>
     .digest("hex");
 
 describe("canonical JSON written in pieces", () => {
-  it("is the canonical text to the byte, for any JSON value (property)", () => {
+  it("is the canonical text to the byte, for any JSON value (property)", { timeout: 60_000 }, () => {
     fc.assert(
       fc.property(fc.jsonValue(), (v) => {
         expect(canonicalJsonInPieces(v)).toBe(canonicalJson(v));
@@ -20,7 +20,7 @@ describe("canonical JSON written in pieces", () => {
     );
   });
 
-  it("writes a long flat history across its pieces exactly as in one text, with undefined members and keys as JSON.stringify treats them", () => {
+  it("writes a long flat history across its pieces exactly as in one text, with undefined members and keys as JSON.stringify treats them", { timeout: 60_000 }, () => {
     fc.assert(
       fc.property(fc.array(fc.double({ noDefaultInfinity: false }), { minLength: 8000, maxLength: 20000 }), (xs) => {
         const doc = { pressure: { history_MPa: xs }, b: undefined, a: [1, undefined, "x"] };
@@ -30,7 +30,7 @@ describe("canonical JSON written in pieces", () => {
     );
   });
 
-  it("gives the fingerprint its definition gives", () => {
+  it("gives the fingerprint its definition gives", { timeout: 60_000 }, () => {
     fc.assert(
       fc.property(fc.jsonValue(), fc.string(), (v, version) => {
         expect(fingerprint(v, version)).toBe(plainFingerprint(v, version));

@@ -23,7 +23,7 @@ const point = fc.oneof(
 );
 
 describe("a pressure history validated in one loop", () => {
-  it("gives what the schema over every point gives: the same parsed check, or the same errors (property)", () => {
+  it("gives what the schema over every point gives: the same parsed check, or the same errors (property)", { timeout: 60_000 }, () => {
     fc.assert(
       fc.property(fc.array(point, { minLength: 0, maxLength: 60 }), fc.boolean(), (history, withMin) => {
         const doc = { ...EXAMPLE, crack: undefined, pressure: { history_MPa: history, ...(withMin ? { min_MPa: 0 } : {}) } };
