@@ -252,7 +252,9 @@ export function evaluateEvidence(input: EvidenceInput, designLife_cycles: number
     ),
   );
 
-  const impliedScatterFactor = 10 ** (k * logStdDev);
+  // Past the largest double the factor is no number at all: null, and the warning below says so.
+  const implied = 10 ** (k * logStdDev);
+  const impliedScatterFactor = Number.isFinite(implied) ? implied : null;
   steps.push(
     step(
       "evidence-implied-scatter",
@@ -269,15 +271,15 @@ export function evaluateEvidence(input: EvidenceInput, designLife_cycles: number
       "evidence-scatter-compare",
       "Implied scatter factor against the scatter factor in use",
       "SF_implied / SF ≤ 1",
-      `${fmt(impliedScatterFactor)} / ${fmt(scatterFactor)}`,
-      impliedScatterFactor / scatterFactor,
+      impliedScatterFactor === null ? "SF_implied beyond any number" : `${fmt(impliedScatterFactor)} / ${fmt(scatterFactor)}`,
+      impliedScatterFactor === null ? null : impliedScatterFactor / scatterFactor,
       "—",
       "Comparison of the statistical allowance with the scatter factor applied to the mean life",
     ),
   );
-  if (impliedScatterFactor > scatterFactor) {
+  if (impliedScatterFactor === null || impliedScatterFactor > scatterFactor) {
     warnings.push(
-      `The test evidence implies a scatter factor of ${fmt(impliedScatterFactor)}, more than the ${fmt(scatterFactor)} in use: ` +
+      `The test evidence implies a scatter factor of ${impliedScatterFactor === null ? "more than any number can hold" : fmt(impliedScatterFactor)}, more than the ${fmt(scatterFactor)} in use: ` +
         "dividing the mean life by the scatter factor in use is not conservative for this evidence.",
     );
   }

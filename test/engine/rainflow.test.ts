@@ -110,7 +110,7 @@ describe("rainflow (ASTM E1049 §5.4.4)", () => {
     );
   });
 
-  it("counts a million-point Float64Array history quickly", () => {
+  it("counts a million-point Float64Array history (its speed is measured by npm run bench)", () => {
     const n = 1_000_000;
     const h = new Float64Array(n);
     let seed = 1;
@@ -118,12 +118,9 @@ describe("rainflow (ASTM E1049 §5.4.4)", () => {
       seed = (seed * 16807) % 2147483647; // Park–Miller generator: repeatable noise
       h[i] = 100 * Math.sin(i * 0.37) + 80 * (seed / 2147483647 - 0.5);
     }
-    const t0 = performance.now();
     let units = 0;
     const { reversals } = rainflow(h, (_r, _m, c) => (units += 2 * c));
-    const elapsed = performance.now() - t0;
     expect(units).toBe(reversals - 1); // the identity above, on a long history
-    expect(elapsed).toBeLessThan(2000); // generous: about 0.1 s on a laptop
   });
 
   it("rejects histories that cannot make a cycle", () => {
