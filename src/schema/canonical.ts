@@ -1,4 +1,3 @@
-
 /**
  * Canonical JSON: object keys sorted at every depth, no whitespace, numbers as JavaScript prints them.
  * Two inputs that mean the same check give the same text, so the same fingerprint.

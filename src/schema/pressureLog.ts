@@ -1,5 +1,5 @@
-import type { FieldError } from "../engine/errors.ts";
-import { PRESSURE_UNITS, SI_UNITS, toSI, type StressUnit } from "../web/units.ts";
+import type { FieldError } from "./errors.ts";
+import { PRESSURE_UNITS, SI_UNITS, toSI, type StressUnit } from "./units.ts";
 
 /**
  * A pressure log as loggers and spreadsheets write it — CSV or TSV, a header or a few lines of

@@ -20,7 +20,9 @@ describe("canonical JSON written in pieces", () => {
     );
   });
 
-  it("writes a long flat history across its pieces exactly as in one text, with undefined members and keys as JSON.stringify treats them", { timeout: 60_000 }, () => {
+  it("writes a long flat history across its pieces exactly as in one text, with undefined members and keys as JSON.stringify treats them", {
+    timeout: 60_000,
+  }, () => {
     fc.assert(
       fc.property(fc.array(fc.double({ noDefaultInfinity: false }), { minLength: 8000, maxLength: 20000 }), (xs) => {
         const doc = { pressure: { history_MPa: xs }, b: undefined, a: [1, undefined, "x"] };
