@@ -36,7 +36,7 @@ export function Fragment({ s, o, inlinePlots }: { s: FormState; o: Outcome; inli
       ) : null}
       {v && !inlinePlots ? <PlotsLoader v={v} /> : null}
       <div id="stale" hx-swap-oob="innerHTML">
-        <StatusNote errors={o.errorCount} general={o.general} hadResult={true} />
+        <StatusNote errors={o.errorCount} general={o.general} hadResult={true} beside={s.errors} />
       </div>
       {errorSlotNames(s.blockRows).map((name) => (
         <ErrorSlot name={name} messages={s.errors.get(name)} oob />

@@ -33,7 +33,7 @@ export function Workspace({ s, o }: { s: FormState; o: Outcome }) {
             </span>
           </h2>
           <div id="stale" role="status">
-            <StatusNote errors={o.errorCount} general={o.general} hadResult={false} />
+            <StatusNote errors={o.errorCount} general={o.general} hadResult={false} beside={s.errors} />
           </div>
           <div id="verdict" aria-live="polite" aria-atomic="true">
             {o.view ? <VerdictSummary result={o.view.result} /> : null}

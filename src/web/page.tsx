@@ -10,6 +10,7 @@ import { Workspace, type Outcome } from "../../views/workspace.tsx";
 import type { FormState } from "../../views/form/state.ts";
 import { Fragment } from "../../views/fragment.tsx";
 import { Plots } from "../../views/results/plots.tsx";
+import { MAX_SHARE_LINK_CHARS } from "../../views/results/share.tsx";
 import { MAX_JSON_BYTES } from "./api.ts";
 import { sheetResponse } from "./sheet.ts";
 import { assetRoutes } from "./assets.ts";
@@ -26,8 +27,8 @@ import { unitsFrom, type Units } from "../schema/units.ts";
  * with the message beside the field — never a server error.
  */
 
-/** URLs longer than this are not written into the address bar after each edit; the link under the result still carries them. */
-const MAX_ADDRESS_CHARS = 8000;
+/** URLs longer than the page's link limit are not written into the address bar after each edit, and the plots come inline. */
+const MAX_ADDRESS_CHARS = MAX_SHARE_LINK_CHARS;
 
 /** What the page shows for one check: the form state, the outcome, and the link. */
 interface Worked {
