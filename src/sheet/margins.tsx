@@ -62,7 +62,8 @@ export function footerHtml(m: SheetModel): string {
       <div style={`border-top:0.5pt solid #777;padding-top:1mm;${ONE_LINE}`}>
         Fingerprint (SHA-256) <span style="font-family:'DejaVu Sans Mono',monospace">{m.result.fingerprint}</span>
       </div>
-      <div style={`${ONE_LINE};margin-top:0.6mm`}>{CAUTION_SHORT}</div>
+      {/* The caution may take two lines: it is never cut short. */}
+      <div style="margin-top:0.6mm;line-height:1.25">{CAUTION_SHORT}</div>
     </div>,
   );
 }
