@@ -48,7 +48,13 @@ export function Front({ m }: { m: SheetModel }) {
         <span class="why">{STATE_MEANS[mark.state]}</span>
       </div>
       <div class="outcome">
-        <div class={`verdict ${r.verdict}`}>{r.verdict === "pass" ? "Screening outcome: PASSES" : "Screening outcome: DOES NOT PASS"}</div>
+        <div class={`verdict ${r.verdict}`}>
+          {r.verdict === "pass"
+            ? "Screening outcome: PASSES"
+            : r.verdict === "refer"
+              ? "Screening outcome: REFER (beyond this screening)"
+              : "Screening outcome: DOES NOT PASS"}
+        </div>
         <div class="governs">
           <b>Governing check:</b> {typeset(r.governing.text)}.
         </div>

@@ -53,6 +53,34 @@ export function inputGroups(m: SheetModel): InputGroup[] {
     cutoutRows.push(q("Half-axis along the hoop direction", c.halfAxisAlongHoop_mm, "length"));
     cutoutRows.push(q("Half-axis along the axial direction", c.halfAxisAlongAxial_mm, "length"));
   }
+  if (c.kind === "rounded-rectangle") {
+    cutoutRows.push(q("Half-width along the hoop direction", c.halfWidthAlongHoop_mm, "length"));
+    cutoutRows.push(q("Half-length along the axial direction", c.halfLengthAlongAxial_mm, "length"));
+    cutoutRows.push(q("Corner radius", c.cornerRadius_mm, "length"));
+  }
+  if (c.kind === "outline")
+    cutoutRows.push(
+      t(
+        "Outline points (hoop, axial)",
+        c.points_mm.map(([x, y]) => `(${sig(x, 4)}, ${sig(y, 4)})`).join(" "),
+        "mm from the opening's centre, smoothed by a periodic spline",
+      ),
+    );
+  if (c.kind !== "given" && c.fasteners?.length)
+    cutoutRows.push(
+      t(
+        "Fastener holes (hoop, axial; radius)",
+        c.fasteners.map((f) => `(${sig(f.hoop_mm, 4)}, ${sig(f.axial_mm, 4)}; ${sig(f.radius_mm, 3)})`).join(" "),
+        "mm from the opening's centre",
+      ),
+    );
+  if (
+    (c.kind === "circular-hole" || c.kind === "elliptical-hole" || c.kind === "rounded-rectangle" || c.kind === "outline") &&
+    c.reinforcement
+  ) {
+    cutoutRows.push(t("Reinforcement area", `${sig(c.reinforcement.area_mm2, 4)} mm²`));
+    cutoutRows.push(q("Reinforcement width", c.reinforcement.width_mm, "length"));
+  }
   if (c.kind === "given") {
     cutoutRows.push(t("Kt given", sig(c.kt, 4), "referred to the nominal hoop stress"));
     if (c.rootRadius_mm !== undefined) cutoutRows.push(q("Notch root radius", c.rootRadius_mm, "length"));

@@ -5,6 +5,8 @@ export const CUTOUT_NAMES = {
   none: "none: plain skin, Kt = 1",
   "circular-hole": "circular hole",
   "elliptical-hole": "elliptical opening",
+  "rounded-rectangle": "rectangular opening with rounded corners",
+  outline: "opening of a given outline",
   given: "Kt given by the user",
 } as const;
 

@@ -16,7 +16,8 @@ export function Results({ m, num }: { m: SheetModel; num: number }) {
       </h2>
       <div class="keep">
         <h3>
-          {num}.1 Verdict: {r.verdict === "pass" ? "passes" : "does not pass"}
+          {num}.1 Verdict:{" "}
+          {r.verdict === "pass" ? "passes" : r.verdict === "refer" ? "refer: outside what this screening can judge" : "does not pass"}
         </h3>
         <VerdictTable r={r} />
       </div>

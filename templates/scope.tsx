@@ -109,6 +109,9 @@ function ktWords(m: SheetModel): string {
       return "A circular hole in the biaxial membrane field (Kirsch's solution).";
     case "elliptical-hole":
       return "An elliptical opening in the biaxial membrane field (Inglis's solution, superposed for the two stresses); Kt is the larger boundary stress.";
+    case "rounded-rectangle":
+    case "outline":
+      return "An opening of its own shape in the biaxial membrane field: the edge stress is solved by plane elasticity for the shape (an integral equation checked against Kirsch and Inglis), and Kt is the largest edge stress, at the opening or at a fastener hole beside it.";
     case "given":
       return `Kt = ${sig(c.kt, 4)} as given in the input (basis printed with the inputs).`;
   }

@@ -15,11 +15,23 @@ const cabinBarrel: CheckDocument = {
   title: "Cabin barrel skin at the window belt",
   project: "Larkspur L-30 commuter (invented demo)",
   calcNumber: "L30-FUS-017",
-  notes: "Demo scenario: skin bay between two frames at a passenger window; the window opening is modelled as an ellipse.",
+  notes:
+    "Demo scenario: skin bay between two frames at a passenger window; the window opening is a rounded rectangle with a row of fastener holes round its upper aft corner.",
   display: { length: "mm", stress: "MPa", pressure: "kPa", altitude: "m" },
   shell: { form: "cylinder", radius_mm: 1150, radiusAt: "mean", thickness_mm: 1.0, theory: "auto" },
   pressure: { fromAltitude: { flight_m: 7620, cabin_m: 2440 }, min_MPa: 0 },
-  cutout: { kind: "elliptical-hole", halfAxisAlongHoop_mm: 190, halfAxisAlongAxial_mm: 140 },
+  cutout: {
+    kind: "rounded-rectangle",
+    halfWidthAlongHoop_mm: 115,
+    halfLengthAlongAxial_mm: 160,
+    cornerRadius_mm: 55,
+    // A row of 4.8 mm rivet holes on an arc 12 mm outside the corner's edge, at 15° to 75° round it.
+    fasteners: [15, 30, 45, 60, 75].map((deg) => ({
+      hoop_mm: Math.round((60 + 67 * Math.cos((deg * Math.PI) / 180)) * 10) / 10,
+      axial_mm: Math.round((105 + 67 * Math.sin((deg * Math.PI) / 180)) * 10) / 10,
+      radius_mm: 2.4,
+    })),
+  },
   material: { id: "al-2024-t3" },
   fatigue: { meanStress: "goodman", designLife_cycles: 60000, scatterFactor: 3 },
   crack: { geometry: "hole-through", initial_mm: 1.27, holeRadius_mm: 2.4, width_mm: 480, inspectionFactor: 2 },

@@ -110,6 +110,21 @@ export function runCheck(input: ResolvedCheck): CheckResult {
       peakMax_MPa: e.peakMax,
       peakMin_MPa: e.peakMin,
       localYield: e.localYield,
+      ...(e.conc.fasteners?.length
+        ? {
+            fasteners: e.conc.fasteners.map((f) => ({
+              kt: f.kt,
+              hoop_mm: f.hoop_mm,
+              axial_mm: f.axial_mm,
+              radius_mm: f.radius_mm,
+              ligament_mm: Number.isFinite(f.ligament_mm) ? f.ligament_mm : null,
+              solvedWithOpening: f.solvedWithOpening,
+              ktKirsch: f.ktKirsch,
+            })),
+          }
+        : {}),
+      ...(e.conc.picture ? { opening: e.conc.picture } : {}),
+      ...(e.conc.refer?.length ? { refer: e.conc.refer } : {}),
     },
     fatigue: {
       criterion,

@@ -1,6 +1,7 @@
 import type { MeanStressCriterion } from "../schema/check.ts";
 import type { ResolvedCheck } from "./input.ts";
-import { concentration, type Concentration } from "./concentration.ts";
+import { concentration, type Concentration, type Cutout } from "./concentration.ts";
+import { openingConcentration, type ExtendedConcentration } from "./openings/concentration.ts";
 import type { Load } from "./load.ts";
 import { CRITERION_LABEL, CRITERION_SOURCE, criterionWorking, equivalentAmplitude, type Strengths } from "./meanStress.ts";
 import {
@@ -31,15 +32,20 @@ export interface Context {
   curve: Curve;
   strengths: Strengths;
   /** Kt and Kf with their steps by biaxial ratio: λ changes with thickness only when an axial load is added. */
-  notchCache?: Map<number, { conc: Concentration; notch: NotchFactor }>;
+  notchCache?: Map<number, { conc: ExtendedConcentration; notch: NotchFactor }>;
 }
 
-function notchAt(ctx: Context, lambda: number): { conc: Concentration; notch: NotchFactor } {
+function notchAt(ctx: Context, lambda: number): { conc: ExtendedConcentration; notch: NotchFactor } {
   ctx.notchCache ??= new Map();
   const known = ctx.notchCache.get(lambda);
   if (known) return known;
   const { input } = ctx;
-  const conc = concentration(input.cutout, lambda);
+  // The opening's curvature is judged at the given wall (a solve for thickness keeps it).
+  const shell = input.shell;
+  const mean = radii(shell.radius_mm, shell.radiusAt, shell.thickness_mm).mean_mm;
+  const conc = openingConcentration(input.cutout, lambda, { form: shell.form, meanRadius_mm: mean, thickness_mm: shell.thickness_mm }, () =>
+    concentration(input.cutout as Cutout, lambda),
+  );
   const notch = notchFactor(conc.kt, {
     q: input.fatigue.notchSensitivity,
     constant: input.fatigue.notchConstant,
@@ -80,7 +86,7 @@ export interface Evaluation {
   staticAllowable: number;
   staticMargin: number;
   lambda: number;
-  conc: Concentration;
+  conc: ExtendedConcentration;
   notch: NotchFactor;
   peakMax: number;
   peakMin: number;

@@ -1,6 +1,7 @@
 import type { MeanStressCriterion } from "../schema/check.ts";
 import type { EvidenceResult } from "./evidence.ts";
 import type { Section } from "./sections.ts";
+import type { OpeningPictureResult } from "./openings/concentration.ts";
 import type { Step } from "./step.ts";
 
 /** The result document, format "hoopwise.result/1". Keys listed in the check format never change meaning. */
@@ -18,9 +19,10 @@ export interface CriterionRow {
 }
 
 export interface VerdictRow {
-  id: "static" | "fatigue" | "crack" | "evidence" | "leak-before-break";
+  id: "static" | "fatigue" | "crack" | "evidence" | "leak-before-break" | "opening";
   title: string;
-  status: "pass" | "fail" | "info";
+  /** "refer": outside what this screening can judge; an analysis beyond it is needed. */
+  status: "pass" | "fail" | "info" | "refer";
   /** Plain-words statement of the demand against the capacity. */
   detail: string;
   /** Reserve: capacity / demand − 1 where it means something. */
@@ -38,7 +40,7 @@ export interface CheckResult {
   engine: string;
   fingerprint: string;
   title?: string;
-  verdict: "pass" | "fail";
+  verdict: "pass" | "fail" | "refer";
   /** What governs, in words: the governing row's title and detail. */
   governs: string;
   /** The same as a structure, so no face has to find the row by matching the sentence. */
@@ -67,6 +69,20 @@ export interface CheckResult {
     peakMax_MPa: number;
     peakMin_MPa: number;
     localYield: boolean;
+    /** Fastener holes in the order given, each Kt referred to the nominal hoop stress at maximum pressure. */
+    fasteners?: {
+      kt: number;
+      hoop_mm: number;
+      axial_mm: number;
+      radius_mm: number;
+      ligament_mm: number | null;
+      solvedWithOpening: boolean;
+      ktKirsch: number;
+    }[];
+    /** The opening's edge stress and what governs, for its picture (per unit nominal hoop stress). */
+    opening?: OpeningPictureResult;
+    /** Plain-words reasons the opening is outside this screening's range. */
+    refer?: string[];
   };
   fatigue: {
     criterion: MeanStressCriterion;

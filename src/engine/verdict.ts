@@ -8,7 +8,7 @@ import { fmt } from "./step.ts";
  */
 export function verdictTable(r: CheckResult): {
   rows: VerdictRow[];
-  verdict: "pass" | "fail";
+  verdict: "pass" | "fail" | "refer";
   governs: string;
   governing: CheckResult["governing"];
 } {
@@ -82,13 +82,32 @@ export function verdictTable(r: CheckResult): {
       margin: ev.lowerBound_cycles === null ? null : ev.lowerBound_cycles / f.designLife_cycles - 1,
     });
   }
+  const n = r.notch;
+  if (n.refer?.length || n.opening?.curvature) {
+    const c = n.opening?.curvature;
+    rows.push({
+      id: "opening",
+      title: "Opening within the membrane screening's range (curvature, reinforcement)",
+      status: n.refer?.length ? "refer" : "pass",
+      detail: n.refer?.length
+        ? n.refer.join("; ")
+        : `curvature parameter β = ${fmt(c?.beta ?? 0, 3)} within the small-curvature range (β ≤ ${fmt(c?.limit ?? 0)})`,
+      margin: null,
+    });
+  }
   const failing = rows.filter((x) => x.status === "fail");
+  const referring = rows.filter((x) => x.status === "refer");
   const deciding = rows.filter((x) => x.status !== "info" && x.margin !== null);
   const least = deciding.reduce<VerdictRow | undefined>(
     (a, b) => (a === undefined || (b.margin as number) < (a.margin as number) ? b : a),
     undefined,
   );
-  const gov = failing[0] ?? least ?? rows[0];
+  const gov = failing[0] ?? referring[0] ?? least ?? rows[0];
   const text = `${gov.title}: ${gov.detail}`;
-  return { rows, verdict: failing.length ? "fail" : "pass", governs: text, governing: { rowId: gov.id, text } };
+  return {
+    rows,
+    verdict: failing.length ? "fail" : referring.length ? "refer" : "pass",
+    governs: text,
+    governing: { rowId: gov.id, text },
+  };
 }

@@ -204,20 +204,72 @@ function sampleMax(xs: number[]): [number] {
   return [m];
 }
 
+const coordinate = (what: string) =>
+  num(what)
+    .min(-1e5, { error: `${what} must be within ±100 000 mm` })
+    .max(1e5, { error: `${what} must be within ±100 000 mm` });
+
+/** Small holes near the opening (rivets, bolts), centres from the opening's centre. */
+export const fastenersSchema = z
+  .array(
+    z.strictObject({
+      hoop_mm: coordinate("the fastener's offset along the hoop"),
+      axial_mm: coordinate("the fastener's offset along the axis"),
+      radius_mm: positive("the fastener hole radius", 1e3, FLOORS.length),
+    }),
+    { error: "fasteners must be a list of { hoop_mm, axial_mm, radius_mm }" },
+  )
+  .max(200, { error: "at most 200 fastener holes" })
+  .describe("Fastener holes round the opening, centres relative to the opening's centre (mm)");
+
+/** Area added round the opening (ring, frame, pad) and its radial width. */
+export const reinforcementSchema = z
+  .strictObject({
+    area_mm2: positive("the reinforcement area", 1e7, { min: 1e-6, words: "0.000001 mm²" }),
+    width_mm: positive("the reinforcement width", 1e4, FLOORS.length),
+  })
+  .describe("Reinforcement round the opening: cross-section area added (mm²) and its radial width (mm)");
+
+const openingExtras = { fasteners: fastenersSchema.optional(), reinforcement: reinforcementSchema.optional() };
+
+const outlinePoint = z.tuple([coordinate("an outline point's hoop coordinate"), coordinate("an outline point's axial coordinate")], {
+  error: "each outline point is [hoop_mm, axial_mm]",
+});
+
 export const cutoutSchema = z.discriminatedUnion(
   "kind",
   [
-    z.strictObject({ kind: z.literal("none") }),
+    z.strictObject({ kind: z.literal("none"), fasteners: fastenersSchema.optional() }),
     z.strictObject({
       kind: z.literal("circular-hole"),
       radius_mm: positive("the hole radius", 1e4, FLOORS.length)
         .optional()
-        .describe("Needed only for notch sensitivity from the root radius"),
+        .describe("Needed for notch sensitivity from the root radius, the curvature check, fasteners and reinforcement"),
+      ...openingExtras,
     }),
     z.strictObject({
       kind: z.literal("elliptical-hole"),
       halfAxisAlongHoop_mm: positive("the half-axis along the hoop direction", 1e4, FLOORS.length),
       halfAxisAlongAxial_mm: positive("the half-axis along the axial direction", 1e4, FLOORS.length),
+      ...openingExtras,
+    }),
+    z.strictObject({
+      kind: z.literal("rounded-rectangle"),
+      halfWidthAlongHoop_mm: positive("the half-width along the hoop direction", 1e4, FLOORS.length),
+      halfLengthAlongAxial_mm: positive("the half-length along the axial direction", 1e4, FLOORS.length),
+      cornerRadius_mm: positive("the corner radius", 1e4, FLOORS.length).describe(
+        "Radius of the corners; at most the smaller half-dimension (equal to both: a circle)",
+      ),
+      ...openingExtras,
+    }),
+    z.strictObject({
+      kind: z.literal("outline"),
+      points_mm: z
+        .array(outlinePoint, { error: "points_mm must be a list of [hoop_mm, axial_mm] points" })
+        .min(6, { error: "an outline needs at least 6 points round the opening" })
+        .max(400, { error: "an outline takes at most 400 points" })
+        .describe("Closed outline, points in order round the opening, centred on it; smoothed by a periodic spline"),
+      ...openingExtras,
     }),
     z.strictObject({
       kind: z.literal("given"),
@@ -226,7 +278,9 @@ export const cutoutSchema = z.discriminatedUnion(
       basis: text("the basis of Kt", 500).optional().describe("Where the given Kt comes from (chart, FE model, test)"),
     }),
   ],
-  { error: 'cutout kind must be "none", "circular-hole", "elliptical-hole" or "given"' },
+  {
+    error: 'cutout kind must be "none", "circular-hole", "elliptical-hole", "rounded-rectangle", "outline" or "given"',
+  },
 );
 
 const couponSchema = z.strictObject({

@@ -17,7 +17,7 @@ export interface SheetRecord {
   format: typeof RECORD_FORMAT;
   engine: string;
   fingerprint: string;
-  verdict: "pass" | "fail";
+  verdict: "pass" | "fail" | "refer";
   governs: string;
   /** The principal numbers, by their path in the result document. */
   values: Record<string, number | null>;
@@ -149,7 +149,7 @@ function isRecord(x: unknown): x is SheetRecord {
     typeof r.engine === "string" &&
     typeof r.fingerprint === "string" &&
     typeof r.governs === "string" &&
-    (r.verdict === "pass" || r.verdict === "fail") &&
+    (r.verdict === "pass" || r.verdict === "fail" || r.verdict === "refer") &&
     typeof r.values === "object" &&
     r.values !== null &&
     Object.values(r.values).every(numberOrNull) &&

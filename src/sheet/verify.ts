@@ -39,8 +39,8 @@ export interface VerifyReport {
   results: {
     /** Whether the sheet carries a results record. */
     recorded: boolean;
-    verdictThen: "pass" | "fail" | null;
-    verdictNow: "pass" | "fail" | null;
+    verdictThen: "pass" | "fail" | "refer" | null;
+    verdictNow: "pass" | "fail" | "refer" | null;
     matches: boolean;
     differences: Difference[];
   };

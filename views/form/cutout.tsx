@@ -15,6 +15,8 @@ export function CutoutSection({ s }: { s: FormState }) {
           { value: "none", label: "plain skin" },
           { value: "circular-hole", label: "a round hole" },
           { value: "elliptical-hole", label: "an elliptical opening" },
+          { value: "rounded-rectangle", label: "a rectangular opening with rounded corners" },
+          { value: "outline", label: "an opening of a given outline (from a file)" },
           { value: "given", label: "a detail of known Kt" },
         ]}
       />
@@ -33,6 +35,17 @@ export function CutoutSection({ s }: { s: FormState }) {
           <NumberInput s={s} name="ellipse.hoop" label="Half-width around the shell (hoop direction)" />
           <NumberInput s={s} name="ellipse.axial" label="Half-length along the axis" />
         </div>
+      </Panel>
+      <Panel name="cutout.kind" value="rounded-rectangle">
+        <div class="grid">
+          <NumberInput s={s} name="rect.hoop" label="Half-width around the shell (hoop direction)" />
+          <NumberInput s={s} name="rect.axial" label="Half-length along the axis" />
+          <NumberInput s={s} name="rect.corner" label="Corner radius" hint="At most the smaller half-size." />
+        </div>
+        <p class="hint">Fastener holes and a reinforcement given in a check file ride along with it.</p>
+      </Panel>
+      <Panel name="cutout.kind" value="outline">
+        <p class="hint">The outline's points and any fastener holes come from the check file you opened; they ride along with the form.</p>
       </Panel>
       <Panel name="cutout.kind" value="given">
         <div class="grid">

@@ -168,7 +168,7 @@ function Unworked({ n, w }: { n: number; w: WorkedRevision }) {
 function figureText(f: Figure): string {
   const v = f.value;
   if (v === undefined) return "not part of this check";
-  if (typeof v === "string") return f.kind === "verdict" ? (v === "pass" ? "passes" : "fails") : v;
+  if (typeof v === "string") return f.kind === "verdict" ? (v === "pass" ? "passes" : v === "refer" ? "refer" : "fails") : v;
   switch (f.kind) {
     case "life":
       return cycles(v, f.unit);

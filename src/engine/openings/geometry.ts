@@ -224,9 +224,9 @@ export interface DiscretizeOptions {
   curvature?: number;
   /** A panel is at most this share of its outline's perimeter (default 1/4). */
   perimeterShare?: number;
-  /** A panel is at most this many times its distance to another, non-adjacent panel (default 1.5). */
+  /** A panel is at most this many times its distance to another, non-adjacent panel (default 3). */
   proximity?: number;
-  /** Neighbouring panels differ in length by at most this factor (default 2.5). */
+  /** Neighbouring panels differ in length by at most this factor (default 3). */
   balance?: number;
   /** Refuse beyond this many panels (default 400). */
   maxPanels?: number;
@@ -290,8 +290,8 @@ export function discretize(outlines: Outline[], opts: DiscretizeOptions = {}): D
   const rule = gaussRule(opts.p ?? 16);
   const curv = opts.curvature ?? 3;
   const share = opts.perimeterShare ?? 1 / 4;
-  const prox = opts.proximity ?? 1.5;
-  const balance = opts.balance ?? 2.5;
+  const prox = opts.proximity ?? 3;
+  const balance = opts.balance ?? 3;
   const maxPanels = opts.maxPanels ?? 400;
   // Panels per hole, kept in order round the hole.
   const start = opts.panelsPerPiece ?? 1;

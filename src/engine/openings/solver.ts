@@ -104,7 +104,7 @@ export function buildOperator(disc: Discretization): Operator {
     const yi = y[i];
     const row = i * n;
     for (let pi = 0; pi < np; pi++) {
-      if (pi === own || Math.hypot(xi - pc[pi][0], yi - pc[pi][1]) >= 1.1 * pc[pi][2]) continue;
+      if (pi === own || Math.hypot(xi - pc[pi][0], yi - pc[pi][1]) >= 1.0 * pc[pi][2]) continue;
       const base = pi * p;
       for (let j = 0; j < p; j++) {
         k1[row + base + j] = 0;
@@ -198,7 +198,7 @@ function apply(op: Operator, v: Float64Array, out: Float64Array): void {
 export class NoConvergence extends Error {}
 
 /** Restarted GMRES with modified Gram–Schmidt and Givens rotations (Saad & Schultz 1986). */
-function gmres(op: Operator, rhs: Float64Array, tol = 1e-12, restart = 80, maxIter = 400): { x: Float64Array; iterations: number } {
+function gmres(op: Operator, rhs: Float64Array, tol = 1e-10, restart = 80, maxIter = 400): { x: Float64Array; iterations: number } {
   const m = rhs.length;
   const x = new Float64Array(m);
   const bnorm = Math.hypot(...rhs) || 1;
@@ -345,7 +345,7 @@ function panelEnds(disc: Discretization, pi: number): [number, number, number, n
 
 /**
  * Quadrature of a panel for a point z near it: the panel is halved until each part is farther
- * from z than 1.2 times its length (adaptive subdivision); each sub-node comes with the edge
+ * from z than 0.6 times its length (adaptive subdivision); each sub-node comes with the edge
  * recomputed exactly, its weight in the panel's ξ and the Lagrange row that carries the density
  * from the panel's own nodes to it.
  */
@@ -369,7 +369,7 @@ export function nearRule(
     const qm = piece(pan.u0 + half * ((a + b) / 2 + 1));
     const len = Math.hypot(q1.x - qm.x, q1.y - qm.y) + Math.hypot(qm.x - q0.x, qm.y - q0.y);
     const dmin = Math.min(Math.hypot(q0.x - zx, q0.y - zy), Math.hypot(q1.x - zx, q1.y - zy), Math.hypot(qm.x - zx, qm.y - zy));
-    if (dmin < 1.2 * len && depth < 40) {
+    if (dmin < 0.6 * len && depth < 40) {
       const m = (a + b) / 2;
       visit(a, m, depth + 1);
       visit(m, b, depth + 1);
@@ -507,7 +507,7 @@ export function edgeStress(sol: Solution): Float64Array {
     }
     for (let pi = 0; pi < np; pi++) {
       if (pi === own) continue;
-      if (Math.hypot(ti - pcx[pi], tq - pcy[pi]) < 1.1 * plen[pi]) {
+      if (Math.hypot(ti - pcx[pi], tq - pcy[pi]) < 1.0 * plen[pi]) {
         const [ir, ii] = nearCauchy2(sol, pi, ti, tq);
         sr += ir;
         si += ii;
@@ -585,7 +585,7 @@ export function stressAt(sol: Solution, px: number, py: number): PlaneStress {
       len += Math.hypot(disc.dx[j], disc.dy[j]) * disc.w[j];
       dmin = Math.min(dmin, Math.hypot(disc.x[j] - px, disc.y[j] - py));
     }
-    if (dmin < 1.2 * len) {
+    if (dmin < 0.6 * len) {
       nearRule(disc, pi, px, py, (tx, ty, dtx, dty, weight, row) => {
         let wr = 0;
         let wi = 0;

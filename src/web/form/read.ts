@@ -152,6 +152,15 @@ function readCutout(r: Readers): Obj {
       return { kind, radius_mm: r.number("circle.radius") };
     case "elliptical-hole":
       return { kind, halfAxisAlongHoop_mm: r.number("ellipse.hoop"), halfAxisAlongAxial_mm: r.number("ellipse.axial") };
+    case "rounded-rectangle":
+      return {
+        kind,
+        halfWidthAlongHoop_mm: r.number("rect.hoop"),
+        halfLengthAlongAxial_mm: r.number("rect.axial"),
+        cornerRadius_mm: r.number("rect.corner"),
+      };
+    case "outline":
+      return { kind };
     case "given":
       return { kind, kt: r.number("given.kt"), rootRadius_mm: r.number("given.rootRadius"), basis: r.pick("given.basis", "cutout.basis") };
     default:

@@ -72,6 +72,11 @@ export function writeForm(doc: unknown, units: Units): FormValues {
     putNumber("ellipse.hoop");
     putNumber("ellipse.axial");
   }
+  if (kind === "rounded-rectangle") {
+    putNumber("rect.hoop");
+    putNumber("rect.axial");
+    putNumber("rect.corner");
+  }
   if (kind === "given") {
     putNumber("given.kt");
     putNumber("given.rootRadius");
