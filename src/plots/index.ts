@@ -7,3 +7,4 @@ export { snCurve, type SnData } from "./sn.ts";
 export { lifeThicknessPlot, type LifeThicknessData } from "./lifeThickness.ts";
 export { crackGrowthPlot, type CrackGrowthData } from "./crackGrowth.ts";
 export { spectrumPlot, type SpectrumData } from "./spectrum.ts";
+export { edgeStressPlot, openingPicture, type OpeningPictureData } from "./opening.ts";

@@ -5,7 +5,16 @@
  * sheet only lay the figures out.
  */
 import type { CheckResult } from "../engine/index.ts";
-import { crackGrowthPlot, haighDiagram, lifeThicknessPlot, type PlotOptions, snCurve, spectrumPlot } from "../plots/index.ts";
+import {
+  crackGrowthPlot,
+  edgeStressPlot,
+  haighDiagram,
+  lifeThicknessPlot,
+  openingPicture,
+  type PlotOptions,
+  snCurve,
+  spectrumPlot,
+} from "../plots/index.ts";
 import type { Units } from "../schema/units.ts";
 
 /** What the check was worked at, beyond the result: the material strengths, Walker's γ and the wall thickness. */
@@ -17,7 +26,7 @@ export interface WorkedAt {
 }
 
 export interface Figure {
-  id: "haigh" | "sn" | "thickness" | "crack" | "spectrum";
+  id: "haigh" | "sn" | "thickness" | "crack" | "spectrum" | "opening" | "edge-stress";
   caption: string;
   /** SVG from src/plots, which escapes every text it draws. */
   svg: string;
@@ -107,6 +116,20 @@ export function plotInputs(worked: WorkedAt, r: CheckResult, units: Units, face:
         },
         opts,
       ),
+    });
+  }
+  const opening = r.notch.opening;
+  if (opening) {
+    figures.push({
+      id: "opening",
+      caption:
+        "The opening's outline coloured by its edge stress per unit nominal hoop stress at maximum pressure, the governing point, the fastener holes with their Kt, and the curvature parameter.",
+      svg: openingPicture(opening, opts),
+    });
+    figures.push({
+      id: "edge-stress",
+      caption: "Edge stress per unit nominal hoop stress against arc length round the opening (plane-elasticity solution for its shape).",
+      svg: edgeStressPlot(opening, opts),
     });
   }
   if (r.spectrum) {
