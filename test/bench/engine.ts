@@ -5,6 +5,7 @@ import { checkDocument } from "../../src/engine/index.ts";
 import { minerDamage } from "../../src/engine/miner.ts";
 import { countHistory } from "../../src/engine/rainflowMatrix.ts";
 import { basquinLife } from "../../src/engine/sn.ts";
+import { solveOpening } from "../../src/engine/openings/index.ts";
 
 /** Median of `runs` timings of `fn`, in milliseconds, after a warm-up. */
 export function medianMs(fn: () => void, runs: number, warmup = 5): number {
@@ -107,4 +108,25 @@ export function rainflowBench(points = 1_000_000, shape: "random" | "flights" = 
     peakExtraMemory_overInput: peak / history.byteLength,
     checksum,
   };
+}
+
+/**
+ * The plane-elasticity solution of the cabin demo's window with its fastener row, solved afresh
+ * each run (a new corner radius by 1e-9 mm defeats the solution cache), against one full check of
+ * the format example, which has no shaped opening.
+ */
+export function openingBench() {
+  const full = medianMs(() => checkDocument(example), 100);
+  const c = DEMOS[0].document.cutout as { fasteners?: { hoop_mm: number; axial_mm: number; radius_mm: number }[] };
+  let k = 0;
+  const solve_ms = medianMs(
+    () =>
+      solveOpening(
+        { kind: "rounded-rectangle", halfWidthAlongHoop_mm: 115, halfLengthAlongAxial_mm: 160, cornerRadius_mm: 55 + 1e-9 * ++k },
+        c.fasteners ?? [],
+      ),
+    15,
+    2,
+  );
+  return { solve_ms, fullCheck_ms: full, ratio: solve_ms / full };
 }
