@@ -1,3 +1,4 @@
+import { VERDICT_WORDS } from "../src/engine/index.ts";
 import { CAUTION_SHORT } from "./cautions.tsx";
 import { isoDate } from "./format.ts";
 import { typeset } from "./math.tsx";
@@ -48,13 +49,7 @@ export function Front({ m }: { m: SheetModel }) {
         <span class="why">{STATE_MEANS[mark.state]}</span>
       </div>
       <div class="outcome">
-        <div class={`verdict ${r.verdict}`}>
-          {r.verdict === "pass"
-            ? "Screening outcome: PASSES"
-            : r.verdict === "refer"
-              ? "Screening outcome: REFER (beyond this screening)"
-              : "Screening outcome: DOES NOT PASS"}
-        </div>
+        <div class={`verdict ${r.verdict}`}>Screening outcome: {VERDICT_WORDS[r.verdict].outcome}</div>
         <div class="governs">
           <b>Governing check:</b> {typeset(r.governing.text)}.
         </div>

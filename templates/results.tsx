@@ -1,4 +1,4 @@
-import type { CheckResult, VerdictRow } from "../src/engine/index.ts";
+import { VERDICT_WORDS, type CheckResult, type VerdictRow } from "../src/engine/index.ts";
 import { capitalise, life, margin, sig } from "./format.ts";
 import { typeset } from "./math.tsx";
 import type { SheetModel } from "./model.ts";
@@ -16,8 +16,7 @@ export function Results({ m, num }: { m: SheetModel; num: number }) {
       </h2>
       <div class="keep">
         <h3>
-          {num}.1 Verdict:{" "}
-          {r.verdict === "pass" ? "passes" : r.verdict === "refer" ? "refer: outside what this screening can judge" : "does not pass"}
+          {num}.1 Verdict: {VERDICT_WORDS[r.verdict].meaning}
         </h3>
         <VerdictTable r={r} />
       </div>

@@ -31,7 +31,7 @@ export async function sheetCommand(args: string[], io: Io): Promise<number> {
     if (out === "-") io.stdout.write(sheet.pdf);
     else writeAtomically(out!, sheet.pdf);
     io.stderr.write(
-      `wrote ${out === "-" ? "the sheet to standard output" : out}: verdict ${sheet.result.verdict}, fingerprint ${sheet.fingerprint}\n`,
+      `wrote ${out === "-" ? "the sheet to standard output" : out}: verdict ${sheet.result.verdict} (${sheet.result.verdictMeaning}), fingerprint ${sheet.fingerprint}\n`,
     );
     return 0;
   } catch (err) {

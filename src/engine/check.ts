@@ -4,17 +4,17 @@ import type { ResolvedCheck } from "./input.ts";
 import { fitCoupons } from "./coupons.ts";
 import { crackGrowth } from "./crack.ts";
 import { InputError } from "./errors.ts";
-import { evaluate, evaluationSteps, type Context, type Evaluation } from "./evaluate.ts";
+import { cycleAtPoint, evaluate, evaluationSteps, type Context, type Evaluation } from "./evaluate.ts";
 import { evaluateEvidence } from "./evidence.ts";
 import { resolveLoad, type Load } from "./load.ts";
 import { CRITERION_LABEL } from "./meanStress.ts";
 import type { CheckResult, CriterionRow } from "./result.ts";
-import { modifyingFactors, VALID_LIFE } from "./sn.ts";
+import { BELOW_LIMIT_SOURCE, enduranceLimitInUse, modifyingFactors, VALID_LIFE } from "./sn.ts";
 import { solveFor } from "./solvers.ts";
 import { normalQuantile } from "./special.ts";
 import { fmt, step, type Step } from "./step.ts";
 import { inSheetOrder } from "./sections.ts";
-import { verdictTable } from "./verdict.ts";
+import { EXTERNAL_PRESSURE_WORDS, VERDICT_WORDS, verdictTable } from "./verdict.ts";
 import { ENGINE_VERSION } from "./version.ts";
 
 /**
@@ -25,7 +25,7 @@ import { ENGINE_VERSION } from "./version.ts";
 export function runCheck(input: ResolvedCheck): CheckResult {
   const steps: Step[] = [];
   const warnings: string[] = [];
-  const load = resolveLoad(input.pressure);
+  const load = resolveLoad(input.pressure, input.fatigue.designLife_cycles > 1);
   if (!load.isSpectrum && load.min_MPa >= load.max_MPa) {
     throw new InputError(
       "pressure.min_MPa",
@@ -47,16 +47,58 @@ export function runCheck(input: ResolvedCheck): CheckResult {
   }
   const coefficient = mat.fatigueStrengthCoefficient_MPa ?? fit?.fatigueStrengthCoefficient_MPa ?? NaN;
   const exponent = mat.fatigueStrengthExponent ?? fit?.fatigueStrengthExponent ?? NaN;
-  if (fit && mat.fatigueStrengthCoefficient_MPa !== undefined)
+  const fitUsed = fit !== undefined && mat.fatigueStrengthCoefficient_MPa === undefined;
+  if (fit && !fitUsed)
     warnings.push("coupons were given but σ'f and b were given too; the given σ'f and b are used and the fit is shown for comparison");
-  const mods = modifyingFactors(input.fatigue.modifiers, mat.ultimate_MPa, normalQuantile);
+  if (fitUsed && mat.libraryCurve)
+    warnings.push(
+      `the curve is fitted to the coupons given (σ'f = ${fmt(coefficient)} MPa, b = ${fmt(exponent)}); the library's σ'f = ${fmt(mat.libraryCurve.fatigueStrengthCoefficient_MPa)} MPa and b = ${fmt(mat.libraryCurve.fatigueStrengthExponent)} for ${mat.name} are shown for comparison only`,
+    );
+  const curveKind = input.fatigue.curve;
+  const steelLike = mat.family === "steel" || mat.family === "stainless";
+  const defaultSurface = curveKind === "basquin" && !fitUsed && steelLike && mat.surface && input.fatigue.modifiers?.surface === undefined;
+  const modifiers = defaultSurface ? { ...input.fatigue.modifiers, surface: mat.surface } : input.fatigue.modifiers;
+  const mods = modifyingFactors(
+    modifiers,
+    mat.ultimate_MPa,
+    normalQuantile,
+    mat.family,
+    defaultSurface ? "the library entry's as-delivered finish; fatigue.modifiers.surface changes it" : undefined,
+  );
   steps.push(...mods.steps);
   warnings.push(...mods.warnings);
+  const se =
+    curveKind === "basquin"
+      ? enduranceLimitInUse(
+          mat.enduranceLimit_MPa,
+          coefficient,
+          exponent,
+          mat.family,
+          mat.id !== undefined && input.document.material.enduranceLimit_MPa === undefined,
+        )
+      : { value: undefined, steps: [], warnings: [] };
+  steps.push(...se.steps);
+  warnings.push(...se.warnings);
+  const belowLimit = input.fatigue.belowEnduranceLimit;
+  if (se.value !== undefined && load.isSpectrum)
+    steps.push(
+      step(
+        "below-endurance-limit",
+        "Spectrum cycles below the endurance limit",
+        belowLimit === "haibach" ? "N = N_knee·(k·Se/σar)^(2m − 1), m = −1/b" : "N = ½·(σar/(k·σ'f))^(1/b) below k·Se too",
+        belowLimit === "haibach"
+          ? `slope 2m − 1 = ${fmt(2 * (-1 / exponent) - 1)} below k·Se = ${fmt(se.value * mods.factor)} MPa`
+          : `slope m = ${fmt(-1 / exponent)} below k·Se = ${fmt(se.value * mods.factor)} MPa`,
+        belowLimit === "haibach" ? 2 * (-1 / exponent) - 1 : -1 / exponent,
+        "—",
+        BELOW_LIMIT_SOURCE[belowLimit],
+      ),
+    );
 
   const ctx: Context = {
     input,
     load,
-    curve: { coefficient_MPa: coefficient, exponent, enduranceLimit_MPa: mat.enduranceLimit_MPa, factor: mods.factor },
+    curve: { coefficient_MPa: coefficient, exponent, enduranceLimit_MPa: se.value, factor: mods.factor, belowLimit },
     strengths: {
       ultimate_MPa: mat.ultimate_MPa,
       yield_MPa: mat.yield_MPa,
@@ -78,6 +120,7 @@ export function runCheck(input: ResolvedCheck): CheckResult {
     fingerprint: fingerprint(input.document),
     title: input.title,
     verdict: "pass",
+    verdictMeaning: "",
     governs: "",
     governing: { rowId: "static", text: "" },
     load: { pressureMax_MPa: load.max_MPa, pressureMin_MPa: load.min_MPa, source: load.source },
@@ -142,7 +185,7 @@ export function runCheck(input: ResolvedCheck): CheckResult {
       curveUsed: {
         fatigueStrengthCoefficient_MPa: coefficient,
         fatigueStrengthExponent: exponent,
-        enduranceLimit_MPa: mat.enduranceLimit_MPa ?? null,
+        enduranceLimit_MPa: se.value ?? null,
       },
       criteria,
       pass: e.damage !== null && e.damage <= 1,
@@ -157,9 +200,12 @@ export function runCheck(input: ResolvedCheck): CheckResult {
   if (fit) result.materialFit = fitSummary(fit, mat.coupons ?? []);
   if (load.isSpectrum) {
     const totalCycles = load.cycles.reduce((s, c) => s + c.count, 0);
-    const k = e.notch.kf * e.unit.hoop;
+    const extra = input.axialExtra ?? { max_MPa: 0, min_MPa: 0 };
     result.spectrum = {
-      cycles: load.cycles.map((c) => ({ range_MPa: k * c.range, mean_MPa: k * c.mean, count: c.count })),
+      cycles: load.cycles.map((c) => {
+        const o = cycleAtPoint(ctx, criterion, e.point, e.unit, extra, 1, c.range, c.mean, e.theory === "thick", true);
+        return { range_MPa: 2 * o.amplitude, mean_MPa: o.mean, count: c.count };
+      }),
       totalCycles,
       damagePerPass: e.damagePerPass,
       passesToFailure: e.life,
@@ -175,15 +221,35 @@ export function runCheck(input: ResolvedCheck): CheckResult {
   }
   if (input.crack) addCrack(result, input, e, load, steps, warnings);
   if (input.evidence) {
-    const ev = evaluateEvidence(input.evidence, input.fatigue.designLife_cycles, input.fatigue.scatterFactor);
+    // Test lives are in cycles; with a spectrum the design life counts passes: convert before comparing.
+    const cyclesPerPass = load.isSpectrum ? load.cycles.reduce((s, c) => s + c.count, 0) : 1;
+    const designCycles = input.fatigue.designLife_cycles * cyclesPerPass;
+    if (load.isSpectrum)
+      steps.push(
+        step(
+          "evidence-design-cycles",
+          "Design life in cycles, for comparison with test lives in cycles",
+          "N_design = B_design × n_pass",
+          `N_design = ${fmt(input.fatigue.designLife_cycles)} passes × ${fmt(cyclesPerPass)} cycles per pass`,
+          designCycles,
+          "cycles",
+          "unit conversion: test lives count cycles, the design life counts passes of the spectrum",
+        ),
+      );
+    const ev = evaluateEvidence(input.evidence, designCycles, input.fatigue.scatterFactor);
     const { steps: evidenceSteps, warnings: evidenceWarnings, ...evidence } = ev;
-    result.evidence = evidence;
+    result.evidence = { ...evidence, designLife_cycles: designCycles };
+    if (load.isSpectrum)
+      evidenceWarnings.push(
+        `the test lives (cycles) are compared with the design life converted to cycles, ${fmt(designCycles)} = ${fmt(input.fatigue.designLife_cycles)} passes × ${fmt(cyclesPerPass)} cycles per pass; tests at one amplitude do not reproduce the spectrum's mix of cycles, so the comparison is approximate`,
+      );
     steps.push(...evidenceSteps);
     warnings.push(...evidenceWarnings);
   }
   const table = verdictTable(result);
   result.verdictTable = table.rows;
   result.verdict = table.verdict;
+  result.verdictMeaning = VERDICT_WORDS[table.verdict].meaning;
   result.governs = table.governs;
   result.governing = table.governing;
   const ordered = inSheetOrder(result.steps);
@@ -330,6 +396,14 @@ function validityWarnings(ctx: Context, e: Evaluation): string[] {
       `thin-wall theory was asked for at r_m/t = ${fmt(ratio)}, below 10: it under-estimates the inner-surface hoop stress by ${fmt(100 * (thick / e.hoopMax - 1), 2)} %; use "auto" or "thick"`,
     );
   }
+  if (e.theory === "thick" && input.cutout.kind !== "none")
+    w.push(
+      `the wall is thick (r_m/t = ${fmt(ratio)}): the concentration factor of the opening is a flat-plate (membrane) solution, outside its range where the stress varies through the wall and the bore carries a radial stress; the local stress is an estimate, and a nozzle or opening in a thick wall needs a method for it (the governing code's nozzle rules or a finite-element model)`,
+    );
+  if (ctx.load.min_MPa < 0)
+    w.push(
+      `the pressure differential falls below zero (to ${fmt(ctx.load.min_MPa)} MPa): an outside pressure can buckle the shell, which this tool does not check; the item ${EXTERNAL_PRESSURE_WORDS}`,
+    );
   if (e.localYield) {
     w.push(
       `the elastic local stress at the notch (${fmt(e.peakMax)} MPa) exceeds the yield strength (${fmt(input.material.yield_MPa)} MPa): the notch yields on the first cycle. ` +
@@ -354,10 +428,44 @@ function validityWarnings(ctx: Context, e: Evaluation): string[] {
         `the life (${fmt(e.life)} cycles) extrapolates the curve beyond 10⁷ cycles, past typical test data and with no endurance limit given`,
       );
   }
+  if (input.fatigue.curve === "basquin" && ctx.load.isSpectrum && e.life !== null && e.life > 0) {
+    // The same life-range limits, cycle by cycle at the governing point.
+    const extra = input.axialExtra ?? { max_MPa: 0, min_MPa: 0 };
+    let shortest = Infinity;
+    let beyondDamage = 0;
+    let damage = 0;
+    for (const c of ctx.load.cycles) {
+      const o = cycleAtPoint(ctx, input.fatigue.meanStress, e.point, e.unit, extra, 1, c.range, c.mean, e.theory === "thick", true);
+      if (o.life === null || !(o.life > 0)) continue;
+      shortest = Math.min(shortest, o.life);
+      damage += c.count / o.life;
+      if (o.life > VALID_LIFE[1]) beyondDamage += c.count / o.life;
+    }
+    if (shortest < VALID_LIFE[0])
+      w.push(
+        `the largest cycles of the spectrum have lives of ${fmt(shortest)} cycles, below 10³ cycles, where local plasticity makes stress-life curves unreliable; a strain-life analysis is needed`,
+      );
+    if (beyondDamage > 0 && ctx.curve.enduranceLimit_MPa === undefined)
+      w.push(
+        `${fmt((100 * beyondDamage) / damage, 2)} % of the damage per pass comes from cycles whose lives extrapolate the curve beyond 10⁷ cycles, past typical test data and with no endurance limit given`,
+      );
+  }
+  const coupons = input.material.coupons?.filter((c) => !c.runout) ?? [];
+  if (coupons.length && input.fatigue.curve === "basquin" && input.material.fatigueStrengthCoefficient_MPa === undefined) {
+    const lo = Math.min(...coupons.map((c) => c.amplitude_MPa));
+    const hi = Math.max(...coupons.map((c) => c.amplitude_MPa));
+    const sar = e.governing.sigmaAr;
+    if (sar !== null && sar > 0 && (sar < lo * (1 - 1e-9) || sar > hi * (1 + 1e-9)))
+      w.push(
+        `the operating equivalent amplitude (${fmt(sar)} MPa) lies outside the range of the coupons that failed (${fmt(lo)}–${fmt(hi)} MPa): the fitted curve is extrapolated there`,
+      );
+  }
   if (input.fatigue.scatterFactor === 1)
     w.push("the scatter factor is 1: the life is a median estimate with no statistical allowance for the weaker items of a fleet");
   if (e.damage !== null && e.damage > 1)
-    w.push(`the allowable life (${fmt(e.allowable ?? 0)}) is short of the design life (${fmt(input.fatigue.designLife_cycles)})`);
+    w.push(
+      `the allowable life (${fmt(e.allowable ?? 0)} ${ctx.load.isSpectrum ? "passes" : "cycles"}) is short of the design life (${fmt(input.fatigue.designLife_cycles)} ${ctx.load.isSpectrum ? "passes" : "cycles"})`,
+    );
   return w;
 }
 

@@ -10,6 +10,8 @@ export type { Step } from "./step.ts";
 export { ENGINE_VERSION } from "./version.ts";
 export { fingerprint } from "./fingerprint.ts";
 export { parseCheck, type ParseResult, type ResolvedCheck, type ResolvedMaterial } from "./input.ts";
+export { VERDICT_WORDS } from "./verdict.ts";
+export type { Verdict } from "./result.ts";
 
 export type Outcome = { ok: true; result: CheckResult } | { ok: false; errors: FieldError[] };
 

@@ -1,6 +1,6 @@
 import { toFieldErrors, type FieldError } from "../schema/errors.ts";
 import { MATERIALS, findMaterial, TYPICAL_FLAG } from "../materials/library.ts";
-import { checkSchema, type MaterialFamily, type ParsedCheck } from "../schema/check.ts";
+import { checkSchema, type MaterialFamily, type ParsedCheck, type SurfaceFinish } from "../schema/check.ts";
 
 /**
  * The engine's input: a check document validated by the schema, then resolved against the
@@ -24,6 +24,10 @@ export interface ResolvedMaterial {
   parisC?: number;
   parisM?: number;
   coupons?: { amplitude_MPa: number; life_cycles: number; runout: boolean }[];
+  /** The library entry's as-delivered surface finish (surface factor when the user names none). */
+  surface?: SurfaceFinish;
+  /** The library's σ'f and b when the user's coupons replace them: shown for comparison only. */
+  libraryCurve?: { fatigueStrengthCoefficient_MPa: number; fatigueStrengthExponent: number };
   source: string;
 }
 
@@ -48,6 +52,15 @@ export function resolveCheck(parsed: ParsedCheck): { ok: true; value: ResolvedCh
       return { ok: false, errors };
     }
     base = { ...lib, source: `${lib.source} (${TYPICAL_FLAG})` };
+    // The user's own coupons win over the library's curve: the fit replaces σ'f and b unless the user gave them too.
+    if (m.coupons && m.fatigueStrengthCoefficient_MPa === undefined && m.fatigueStrengthExponent === undefined) {
+      const { fatigueStrengthCoefficient_MPa, fatigueStrengthExponent, ...rest } = lib;
+      base = {
+        ...rest,
+        source: `${lib.source} (${TYPICAL_FLAG})`,
+        libraryCurve: { fatigueStrengthCoefficient_MPa, fatigueStrengthExponent },
+      };
+    }
   }
   const merged = { ...base, ...stripUndefined(m) } as Partial<ResolvedMaterial> & { name?: string };
   const need = (key: keyof ResolvedMaterial, words: string, why = "") => {

@@ -24,8 +24,28 @@ export interface Load {
   steps: Step[];
 }
 
-/** The pressure loading in MPa, counted into cycles once so solvers can rescale it without recounting. */
-export function resolveLoad(p: ResolvedCheck["pressure"]): Load {
+/**
+ * A history that repeats, rotated to start (and end) at its highest point, so that counting it once
+ * counts the repeating sequence: the largest cycle is then a full cycle in every pass instead of two
+ * halves that never meet, and the join from the last point back to the first is counted too
+ * (ASTM E1049-85 §5.4.4 practice for repeated histories: begin at the highest peak or lowest valley).
+ */
+export function rotateToPeak(h: ArrayLike<number>): Float64Array {
+  let k = 0;
+  for (let i = 1; i < h.length; i++) if (h[i] > h[k]) k = i;
+  const out = new Float64Array(h.length + 1);
+  let j = 0;
+  for (let i = k; i < h.length; i++) out[j++] = h[i];
+  for (let i = 0; i <= k; i++) out[j++] = h[i];
+  return out;
+}
+
+/**
+ * The pressure loading in MPa, counted into cycles once so solvers can rescale it without recounting.
+ * `repeated`: the history is one pass of many (a design life of more than one pass), so it is counted
+ * as a repeating sequence; a single pass is counted as it stands.
+ */
+export function resolveLoad(p: ResolvedCheck["pressure"], repeated = false): Load {
   if (p.history_MPa) {
     const gate = p.gate_MPa ?? 0;
     const gated = gate > 0 ? gateHistory(p.history_MPa, gate) : undefined;
@@ -34,7 +54,8 @@ export function resolveLoad(p: ResolvedCheck["pressure"]): Load {
         "pressure.gate_MPa",
         `the hysteresis gate (${fmt(gate)} MPa) is larger than every range of the history, so no cycle is left to count; lower it`,
       );
-    const counted = countHistory(gated ? gated.series : p.history_MPa);
+    const source = gated ? gated.series : p.history_MPa;
+    const counted = countHistory(repeated ? rotateToPeak(source) : source);
     const cycles = counted.cycles;
     const total = cycles.reduce((s, c) => s + c.count, 0);
     const binned =
@@ -67,10 +88,16 @@ export function resolveLoad(p: ResolvedCheck["pressure"]): Load {
           "rainflow",
           "Rainflow count of the pressure history",
           "cycles = rainflow(p(t))",
-          `${gated ? `${gated.series.length} gated reversals of ${p.history_MPa.length} points` : `${p.history_MPa.length} points`} → ${cycles.length} distinct cycles, ${fmt(total)} cycles in all${binned}`,
+          `${gated ? `${gated.series.length} gated reversals of ${p.history_MPa.length} points` : `${p.history_MPa.length} points`} → ${cycles.length} distinct cycles, ${fmt(total)} cycles per pass${binned}${
+            repeated
+              ? "; repeated history: rotated to start and end at its highest point, so the largest cycle counts whole in every pass"
+              : "; a single pass, counted as it stands (half cycles left open)"
+          }`,
           total,
           "cycles",
-          "ASTM E1049-85, §5.4.4 (rainflow counting)",
+          repeated
+            ? "ASTM E1049-85, §5.4.4 (rainflow counting; repeated histories begin at the highest peak)"
+            : "ASTM E1049-85, §5.4.4 (rainflow counting)",
         ),
       ],
     };

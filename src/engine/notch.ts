@@ -25,10 +25,35 @@ export interface NotchFactor {
   warnings: string[];
 }
 
-export function notchFactor(
-  kt: number,
-  opts: { q?: number; constant?: "peterson" | "neuber"; rootRadius_mm?: number; family: MaterialFamily; ultimate_MPa: number },
-): NotchFactor {
+export interface NotchOptions {
+  q?: number;
+  constant?: "peterson" | "neuber";
+  rootRadius_mm?: number;
+  family: MaterialFamily;
+  ultimate_MPa: number;
+}
+
+/** Kf = 1 + q·(Kt − 1), with q given, worked from a root radius, or 1. */
+export function notchFactor(kt: number, opts: NotchOptions): NotchFactor {
+  const s = notchSensitivity(opts);
+  return { q: s.q, kf: 1 + s.q * (kt - 1), steps: [...s.steps, kfStep(kt, s.q)], warnings: s.warnings };
+}
+
+/** The worked Kf line. */
+export function kfStep(kt: number, q: number): Step {
+  return step(
+    "kf",
+    "Fatigue notch factor",
+    "Kf = 1 + q·(Kt − 1)",
+    `Kf = 1 + ${fmt(q)} × (${fmt(kt)} − 1)`,
+    1 + q * (kt - 1),
+    "—",
+    "Peterson; Shigley's Mechanical Engineering Design, eq. 6-32",
+  );
+}
+
+/** Notch sensitivity q: given, from Peterson's or Neuber's constant and the root radius, or 1 (Kf = Kt, conservative). */
+export function notchSensitivity(opts: NotchOptions): { q: number; steps: Step[]; warnings: string[] } {
   const steps: Step[] = [];
   const warnings: string[] = [];
   let q = opts.q ?? 1;
@@ -107,17 +132,5 @@ export function notchFactor(
       );
     }
   }
-  const kf = 1 + q * (kt - 1);
-  steps.push(
-    step(
-      "kf",
-      "Fatigue notch factor",
-      "Kf = 1 + q·(Kt − 1)",
-      `Kf = 1 + ${fmt(q)} × (${fmt(kt)} − 1)`,
-      kf,
-      "—",
-      "Peterson; Shigley's Mechanical Engineering Design, eq. 6-32",
-    ),
-  );
-  return { q, kf, steps, warnings };
+  return { q, steps, warnings };
 }

@@ -18,10 +18,16 @@ export interface CriterionRow {
   chosen: boolean;
 }
 
+/**
+ * The verdict: "refer" when the item is outside what this screening can judge (external pressure, a
+ * method used outside its range in a way that could be unconservative) and needs an analysis beyond it.
+ */
+export type Verdict = "pass" | "fail" | "refer";
+
 export interface VerdictRow {
-  id: "static" | "fatigue" | "crack" | "evidence" | "leak-before-break" | "opening";
+  id: "static" | "fatigue" | "crack" | "evidence" | "leak-before-break" | "external-pressure" | "opening" | (string & {});
   title: string;
-  /** "refer": outside what this screening can judge; an analysis beyond it is needed. */
+  /** "refer": this row cannot be judged here and needs an analysis beyond this screening. */
   status: "pass" | "fail" | "info" | "refer";
   /** Plain-words statement of the demand against the capacity. */
   detail: string;
@@ -40,7 +46,9 @@ export interface CheckResult {
   engine: string;
   fingerprint: string;
   title?: string;
-  verdict: "pass" | "fail" | "refer";
+  verdict: Verdict;
+  /** The verdict in plain words. */
+  verdictMeaning: string;
   /** What governs, in words: the governing row's title and detail. */
   governs: string;
   /** The same as a structure, so no face has to find the row by matching the sentence. */
@@ -117,7 +125,8 @@ export interface CheckResult {
     curve: { a_mm: number; n_cycles: number }[];
     leakBeforeBreak: { leakBeforeBreak: boolean; throughWallHalfLength_mm: number; criticalHalfLength_mm: number } | null;
   };
-  evidence?: Omit<EvidenceResult, "steps" | "warnings">;
+  /** `designLife_cycles`: the design life the lives are compared with, in cycles (passes × cycles per pass for a spectrum). */
+  evidence?: Omit<EvidenceResult, "steps" | "warnings"> & { designLife_cycles: number };
   materialFit?: {
     fatigueStrengthCoefficient_MPa: number;
     fatigueStrengthExponent: number;
@@ -135,7 +144,22 @@ export interface CheckResult {
     passesToFailure: number | null;
     historyPoints?: number;
   };
-  solution?: { thickness_mm?: number; pressureMax_MPa?: number; governs: string; iterations: number; evaluations: number };
+  solution?: {
+    /** The thickness to use: the solved minimum rounded up to the next available gauge. */
+    thickness_mm?: number;
+    /** The solved minimum before rounding. */
+    requiredThickness_mm?: number;
+    /** Which thicknesses it was rounded to, in words. */
+    roundedTo?: string;
+    /** Fatigue damage and static margin at the rounded thickness. */
+    damageAtThickness?: number | null;
+    staticMarginAtThickness?: number;
+    pressureMax_MPa?: number;
+    /** The check that binds at the solution. */
+    governs: string;
+    iterations: number;
+    evaluations: number;
+  };
   lifeVsThickness: { thickness_mm: number; life_cycles: number | null }[];
   verdictTable: VerdictRow[];
   material: { id?: string; name: string; source: string; typical: boolean };

@@ -1,4 +1,4 @@
-import type { SurfaceFinish } from "../schema/check.ts";
+import type { MaterialFamily, SurfaceFinish } from "../schema/check.ts";
 import { fmt, step, type Step } from "./step.ts";
 
 /**
@@ -15,17 +15,93 @@ export interface Curve {
   enduranceLimit_MPa?: number;
   /** Product of the modifying factors, 1 when none are chosen. */
   factor: number;
+  /**
+   * Below the endurance limit in a spectrum: "haibach" continues the curve with slope 2m − 1
+   * (m = −1/b), "elementary" continues it with slope m (elementary Miner). Constant amplitude
+   * below the limit stays unlimited whichever is chosen.
+   */
+  belowLimit?: BelowLimit;
 }
+
+export type BelowLimit = "haibach" | "elementary";
+
+export const BELOW_LIMIT_SOURCE: Record<BelowLimit, string> = {
+  haibach:
+    "Haibach's extension of the S-N curve below the endurance limit with slope 2m − 1 (Haibach 1970; as in EN 1993-1-9's slope 5 after slope 3, and the FKM guideline; from memory)",
+  elementary: "elementary Miner: the S-N curve continued below the endurance limit with its own slope (Dowling §9.6, from memory)",
+};
+
+/** The knee: where the curve meets the endurance limit. Steels: 10⁶ cycles (Shigley §6-7). */
+export const KNEE_CYCLES = 1e6;
 
 /** Lives outside this range are outside typical stress-life data (common practice: 10³ to 10⁷ cycles). */
 export const VALID_LIFE: readonly [number, number] = [1e3, 1e7];
 
-export function basquinLife(sigmaAr: number, c: Curve): number | null {
+/**
+ * Cycles to failure at an equivalent fully reversed amplitude. At or below the endurance limit the life
+ * is unlimited, unless `spectrum` is set and the curve says how to continue below it (Haibach or
+ * elementary Miner), so that small cycles of a spectrum are not taken as harmless.
+ */
+export function basquinLife(sigmaAr: number, c: Curve, spectrum = false): number | null {
   if (sigmaAr <= 0) return null;
-  if (c.enduranceLimit_MPa !== undefined && sigmaAr <= c.enduranceLimit_MPa * c.factor) return null;
-  const life = 0.5 * (sigmaAr / (c.coefficient_MPa * c.factor)) ** (1 / c.exponent);
+  const k = c.coefficient_MPa * c.factor;
+  if (c.enduranceLimit_MPa !== undefined && sigmaAr <= c.enduranceLimit_MPa * c.factor) {
+    if (!spectrum || c.belowLimit === undefined) return null;
+    const se = c.enduranceLimit_MPa * c.factor;
+    const kneeLife = 0.5 * (se / k) ** (1 / c.exponent);
+    const m = -1 / c.exponent;
+    const slope = c.belowLimit === "haibach" ? 2 * m - 1 : m;
+    const life = kneeLife * (se / sigmaAr) ** slope;
+    return Number.isFinite(life) ? life : null;
+  }
+  const life = 0.5 * (sigmaAr / k) ** (1 / c.exponent);
   // Past the largest double the life is unlimited for any purpose; Infinity would reach JSON as null unexplained.
   return Number.isFinite(life) ? life : null;
+}
+
+/**
+ * The endurance limit in use: the given one (library or user), never above the curve at the knee.
+ * A limit above the curve at 10⁶ cycles would declare unlimited every amplitude between the two,
+ * where the curve itself gives a finite life, so it is brought down to the curve there and a warning
+ * says so. Aluminium alloys have no endurance limit and titanium alloys no dependable one: a limit
+ * given for them warns.
+ */
+export function enduranceLimitInUse(
+  given: number | undefined,
+  coefficient_MPa: number,
+  exponent: number,
+  family: MaterialFamily,
+  fromLibrary: boolean,
+): { value: number | undefined; steps: Step[]; warnings: string[] } {
+  const steps: Step[] = [];
+  const warnings: string[] = [];
+  if (given === undefined || !Number.isFinite(coefficient_MPa) || !Number.isFinite(exponent)) return { value: given, steps, warnings };
+  const atKnee = coefficient_MPa * (2 * KNEE_CYCLES) ** exponent;
+  const value = Math.min(given, atKnee);
+  steps.push(
+    step(
+      "endurance-knee",
+      "Endurance limit, no higher than the curve at its knee (10⁶ cycles)",
+      "Se = min(Se,given, σ'f·(2·10⁶)^b)",
+      `Se = min(${fmt(given)}, ${fmt(coefficient_MPa)} × (2×10⁶)^(${fmt(exponent)}) = ${fmt(atKnee)})`,
+      value,
+      "MPa",
+      "knee of the S-N curve of steels at 10⁶ cycles (Shigley's Mechanical Engineering Design §6-7); consistency of the limit with the curve",
+    ),
+  );
+  if (given > atKnee * (1 + 1e-9))
+    warnings.push(
+      `the ${fromLibrary ? "library's" : "given"} endurance limit (${fmt(given)} MPa) lies above the material's own S-N curve at 10⁶ cycles (${fmt(atKnee)} MPa): every amplitude between them would be called unlimited although the curve gives a finite life. The limit is taken as ${fmt(atKnee)} MPa.`,
+    );
+  if (family === "aluminium")
+    warnings.push(
+      "an endurance limit was given for an aluminium alloy, but aluminium alloys have none: their S-N curves keep falling beyond 10⁷ cycles. Lives called unlimited here rest on that assumption; remove the limit for a conservative check.",
+    );
+  if (family === "titanium")
+    warnings.push(
+      "an endurance limit was given for a titanium alloy; titanium alloys show no dependable endurance limit (their curves flatten but keep falling, and surface and environment lower them). Lives called unlimited here rest on that assumption.",
+    );
+  return { value, steps, warnings };
 }
 
 /** Amplitude the curve allows at N cycles (inverse of basquinLife, ignoring the endurance limit). */
@@ -55,11 +131,18 @@ export function modifyingFactors(
   mods: Modifiers | undefined,
   ultimate_MPa: number,
   normalQuantile: (p: number) => number,
+  family: MaterialFamily = "steel",
+  surfaceFrom?: string,
 ): { factor: number; steps: Step[]; warnings: string[] } {
   const steps: Step[] = [];
   const warnings: string[] = [];
   let factor = 1;
   if (!mods) return { factor, steps, warnings };
+  const steelLike = family === "steel" || family === "stainless";
+  if (!steelLike && (mods.surface !== undefined || mods.sizeDiameter_mm !== undefined))
+    warnings.push(
+      `the surface and size factors (Marin) are published for steels; for ${family === "other" ? "a material of unstated family" : `a ${family} alloy`} they are an assumption outside their data. They are applied (they lower the curve), but factors measured for this family should replace them.`,
+    );
   if (mods.surface) {
     const [a, b] = SURFACE[mods.surface];
     const ka = Math.min(1, a * ultimate_MPa ** b);
@@ -67,7 +150,7 @@ export function modifyingFactors(
     steps.push(
       step(
         "marin-ka",
-        `Surface factor (${mods.surface})`,
+        `Surface factor (${mods.surface}${surfaceFrom ? `, ${surfaceFrom}` : ""})`,
         "ka = a·Su^b",
         `ka = ${fmt(a)} × ${fmt(ultimate_MPa)}^(${fmt(b)})`,
         ka,

@@ -1,14 +1,30 @@
-import type { CheckResult, VerdictRow } from "./result.ts";
+import type { CheckResult, Verdict, VerdictRow } from "./result.ts";
 import { fmt } from "./step.ts";
 
 /**
  * The verdict table: one row per check made, with what was demanded against what is allowed.
- * The verdict fails if any row fails; "info" rows (inspection intervals, leak-before-break)
- * inform without deciding. What governs is the failing row, or else the row with the least reserve.
+ * The verdict fails if any row fails, else it refers if any row refers (outside what this screening
+ * can judge), else it passes; "info" rows (inspection intervals, leak-before-break) inform without
+ * deciding. What governs is the first failing row, else the first referring row, else the row with
+ * the least reserve.
  */
+/** The verdict in plain words, for every face (page, sheet, CLI, API). */
+export const VERDICT_WORDS: Record<Verdict, { short: string; badge: string; outcome: string; meaning: string }> = {
+  pass: { short: "passes", badge: "Passes", outcome: "PASSES", meaning: "passes this screening check" },
+  fail: { short: "fails", badge: "Fails", outcome: "DOES NOT PASS", meaning: "does not pass this screening check" },
+  refer: {
+    short: "refer",
+    badge: "Refer",
+    outcome: "REFER: NEEDS AN ANALYSIS BEYOND THIS SCREENING",
+    meaning: "refer: outside what this screening can judge; an analysis beyond it is needed before the item is accepted",
+  },
+};
+
+export const EXTERNAL_PRESSURE_WORDS = "needs a buckling check to the governing code";
+
 export function verdictTable(r: CheckResult): {
   rows: VerdictRow[];
-  verdict: "pass" | "fail" | "refer";
+  verdict: Verdict;
   governs: string;
   governing: CheckResult["governing"];
 } {
@@ -78,8 +94,8 @@ export function verdictTable(r: CheckResult): {
       detail:
         ev.lowerBound_cycles === null
           ? `no bound: ${ev.n} test life without an assumed scatter cannot bound a fleet's life`
-          : `lower bound ${fmt(ev.lowerBound_cycles)} cycles against a design life of ${fmt(f.designLife_cycles)} cycles`,
-      margin: ev.lowerBound_cycles === null ? null : ev.lowerBound_cycles / f.designLife_cycles - 1,
+          : `lower bound ${fmt(ev.lowerBound_cycles)} cycles against a design life of ${fmt(ev.designLife_cycles)} cycles${f.lifeCountedIn === "passes" ? ` (${fmt(f.designLife_cycles)} passes)` : ""}`,
+      margin: ev.lowerBound_cycles === null ? null : ev.lowerBound_cycles / ev.designLife_cycles - 1,
     });
   }
   const n = r.notch;
@@ -95,19 +111,29 @@ export function verdictTable(r: CheckResult): {
       margin: null,
     });
   }
+  if (r.load.pressureMin_MPa < 0) {
+    rows.push({
+      id: "external-pressure",
+      title: "External pressure (buckling)",
+      status: "refer",
+      detail: `the differential pressure falls to ${fmt(r.load.pressureMin_MPa)} MPa (outside above inside): the shell ${EXTERNAL_PRESSURE_WORDS}, which this tool does not make`,
+      margin: null,
+    });
+  }
+  return decide(rows);
+}
+
+/** fail > refer > pass over the rows; what governs is the first failing, else referring, else least-reserve row. */
+export function decide(rows: VerdictRow[]): { rows: VerdictRow[]; verdict: Verdict; governs: string; governing: CheckResult["governing"] } {
   const failing = rows.filter((x) => x.status === "fail");
   const referring = rows.filter((x) => x.status === "refer");
-  const deciding = rows.filter((x) => x.status !== "info" && x.margin !== null);
+  const deciding = rows.filter((x) => (x.status === "pass" || x.status === "fail") && x.margin !== null);
   const least = deciding.reduce<VerdictRow | undefined>(
     (a, b) => (a === undefined || (b.margin as number) < (a.margin as number) ? b : a),
     undefined,
   );
   const gov = failing[0] ?? referring[0] ?? least ?? rows[0];
+  const verdict: Verdict = failing.length ? "fail" : referring.length ? "refer" : "pass";
   const text = `${gov.title}: ${gov.detail}`;
-  return {
-    rows,
-    verdict: failing.length ? "fail" : referring.length ? "refer" : "pass",
-    governs: text,
-    governing: { rowId: gov.id, text },
-  };
+  return { rows, verdict, governs: text, governing: { rowId: gov.id, text } };
 }

@@ -1,10 +1,21 @@
-import type { MaterialFamily } from "../schema/check.ts";
+import type { MaterialFamily, SurfaceFinish } from "../schema/check.ts";
 
 /**
  * The material library: typical values only. Every entry names where its numbers come from;
  * "from memory" marks values recalled rather than read from the cited table. None of them is
  * a design allowable: verify against certified data (mill certificates, the governing code's
  * tables, or the material specification) before relying on a result.
+ *
+ * Consistency rules every entry keeps (test/materials/library.test.ts checks them):
+ *  - yield < ultimate; σ'f near or above the ultimate strength; b between −0.05 and −0.15.
+ *  - The Basquin constants are strain-life values from smooth, polished axial specimens, so the axial
+ *    load factor is in them and the surface factor is not.
+ *  - Steels: the endurance limit is the smaller of Shigley's estimate for the same specimens,
+ *    kc·0.5·Su with kc = 0.85 for axial load (Shigley eqs. 6-8 and 6-26), and the curve itself at its knee,
+ *    σ'f·(2·10⁶)^b: never above the curve. The part's surface finish is applied as a Marin factor to the
+ *    whole curve and limit by the engine: `surface` is the finish assumed when the user names none.
+ *  - Aluminium and titanium alloys carry no endurance limit (aluminium has none; titanium none that
+ *    can be relied on), so spectra and long lives use the curve itself.
  */
 export interface LibraryMaterial {
   id: string;
@@ -16,12 +27,17 @@ export interface LibraryMaterial {
   fatigueStrengthCoefficient_MPa: number;
   fatigueStrengthExponent: number;
   enduranceLimit_MPa?: number;
+  /** As-delivered surface finish of the product, used for the surface factor when the user names none (steels). */
+  surface?: SurfaceFinish;
   toughness_MPaSqrtM?: number;
   parisC?: number;
   parisM?: number;
   /** Where each group of values comes from. */
   source: string;
 }
+
+/** Shigley's axial load factor kc (eq. 6-26) times the rotating-beam estimate 0.5·Su (eq. 6-8). */
+export const AXIAL_ENDURANCE_RATIO = 0.85 * 0.5;
 
 export const TYPICAL_FLAG = "typical values — verify against certified data";
 
@@ -41,7 +57,7 @@ export const MATERIALS: readonly LibraryMaterial[] = [
     parisC: 1.6e-11,
     parisM: 3.59,
     source:
-      "Static: typical 2024-T3 sheet values (from memory). Basquin: Dowling, Mechanical Behavior of Materials, Table 14.1, 2024-T351 (from memory). Kc: thin-sheet apparent toughness, conservative (from memory). Paris: typical 2024-T3 fit (from memory).",
+      "Static: typical 2024-T3 sheet values (from memory). Basquin: Dowling, Mechanical Behavior of Materials, Table 14.1, 2024-T351 (from memory). Kc: thin-sheet apparent toughness, conservative (from memory). Paris: typical 2024-T3 fit (from memory). No endurance limit: aluminium alloys have none.",
   },
   {
     id: "al-2024-t351",
@@ -86,7 +102,7 @@ export const MATERIALS: readonly LibraryMaterial[] = [
     parisC: 1.0e-11,
     parisM: 3.2,
     source:
-      "Dowling, Mechanical Behavior of Materials, Table 14.1 (static, Basquin) (from memory). KIc and Paris: typical Ti-6Al-4V values (from memory).",
+      "Dowling, Mechanical Behavior of Materials, Table 14.1 (static, Basquin) (from memory). KIc and Paris: typical Ti-6Al-4V values (from memory). No endurance limit: none that can be relied on for titanium alloys.",
   },
   {
     id: "steel-1015-n",
@@ -97,11 +113,13 @@ export const MATERIALS: readonly LibraryMaterial[] = [
     modulus_MPa: 207000,
     fatigueStrengthCoefficient_MPa: 1020,
     fatigueStrengthExponent: -0.138,
-    enduranceLimit_MPa: 207,
+    // min(0.425 × 415 = 176.4, 1020 × (2×10⁶)^−0.138 = 137.7) = 137.7 → 137 MPa
+    enduranceLimit_MPa: 137,
+    surface: "hot-rolled",
     toughness_MPaSqrtM: 100,
     parisC: 6.9e-12,
     parisM: 3.0,
-    source: `Dowling, Mechanical Behavior of Materials, Table 14.1 (static, Basquin) (from memory). Endurance limit: Shigley's estimate S'e = 0.5 Su (Shigley eq. 6-8). Toughness: typical upper-shelf value (from memory). ${BARSOM_FERRITIC}.`,
+    source: `Dowling, Mechanical Behavior of Materials, Table 14.1 (static, Basquin) (from memory). Endurance limit 137 MPa: the curve at its knee, σ'f(2×10⁶)^b = 137.7 MPa, below Shigley's axial estimate 0.85 × 0.5 Su = 176 MPa (Shigley eqs. 6-8, 6-26); polished, the surface factor is applied by the engine (as-delivered: hot rolled). Toughness: typical upper-shelf value (from memory). ${BARSOM_FERRITIC}.`,
   },
   {
     id: "steel-1020-hr",
@@ -112,11 +130,13 @@ export const MATERIALS: readonly LibraryMaterial[] = [
     modulus_MPa: 203000,
     fatigueStrengthCoefficient_MPa: 896,
     fatigueStrengthExponent: -0.12,
-    enduranceLimit_MPa: 220,
+    // min(0.425 × 441 = 187.4, 896 × (2×10⁶)^−0.12 = 157.1) = 157.1 → 157 MPa
+    enduranceLimit_MPa: 157,
+    surface: "hot-rolled",
     toughness_MPaSqrtM: 100,
     parisC: 6.9e-12,
     parisM: 3.0,
-    source: `Shigley's Mechanical Engineering Design, Table A-23, cyclic properties of SAE 1020 hot rolled (from memory). Endurance limit: S'e = 0.5 Su (Shigley eq. 6-8). ${BARSOM_FERRITIC}.`,
+    source: `Shigley's Mechanical Engineering Design, Table A-23, cyclic properties of SAE 1020 hot rolled (from memory). Endurance limit 157 MPa: the curve at its knee, 896 × (2×10⁶)^−0.12 = 157.1 MPa, below 0.85 × 0.5 Su = 187 MPa (Shigley eqs. 6-8, 6-26); polished, surface factor applied by the engine (hot rolled). ${BARSOM_FERRITIC}.`,
   },
   {
     id: "steel-p265gh",
@@ -127,11 +147,13 @@ export const MATERIALS: readonly LibraryMaterial[] = [
     modulus_MPa: 205000,
     fatigueStrengthCoefficient_MPa: 755,
     fatigueStrengthExponent: -0.1,
-    enduranceLimit_MPa: 205,
+    // min(0.425 × 410 = 174.3, 755 × (2×10⁶)^−0.1 = 176.9) = 174.3 → 174 MPa
+    enduranceLimit_MPa: 174,
+    surface: "hot-rolled",
     toughness_MPaSqrtM: 90,
     parisC: 6.9e-12,
     parisM: 3.0,
-    source: `Static: EN 10028-2 specified minimums for P265GH up to 16 mm (from memory). Basquin estimated from Su: σ'f ≈ Su + 345 MPa, b ≈ −0.1 (Dowling, steel estimates, from memory). Endurance limit S'e = 0.5 Su (Shigley eq. 6-8). ${BARSOM_FERRITIC}.`,
+    source: `Static: EN 10028-2 specified minimums for P265GH up to 16 mm (from memory). Basquin estimated from Su: σ'f ≈ Su + 345 MPa, b ≈ −0.1 (Dowling, steel estimates, from memory). Endurance limit 174 MPa: Shigley's axial estimate 0.85 × 0.5 Su = 174.3 MPa (eqs. 6-8, 6-26), just below the curve at its knee (176.9 MPa); polished, surface factor applied by the engine (plate: hot rolled). ${BARSOM_FERRITIC}.`,
   },
   {
     id: "steel-4340",
@@ -142,12 +164,14 @@ export const MATERIALS: readonly LibraryMaterial[] = [
     modulus_MPa: 207000,
     fatigueStrengthCoefficient_MPa: 1758,
     fatigueStrengthExponent: -0.0977,
-    enduranceLimit_MPa: 586,
+    // min(0.425 × 1172 = 498.1, 1758 × (2×10⁶)^−0.0977 = 425.999) → 425 MPa
+    enduranceLimit_MPa: 425,
+    surface: "machined",
     toughness_MPaSqrtM: 100,
     parisC: 1.35e-10,
     parisM: 2.25,
     source:
-      "Dowling, Mechanical Behavior of Materials, Table 14.1 (static, Basquin) (from memory). Endurance limit S'e = 0.5 Su (Shigley eq. 6-8). Paris: Barsom & Rolfe, martensitic steels, 1.35×10⁻¹⁰ ΔK^2.25 (from memory).",
+      "Dowling, Mechanical Behavior of Materials, Table 14.1 (static, Basquin) (from memory). Endurance limit 425 MPa: the curve at its knee, 1758 × (2×10⁶)^−0.0977 = 426.0 MPa (rounded down), below 0.85 × 0.5 Su = 498 MPa (Shigley eqs. 6-8, 6-26); polished, surface factor applied by the engine (machined). Paris: Barsom & Rolfe, martensitic steels, 1.35×10⁻¹⁰ ΔK^2.25 (from memory).",
   },
   {
     id: "stainless-304",
@@ -158,11 +182,12 @@ export const MATERIALS: readonly LibraryMaterial[] = [
     modulus_MPa: 193000,
     fatigueStrengthCoefficient_MPa: 1000,
     fatigueStrengthExponent: -0.114,
+    surface: "machined",
     toughness_MPaSqrtM: 150,
     parisC: 5.6e-12,
     parisM: 3.25,
     source:
-      "Static: typical annealed 304 (from memory). Basquin: typical strain-life fit for annealed 304 (from memory). Paris: Barsom & Rolfe, austenitic stainless steels, 5.6×10⁻¹² ΔK^3.25 (from memory).",
+      "Static: typical annealed 304 (from memory). Basquin: typical strain-life fit for annealed 304 (from memory). No endurance limit given: austenitic steels harden cyclically and their limit depends on the product, so the curve itself is used at long lives (conservative). Surface: cold-rolled sheet taken as machined (Shigley Table 6-2 groups cold-drawn with machined). Paris: Barsom & Rolfe, austenitic stainless steels, 5.6×10⁻¹² ΔK^3.25 (from memory).",
   },
 ];
 

@@ -49,6 +49,7 @@ const text = (what: string, max: number) =>
 export const MEAN_STRESS_CRITERIA = ["goodman", "gerber", "soderberg", "asme-elliptic", "swt", "morrow", "walker"] as const;
 export const SURFACE_FINISHES = ["ground", "machined", "hot-rolled", "as-forged"] as const;
 export const MATERIAL_FAMILIES = ["aluminium", "steel", "stainless", "titanium", "other"] as const;
+export const GAUGE_LISTS = ["aircraft-sheet", "vessel-plate"] as const;
 
 export const shellSchema = z
   .strictObject({
@@ -339,6 +340,10 @@ export const fatigueSchema = z
       .max(2, { error: "γMf must be at most 2" })
       .default(1),
     localYield: z.enum(["elastic", "shakedown"], { error: 'localYield must be "elastic" or "shakedown"' }).default("elastic"),
+    belowEnduranceLimit: z
+      .enum(["haibach", "elementary"], { error: 'belowEnduranceLimit must be "haibach" or "elementary"' })
+      .default("haibach")
+      .describe("Spectra: how the S-N curve continues below the endurance limit (Haibach slope 2m − 1, or elementary Miner slope m)"),
     modifiers: z
       .strictObject({
         surface: z.enum(SURFACE_FINISHES, { error: `surface must be one of ${SURFACE_FINISHES.join(", ")}` }).optional(),
@@ -434,7 +439,31 @@ export const checkSchema = z.strictObject({
     .optional(),
   crack: crackSchema.optional(),
   evidence: evidenceSchema.optional(),
-  solve: z.strictObject({ for: z.enum(["thickness", "pressure"], { error: 'solve for "thickness" or "pressure"' }) }).optional(),
+  solve: z
+    .strictObject({
+      for: z.enum(["thickness", "pressure"], { error: 'solve for "thickness" or "pressure"' }),
+      gauges: z
+        .enum(GAUGE_LISTS, { error: `gauges must be one of ${GAUGE_LISTS.join(", ")}` })
+        .optional()
+        .describe(
+          "Thicknesses a solved wall is rounded up to: aircraft sheet gauges or vessel plate thicknesses (default by service, else by material family)",
+        ),
+      gauges_mm: z
+        .array(positive("each gauge", 1e4, FLOORS.length), { error: "gauges_mm must be a list of thicknesses in mm" })
+        .min(1, { error: "give at least one gauge" })
+        .max(1000, { error: "at most 1000 gauges" })
+        .optional()
+        .describe("Your own list of available thicknesses (mm); a solved wall is rounded up to the next one"),
+      step_mm: positive("the thickness step", 1e3, FLOORS.length)
+        .optional()
+        .describe("Round a solved wall up to the next multiple of this step (mm)"),
+    })
+    .superRefine((s, ctx) => {
+      const given = [s.gauges !== undefined, s.gauges_mm !== undefined, s.step_mm !== undefined].filter(Boolean).length;
+      if (given > 1)
+        ctx.addIssue({ code: "custom", path: ["gauges"], message: "give one way of rounding the thickness: gauges, gauges_mm or step_mm" });
+    })
+    .optional(),
 });
 
 export type CheckDocument = z.input<typeof checkSchema>;
@@ -442,3 +471,4 @@ export type ParsedCheck = z.output<typeof checkSchema>;
 export type MeanStressCriterion = (typeof MEAN_STRESS_CRITERIA)[number];
 export type SurfaceFinish = (typeof SURFACE_FINISHES)[number];
 export type MaterialFamily = (typeof MATERIAL_FAMILIES)[number];
+export type GaugeList = (typeof GAUGE_LISTS)[number];

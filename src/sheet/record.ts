@@ -7,7 +7,7 @@
  * It holds the verdict, the principal numbers and every step's value at full precision.
  */
 import { AFRelationship, PDFDocument } from "pdf-lib";
-import type { CheckResult } from "../engine/index.ts";
+import type { CheckResult, Verdict } from "../engine/index.ts";
 import { extractAttachment } from "./attach.ts";
 
 export const RESULT_ATTACHMENT = "hoopwise-result.json";
@@ -17,7 +17,7 @@ export interface SheetRecord {
   format: typeof RECORD_FORMAT;
   engine: string;
   fingerprint: string;
-  verdict: "pass" | "fail" | "refer";
+  verdict: Verdict;
   governs: string;
   /** The principal numbers, by their path in the result document. */
   values: Record<string, number | null>;

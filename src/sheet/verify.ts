@@ -15,7 +15,7 @@
  * and the metadata together makes a consistent forgery. The paper is the anchor — the report
  * gives the fingerprint to compare with the one printed on every page.
  */
-import { ENGINE_VERSION, InputError, runCheck, type CheckResult } from "../engine/index.ts";
+import { ENGINE_VERSION, InputError, runCheck, type CheckResult, type Verdict } from "../engine/index.ts";
 import { fingerprint } from "../engine/fingerprint.ts";
 import { parseCheck } from "../engine/input.ts";
 import type { FieldError } from "../schema/errors.ts";
@@ -39,8 +39,8 @@ export interface VerifyReport {
   results: {
     /** Whether the sheet carries a results record. */
     recorded: boolean;
-    verdictThen: "pass" | "fail" | "refer" | null;
-    verdictNow: "pass" | "fail" | "refer" | null;
+    verdictThen: Verdict | null;
+    verdictNow: Verdict | null;
     matches: boolean;
     differences: Difference[];
   };

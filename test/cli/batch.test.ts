@@ -10,7 +10,9 @@ const cli = (args: string[], input?: string) =>
 const example = JSON.parse(readFileSync(new URL("../fixtures/format-example.json", import.meta.url), "utf8"));
 
 describe("batch", () => {
-  it("answers each line on its own line, in input order, an invalid line with its errors, and the run goes on", { timeout: 120_000 }, () => {
+  it("answers each line on its own line, in input order, an invalid line with its errors, and the run goes on", {
+    timeout: 120_000,
+  }, () => {
     // Thicknesses that differ per line, so an answer out of order would show in its title and its hoop stress.
     const docs = Array.from({ length: 40 }, (_, i) => ({
       ...example,

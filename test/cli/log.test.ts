@@ -13,7 +13,9 @@ const dir = mkdtempSync(join(tmpdir(), "hoopwise-log-"));
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
 
 describe("check with a pressure log", () => {
-  it("takes the chosen column in kPa with a decimal comma after a preamble, and gates it, as the same history given in MPa", { timeout: 120_000 }, () => {
+  it("takes the chosen column in kPa with a decimal comma after a preamble, and gates it, as the same history given in MPa", {
+    timeout: 120_000,
+  }, () => {
     const kPa = Array.from({ length: 300 }, (_, i) => Math.round((30 + 25 * Math.sin(i / 9) + (i % 2 ? 0.8 : 0)) * 10) / 10);
     const lines = ["invented receiver logger", "n;p_kPa", ...kPa.map((p, i) => `${i};${String(p).replace(".", ",")}`)];
     const file = join(dir, "log.csv");

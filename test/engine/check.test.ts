@@ -86,7 +86,7 @@ describe("a whole check", () => {
     const r = run(
       base(0.06, 1.6, { solve: { for: "thickness" }, fatigue: { ...example.fatigue, designLife_cycles: 2e6, scatterFactor: 5 } }),
     );
-    const t = r.solution!.thickness_mm!;
+    const t = r.solution!.requiredThickness_mm!; // the solved minimum, before rounding up to a gauge
     expect(r.solution!.governs).toBe("fatigue");
     const again = run(base(0.06, t, { fatigue: { ...example.fatigue, designLife_cycles: 2e6, scatterFactor: 5 } }));
     expect(again.fatigue.damage).toBeLessThanOrEqual(1);
@@ -146,7 +146,7 @@ describe("invariants (property tests)", () => {
       fc.property(pressure, fc.double({ min: 1e4, max: 1e7, noNaN: true }), (p, life) => {
         const fatigue = { ...example.fatigue, designLife_cycles: life };
         const r = run(base(p, 1.6, { fatigue, solve: { for: "thickness" } }));
-        const t = r.solution!.thickness_mm!;
+        const t = r.solution!.requiredThickness_mm!; // before rounding up
         const at = run(base(p, t, { fatigue }));
         expect(at.fatigue.damage).toBeLessThanOrEqual(1);
         expect(at.static.margin).toBeGreaterThanOrEqual(-1e-9);

@@ -296,7 +296,7 @@ describe("the page's form and link routes under 1 000 generated requests", () =>
         }
         expect(type, label).toMatch(/^text\/html/);
         if (res.status === 422) expect(saysWhy(text), `${label}: a 422 page must say what to correct`).toBe(true);
-        if (/class="verdict verdict-(pass|fail)"/.test(text)) results += 1;
+        if (/class="verdict verdict-(pass|fail|refer)"/.test(text)) results += 1;
       }),
       { numRuns: 1_000 },
     );

@@ -1,3 +1,4 @@
+import { VERDICT_WORDS, type Verdict } from "../../src/engine/index.ts";
 import type { CheckRecord, RevisionRecord } from "../../src/store/index.ts";
 import type { InputChange, InputDiff } from "../../src/web/history/diff.ts";
 import { relativeChange, type Figure, type WorkedRevision } from "../../src/web/history/figures.ts";
@@ -168,7 +169,7 @@ function Unworked({ n, w }: { n: number; w: WorkedRevision }) {
 function figureText(f: Figure): string {
   const v = f.value;
   if (v === undefined) return "not part of this check";
-  if (typeof v === "string") return f.kind === "verdict" ? (v === "pass" ? "passes" : v === "refer" ? "refer" : "fails") : v;
+  if (typeof v === "string") return f.kind === "verdict" ? (v in VERDICT_WORDS ? VERDICT_WORDS[v as Verdict].short : v) : v;
   switch (f.kind) {
     case "life":
       return cycles(v, f.unit);
