@@ -553,7 +553,7 @@ export function evaluationSteps(ctx: Context, e: Evaluation, criterion: MeanStre
     const words = (on: boolean | undefined) => (on ? "counted" : "left out");
     steps.push(
       step(
-        "axial-extra-phasing",
+        "amplitude-axial-extra",
         `Added axial stress in the governing cycle${label}`,
         "each instant with and without the added axial stress; the worse cycle is used",
         `at the peak: ${words(g.extraAtPeak)}; at the valley: ${words(g.extraAtValley)}`,
