@@ -3,7 +3,8 @@ import { checkCommand } from "./cli/check.ts";
 import { materialsCommand, schemaCommand } from "./cli/info.ts";
 import type { Io } from "./cli/io.ts";
 import { sheetCommand, verifyCommand } from "./cli/sheet.ts";
-import { signerAddCommand } from "./cli/signer.ts";
+import { keyShowCommand } from "./cli/key.ts";
+import { userAddCommand } from "./cli/user.ts";
 
 const HELP = `Hoopwise — fatigue screening of pressurized shell skins
 
@@ -16,8 +17,12 @@ Commands:
                                if any line had errors
   sheet FILE|- --out SHEET.pdf [--paper A4|Letter]
                                print the check sheet (PDF, with the input embedded); needs Chromium
-  verify SHEET.pdf [--json]    recompute a sheet from its embedded input; exit 0 when it still matches
-  signer add NAME              register a person who signs (passphrase from standard input or a prompt)
+  verify SHEET.pdf [--json] [--key KEY.pem | --records URL]
+                               recompute a sheet from its embedded input and check its signed sign-offs
+                               against the records' public key; exit 0 when it still matches
+  user add NAME --role admin|engineer
+                               add a person to the records (passphrase from standard input or a prompt)
+  key show                     print the records' public signing key (PEM) and its fingerprint
   materials [--json]           list the material library (typical values — verify against certified data)
   schema                       print the check format as JSON Schema
   help                         this text
@@ -34,13 +39,14 @@ const COMMANDS: Record<string, Command> = {
   batch: batchCommand,
   sheet: sheetCommand,
   verify: verifyCommand,
-  signer: (args, io) => {
+  user: (args, io) => {
     if (args[0] !== "add") {
-      io.stderr.write("usage: signer add NAME\n");
+      io.stderr.write("usage: user add NAME --role admin|engineer\n");
       return 2;
     }
-    return signerAddCommand(args.slice(1), { ...io, isTTY: Boolean(io.stdin.isTTY) });
+    return userAddCommand(args.slice(1), { ...io, isTTY: Boolean(io.stdin.isTTY) });
   },
+  key: keyShowCommand,
   materials: materialsCommand,
   schema: schemaCommand,
 };

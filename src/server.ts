@@ -2,8 +2,14 @@ import { serve } from "@hono/node-server";
 import { closeSharedPool } from "./pdf/browser.ts";
 import { closeSharedWorkPool, sharedPool } from "./pool/index.ts";
 import { openStore } from "./store/index.ts";
-import { seedDemos } from "./web/seed.ts";
+import { seedDemos } from "./web/records/seed.ts";
 import { wholeApp } from "./web/whole.ts";
+import { removeLeftoverProfiles } from "./pdf/chromium.ts";
+import { servedHosts } from "./web/hosts.ts";
+
+function isLoopbackHost(h: string): boolean {
+  return h === "localhost" || h === "::1" || /^127\./.test(h);
+}
 
 /**
  * Serve the checker on HOST:PORT (127.0.0.1:8080 unless told otherwise). SIGTERM/SIGINT stop taking
@@ -13,12 +19,33 @@ const host = process.env.HOST ?? "127.0.0.1";
 const port = Number(process.env.PORT ?? 8080);
 const store = openStore();
 const seeded = seedDemos(store);
-const app = wholeApp(store);
+// Filled once the port is known (PORT=0 lets the system choose); read by every request.
+const allowedHosts: string[] = [];
+const app = wholeApp(store, { allowedHosts });
 sharedPool();
+const leftovers = await removeLeftoverProfiles();
 
 const server = serve({ fetch: app.fetch, hostname: host, port }, (info) => {
-  if (seeded) console.log(`Saved ${seeded} demo checks in ${process.env.HOOPWISE_DB ?? "data/hoopwise.db"}`);
-  console.log(`Hoopwise is serving on http://${host === "0.0.0.0" ? "127.0.0.1" : host}:${info.port}/`);
+  allowedHosts.push(...servedHosts(host, info.port));
+  if (seeded) console.log(`Saved ${seeded} demo checks (unsigned) in ${process.env.HOOPWISE_DB ?? "data/hoopwise.db"}`);
+  if (leftovers) console.log(`Removed ${leftovers} browser profile${leftovers === 1 ? "" : "s"} left by a server that was killed`);
+  if (isLoopbackHost(host)) {
+    console.log(`Hoopwise is serving on http://${host.includes(":") ? `[${host}]` : host}:${info.port}/`);
+  } else {
+    const shown =
+      host === "0.0.0.0" || host === "::"
+        ? servedHosts(host, info.port).filter((h) => !/^(localhost|127\.|\[::1\])/.test(h))
+        : [`${host}:${info.port}`];
+    console.log(`Hoopwise is serving on ${shown.map((h) => `http://${h}/`).join(", ")} (HOST=${host}: reachable from the network)`);
+    console.log(
+      'The records carry passphrases and session cookies: put TLS in front (a reverse proxy such as Caddy or nginx, see the README, "Deployment behind TLS"), and add its public name to HOOPWISE_ALLOWED_HOSTS.',
+    );
+  }
+  if (store.countUsers() === 0) {
+    console.log(
+      `No one is registered yet: open http://127.0.0.1:${info.port}/setup on this machine, or run: npm run -s cli -- user add NAME --role admin`,
+    );
+  }
 });
 
 let closing = false;

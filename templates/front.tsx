@@ -26,7 +26,7 @@ export function Front({ m }: { m: SheetModel }) {
         <div class="k">Project</div>
         <div class="v wide user">{d.project ?? "not named"}</div>
         <div class="k">Calculation no.</div>
-        <div class="v user">{d.calcNumber ?? "not numbered"}</div>
+        <div class="v user">{m.calcNumber ?? d.calcNumber ?? "not numbered"}</div>
         <div class="k">Revision</div>
         <div class="v last">{m.revision !== undefined ? String(m.revision) : "— (not saved)"}</div>
         <div class="k">Material</div>

@@ -1,10 +1,11 @@
 import type { CheckResult } from "../src/engine/index.ts";
 import type { ResolvedMaterial } from "../src/engine/input.ts";
 import type { ParsedCheck } from "../src/schema/index.ts";
+import type { Role } from "../src/schema/signoff.ts";
 import type { Units } from "../src/schema/units.ts";
 
 export type Paper = "A4" | "Letter";
-export type SignOffRole = "prepared" | "checked" | "approved";
+export type SignOffRole = Role;
 
 /** One sign-off as the records hold it. */
 export interface SignOff {
@@ -12,6 +13,8 @@ export interface SignOff {
   name: string;
   /** ISO 8601 timestamp as recorded. */
   signedAt: string;
+  /** The Ed25519 signature (base64) the records keep for it. */
+  signature?: string;
 }
 
 /** Everything the sheet prints, gathered once so each part of the template reads from one place. */
@@ -27,6 +30,12 @@ export interface SheetModel {
   revision?: number;
   signoffs: SignOff[];
   superseded: boolean;
+  /** The records' calculation number, which the sheet prints; else the input's own. */
+  calcNumber?: string;
+  /** An imported revision whose sign-offs were not kept: printed as such. */
+  importedUnsigned?: boolean;
+  /** Fingerprint of the records' public key the sign-offs are signed with. */
+  keyFingerprint?: string;
   /** The date printed on the sheet. */
   printedOn: Date;
   paper: Paper;

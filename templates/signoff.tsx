@@ -1,13 +1,11 @@
 import { INPUT_ATTACHMENT } from "../src/sheet/attach.ts";
+import { SIGNOFFS_ATTACHMENT } from "../src/sheet/signatures.ts";
+import { ROLES } from "../src/schema/signoff.ts";
 import { signedAtText } from "./format.ts";
 import type { SheetModel, SignOffRole } from "./model.ts";
 import { statusMark } from "./status.ts";
 
-const ROLES: { role: SignOffRole; label: string }[] = [
-  { role: "prepared", label: "Prepared by" },
-  { role: "checked", label: "Checked by" },
-  { role: "approved", label: "Approved by" },
-];
+const LABELS: Record<SignOffRole, string> = { prepared: "Prepared by", checked: "Checked by", approved: "Approved by" };
 
 /**
  * Prepared, checked and approved: name, date and a line for a signature in ink. Names and dates
@@ -24,7 +22,8 @@ export function SignOffBlock({ m, num }: { m: SheetModel; num: number }) {
       <p class="revision-line">
         {m.revision !== undefined ? (
           <>
-            <b>Revision {m.revision}</b> of calculation <span class="user">{m.document.calcNumber ?? "(no number given)"}</span>.{" "}
+            <b>Revision {m.revision}</b> of calculation{" "}
+            <span class="user">{m.calcNumber ?? m.document.calcNumber ?? "(no number given)"}</span>.{" "}
           </>
         ) : (
           <>
@@ -35,6 +34,12 @@ export function SignOffBlock({ m, num }: { m: SheetModel; num: number }) {
       <p class="revision-line">
         Status: <span class={`mark mark-${mark.state}`}>{mark.words}</span>
       </p>
+      {m.importedUnsigned ? (
+        <p class="revision-line">
+          <b>Imported, not signed in these records.</b> This revision came from another database without signatures these records trust, so
+          it carries no sign-off here: check and sign it again before use.
+        </p>
+      ) : null}
       {m.superseded ? (
         <p>
           <b>This revision is superseded.</b> A later revision of this calculation exists in the records; this sheet is kept for the record
@@ -51,7 +56,8 @@ export function SignOffBlock({ m, num }: { m: SheetModel; num: number }) {
           </tr>
         </thead>
         <tbody>
-          {ROLES.map(({ role, label }) => {
+          {ROLES.map((role) => {
+            const label = LABELS[role];
             const s = m.signoffs.find((x) => x.role === role);
             return (
               <tr>
@@ -60,13 +66,31 @@ export function SignOffBlock({ m, num }: { m: SheetModel; num: number }) {
                 <td>{s ? signedAtText(s.signedAt) : <div class="line" />}</td>
                 <td class="sig">
                   <div class="line" />
-                  {s ? <span class="blank">signed in the records</span> : null}
+                  {s ? (
+                    <span class="blank">
+                      signed in the records
+                      {s.signature ? (
+                        <>
+                          {" "}
+                          · Ed25519 <span class="mono">{s.signature.slice(0, 16)}…</span>
+                        </>
+                      ) : null}
+                    </span>
+                  ) : null}
                 </td>
               </tr>
             );
           })}
         </tbody>
       </table>
+      {m.keyFingerprint && m.signoffs.length > 0 ? (
+        <p class="note">
+          Each sign-off is signed with the records' Ed25519 key, fingerprint <span class="mono">{m.keyFingerprint}</span>; the signatures
+          are attached as <span class="mono">{SIGNOFFS_ATTACHMENT}</span>. Check them with{" "}
+          <span class="mono">npm run -s cli -- verify SHEET.pdf --key KEY.pem</span> (the public key is served at{" "}
+          <span class="mono">/api/v1/keys</span>).
+        </p>
+      ) : null}
       <p class="note">
         The input of this sheet is attached to the PDF as <span class="mono">{INPUT_ATTACHMENT}</span>. To check that the paper still
         matches its input and this engine, run <span class="mono">npm run -s cli -- verify SHEET.pdf</span> and compare the fingerprint it

@@ -1,14 +1,13 @@
-import type { SignOff, SignOffRole } from "./model.ts";
+import { signOffState, type RevisionState } from "../src/schema/signoff.ts";
+import type { SignOff } from "./model.ts";
 
-export type SheetState = "draft" | SignOffRole | "superseded";
+export type SheetState = RevisionState;
 
 /** The mark printed on every page: what a reader may take the sheet for, in a few words. */
 export interface StatusMark {
   state: SheetState;
   words: string;
 }
-
-const ORDER: readonly SignOffRole[] = ["prepared", "checked", "approved"];
 
 const WORDS: Record<SheetState, string> = {
   draft: "UNCHECKED DRAFT — NOT FOR USE",
@@ -24,9 +23,9 @@ const WORDS: Record<SheetState, string> = {
  * it carries.
  */
 export function statusMark(signoffs: readonly SignOff[], superseded: boolean): StatusMark {
-  if (superseded) return { state: "superseded", words: WORDS.superseded };
-  const signed = new Set(signoffs.map((s) => s.role));
-  let state: SheetState = "draft";
-  for (const role of ORDER) if (signed.has(role)) state = role;
+  const state = signOffState(
+    signoffs.map((s) => s.role),
+    superseded,
+  );
   return { state, words: WORDS[state] };
 }

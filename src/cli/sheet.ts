@@ -56,10 +56,25 @@ export async function sheetCommand(args: string[], io: Io): Promise<number> {
  * arguments are wrong or the file cannot be read.
  */
 export async function verifyCommand(args: string[], io: Io): Promise<number> {
-  const parsed = parseArgs(args, { values: [], flags: ["--json"] });
+  const parsed = parseArgs(args, { values: ["--key", "--records"], flags: ["--json"] });
   const json = parsed.flags.has("--json");
   const errors: ArgErrors = [...parsed.errors];
   if (parsed.positional.length !== 1) errors.push({ path: "(file)", message: "give one sheet to verify: verify SHEET.pdf" });
+  const publicKeys: string[] = [];
+  const keyFile = parsed.values["--key"];
+  if (keyFile) {
+    try {
+      publicKeys.push(readFileSync(keyFile, "utf8"));
+    } catch (err) {
+      errors.push({ path: "--key", message: `cannot read ${keyFile}: ${(err as NodeJS.ErrnoException).code ?? (err as Error).message}` });
+    }
+  }
+  const records = parsed.values["--records"];
+  if (records) {
+    const fetched = await fetchKeys(records);
+    if (fetched.ok) publicKeys.push(...fetched.keys);
+    else errors.push({ path: "--records", message: fetched.message });
+  }
   if (errors.length) return json ? fail(io, errors) : usage(io, errors);
   const file = parsed.positional[0];
   let bytes: Uint8Array;
@@ -69,9 +84,29 @@ export async function verifyCommand(args: string[], io: Io): Promise<number> {
     const e = [{ path: "(file)", message: `cannot read ${file}: ${(err as NodeJS.ErrnoException).code ?? (err as Error).message}` }];
     return json ? fail(io, e) : usage(io, e);
   }
-  const report = await verifySheet(bytes);
+  const report = await verifySheet(bytes, { publicKeys });
   io.stdout.write(json ? JSON.stringify(report, null, 2) + "\n" : formatReport(file, report));
   return report.ok ? 0 : 1;
+}
+
+/** The records' public keys from GET /api/v1/keys at `base` (http or https). */
+async function fetchKeys(base: string): Promise<{ ok: true; keys: string[] } | { ok: false; message: string }> {
+  let url: URL;
+  try {
+    url = new URL("/api/v1/keys", base);
+  } catch {
+    return { ok: false, message: `"${base}" is not an address such as https://records.example.org` };
+  }
+  if (url.protocol !== "http:" && url.protocol !== "https:") return { ok: false, message: "give an http or https address" };
+  try {
+    const res = await fetch(url, { signal: AbortSignal.timeout(10_000) });
+    if (!res.ok) return { ok: false, message: `${url} answered ${res.status}` };
+    const body = (await res.json()) as { keys?: { publicKeyPem?: unknown }[] };
+    const keys = (body.keys ?? []).map((k) => k.publicKeyPem).filter((k): k is string => typeof k === "string");
+    return keys.length ? { ok: true, keys } : { ok: false, message: `${url} serves no public key` };
+  } catch (err) {
+    return { ok: false, message: `cannot fetch ${url}: ${(err as Error).message}` };
+  }
 }
 
 /** The report as a person reads it in a terminal. */
@@ -89,6 +124,15 @@ export function formatReport(file: string, r: VerifyReport): string {
   for (const d of r.results.differences.slice(0, 20)) lines.push(`      ${d.what}: then ${d.then}, now ${d.now}`);
   if (r.results.differences.length > 20) lines.push(`      … and ${r.results.differences.length - 20} more (use --json for all)`);
   for (const e of r.input.errors) lines.push(`      input ${e.path}: ${e.message}`);
+  if (r.signoffs.attached) {
+    lines.push(
+      `  Sign-offs             ${r.signoffs.checked ? "checked with the key given" : "not checked (no key given)"}; records key ${r.signoffs.keyFingerprint}`,
+    );
+    for (const s of r.signoffs.each)
+      lines.push(`      ${s.role} by ${s.name}, ${s.signedAt}: ${s.valid ? "signature valid" : `DOES NOT VERIFY (${s.why})`}`);
+  } else {
+    lines.push("  Sign-offs             none signed on this sheet");
+  }
   if (r.problems.length) lines.push("", "Problems:", ...r.problems.map((p) => `  - ${p}`));
   if (r.notes.length) lines.push("", ...r.notes.map((n) => `  ${n}`));
   return lines.join("\n") + "\n";

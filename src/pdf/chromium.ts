@@ -1,5 +1,5 @@
 import { accessSync, constants, statSync } from "node:fs";
-import { mkdtemp, rm } from "node:fs/promises";
+import { mkdtemp, readdir, rm, stat } from "node:fs/promises";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { launch, type Browser } from "puppeteer-core";
@@ -65,6 +65,53 @@ const CHROMIUM_ARGS = [
   "--disable-crashpad-for-testing",
 ];
 
+const PROFILE_PREFIX = "hoopwise-chromium-";
+
+/**
+ * Remove the temporary profiles a killed server left behind (kill -9 gives it no time to clean
+ * up): those whose owning process is gone, and older unnamed ones after a day. Profiles of live
+ * servers (other processes, tests running beside) are left alone. Returns how many were removed.
+ */
+export async function removeLeftoverProfiles(dir: string = tmpdir()): Promise<number> {
+  let removed = 0;
+  let names: string[];
+  try {
+    names = await readdir(dir);
+  } catch {
+    return 0;
+  }
+  for (const name of names) {
+    if (!name.startsWith(PROFILE_PREFIX)) continue;
+    const path = join(dir, name);
+    const pid = Number(name.slice(PROFILE_PREFIX.length).match(/^(\d+)-/)?.[1]);
+    let dead: boolean;
+    if (Number.isInteger(pid) && pid > 0) {
+      dead = pid !== process.pid && !processAlive(pid);
+    } else {
+      const age = await stat(path).then(
+        (st) => Date.now() - st.mtimeMs,
+        () => 0,
+      );
+      dead = age > 24 * 3600_000;
+    }
+    if (!dead) continue;
+    await rm(path, { recursive: true, force: true }).then(
+      () => removed++,
+      () => undefined,
+    );
+  }
+  return removed;
+}
+
+function processAlive(pid: number): boolean {
+  try {
+    process.kill(pid, 0);
+    return true;
+  } catch (err) {
+    return (err as NodeJS.ErrnoException).code === "EPERM";
+  }
+}
+
 export interface RunningChromium {
   browser: Browser;
   /** Process id of the browser, which is also the id of its process group. */
@@ -79,7 +126,8 @@ export async function launchChromium(
   executablePath: string,
   options: { launchTimeout_ms: number; protocolTimeout_ms: number },
 ): Promise<RunningChromium> {
-  const userDataDir = await mkdtemp(join(tmpdir(), "hoopwise-chromium-"));
+  // The server's pid in the name lets the next start tell a dead server's leftovers from a live one's.
+  const userDataDir = await mkdtemp(join(tmpdir(), `${PROFILE_PREFIX}${process.pid}-`));
   let browser: Browser;
   try {
     browser = await launch({

@@ -30,3 +30,27 @@ export function tooDeepAt(value: unknown, limit = MAX_JSON_DEPTH): string | unde
   }
   return undefined;
 }
+
+/**
+ * The dot path of the first text (a value or a key) holding a lone UTF-16 surrogate, which JSON's
+ * "\ud800" escapes can carry but no text encoding can store or print; undefined when all is well
+ * formed. Iterative, like tooDeepAt.
+ */
+export function illFormedAt(value: unknown): string | undefined {
+  const lone = /\p{Cs}/u;
+  const stack: { v: unknown; path: string }[] = [{ v: value, path: "" }];
+  for (let item = stack.pop(); item; item = stack.pop()) {
+    const { v, path } = item;
+    const at = (k: string) => (path ? `${path}.${k}` : k);
+    if (typeof v === "string") {
+      if (lone.test(v)) return path || "(document)";
+    } else if (Array.isArray(v)) v.forEach((c, i) => stack.push({ v: c, path: at(String(i)) }));
+    else if (v !== null && typeof v === "object") {
+      for (const [k, c] of Object.entries(v)) {
+        if (lone.test(k)) return at(k.replace(/\p{Cs}/gu, "\uFFFD"));
+        stack.push({ v: c, path: at(k) });
+      }
+    }
+  }
+  return undefined;
+}

@@ -40,7 +40,7 @@ export function headerHtml(m: SheetModel): string {
           {/* The page count stands apart, so a long calculation number cannot push it out of sight. */}
           <div style="display:flex;gap:3mm">
             <div style={`flex:1;min-width:0;${ONE_LINE}`}>
-              Calc. {d.calcNumber ?? "not numbered"} · {rev} · {isoDate(m.printedOn)}
+              Calc. {m.calcNumber ?? d.calcNumber ?? "not numbered"} · {rev} · {isoDate(m.printedOn)}
             </div>
             <div style="flex:none;white-space:nowrap;font-weight:bold">{raw(PAGE_X_OF_Y)}</div>
           </div>

@@ -23,6 +23,7 @@ import type { BrowserPool } from "../pdf/browser.ts";
 import { renderPdf, type RequestRecord } from "../pdf/pdf.ts";
 import { attachRecord, recordOf } from "./record.ts";
 import { parseSheetOptions } from "./sheetOptions.ts";
+import { attachSignoffs, type SheetSignoffs } from "./signatures.ts";
 
 export type { SignOff } from "../../templates/sheet.tsx";
 
@@ -34,6 +35,12 @@ export interface SheetOptions {
   signoffs?: SignOff[];
   /** A later revision exists: the sheet is marked superseded on every page. */
   superseded?: boolean;
+  /** The records' calculation number, printed instead of the input's. */
+  calcNumber?: string;
+  /** An imported revision whose sign-offs were not kept. */
+  importedUnsigned?: boolean;
+  /** The sign-offs with their signatures, attached for `verify`; their key's fingerprint is printed. */
+  signatures?: SheetSignoffs;
   /** The date printed on the sheet. Default: now. */
   now?: Date;
   /** Render on this pool. Default: the shared pool. */
@@ -59,7 +66,15 @@ export type SheetHtmlOutcome =
 
 /** The sheet's HTML, header and footer without Chromium: for tests, previews and renderSheet. */
 export function sheetHtml(json: unknown, opts: Omit<SheetOptions, "pool" | "requestLog" | "timeout_ms"> = {}): SheetHtmlOutcome {
-  const layout = parseSheetOptions({ paper: opts.paper, revision: opts.revision, signoffs: opts.signoffs, superseded: opts.superseded });
+  const layout = parseSheetOptions({
+    paper: opts.paper,
+    revision: opts.revision,
+    signoffs: opts.signoffs,
+    superseded: opts.superseded,
+    calcNumber: opts.calcNumber,
+    importedUnsigned: opts.importedUnsigned,
+    keyFingerprint: opts.signatures?.keyFingerprint,
+  });
   const parsed = parseCheck(json);
   if (!parsed.ok || !layout.ok) return { ok: false, errors: [...(parsed.ok ? [] : parsed.errors), ...(layout.ok ? [] : layout.errors)] };
   let result: CheckResult;
@@ -77,6 +92,9 @@ export function sheetHtml(json: unknown, opts: Omit<SheetOptions, "pool" | "requ
     revision: layout.value.revision,
     signoffs: layout.value.signoffs,
     superseded: layout.value.superseded,
+    calcNumber: layout.value.calcNumber,
+    importedUnsigned: layout.value.importedUnsigned,
+    keyFingerprint: layout.value.keyFingerprint,
     printedOn: opts.now ?? new Date(),
     paper: layout.value.paper,
   };
@@ -113,7 +131,10 @@ export async function renderSheet(json: unknown, opts: SheetOptions = {}): Promi
       fingerprint: result.fingerprint,
       engineVersion: result.engine,
     },
-    (doc) => attachRecord(doc, recordOf(result), model.printedOn),
+    async (doc) => {
+      await attachRecord(doc, recordOf(result), model.printedOn);
+      if (opts.signatures) await attachSignoffs(doc, opts.signatures, model.printedOn);
+    },
   );
   return { ok: true, pdf, result, fingerprint: result.fingerprint };
 }

@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { type FieldError, toFieldErrors } from "../schema/errors.ts";
+import { ROLES } from "../schema/signoff.ts";
 import type { SignOff } from "../../templates/sheet.tsx";
 
 /**
@@ -7,7 +8,6 @@ import type { SignOff } from "../../templates/sheet.tsx";
  * request or a record, and a bad one must come back as an error naming the field, not as a
  * strange sheet.
  */
-const ROLES = ["prepared", "checked", "approved"] as const;
 
 const optionsSchema = z.strictObject({
   paper: z.enum(["A4", "Letter"], { error: 'paper must be "A4" or "Letter"' }).default("A4"),
@@ -16,7 +16,7 @@ const optionsSchema = z.strictObject({
     .array(
       // Not strict: the records hand over their sign-off rows, which carry more than the sheet prints.
       z.object({
-        role: z.enum(ROLES, { error: 'role must be "prepared", "checked" or "approved"' }),
+        role: z.enum(ROLES, { error: `role must be ${ROLES.map((r) => `"${r}"`).join(", ")}` }),
         name: z
           .string({ error: "the name must be text" })
           .trim()
@@ -26,6 +26,7 @@ const optionsSchema = z.strictObject({
           .string({ error: "signedAt must be text" })
           .min(1, { error: "signedAt must not be empty" })
           .max(100, { error: "signedAt must be at most 100 characters" }),
+        signature: z.string({ error: "signature must be text" }).max(200, { error: "signature must be at most 200 characters" }).optional(),
       }),
       { error: "signoffs must be a list" },
     )
@@ -39,6 +40,12 @@ const optionsSchema = z.strictObject({
       });
     }),
   superseded: z.boolean({ error: "superseded must be true or false" }).default(false),
+  calcNumber: z.string({ error: "calcNumber must be text" }).max(100, { error: "calcNumber must be at most 100 characters" }).optional(),
+  importedUnsigned: z.boolean({ error: "importedUnsigned must be true or false" }).default(false),
+  keyFingerprint: z
+    .string({ error: "keyFingerprint must be text" })
+    .regex(/^[0-9a-f]{64}$/, { error: "keyFingerprint must be 64 hexadecimal digits" })
+    .optional(),
 });
 
 export interface SheetLayoutOptions {
@@ -46,6 +53,9 @@ export interface SheetLayoutOptions {
   revision?: number;
   signoffs: SignOff[];
   superseded: boolean;
+  calcNumber?: string;
+  importedUnsigned: boolean;
+  keyFingerprint?: string;
 }
 
 export function parseSheetOptions(opts: unknown): { ok: true; value: SheetLayoutOptions } | { ok: false; errors: FieldError[] } {

@@ -11,9 +11,15 @@
  * 3. This engine, run on that input, gives the verdict and results recorded in the sheet
  *    (RESULT_ATTACHMENT), to 1 part in 10⁹.
  *
- * The fingerprint is a checksum, not a signature: someone who rewrites the input, the record
- * and the metadata together makes a consistent forgery. The paper is the anchor — the report
- * gives the fingerprint to compare with the one printed on every page.
+ * 4. A sheet printed from the records carries its sign-offs with Ed25519 signatures
+ *    (SIGNOFFS_ATTACHMENT). Given the records' public key (a file, or GET /api/v1/keys), each
+ *    signature is checked over the check id, revision, fingerprint, role, user id, name and
+ *    time, and the fingerprint it names must be the attached input's. A sheet whose sign-offs
+ *    do not all verify does not verify. Without a key the sign-offs are reported unchecked.
+ *
+ * The fingerprint alone is a checksum, not a signature: someone who rewrites the input, the
+ * record and the metadata together makes a consistent forgery of an unsigned sheet. The
+ * signatures are what a forger cannot make without the records' private key.
  */
 import { ENGINE_VERSION, InputError, runCheck, type CheckResult, type Verdict } from "../engine/index.ts";
 import { fingerprint } from "../engine/fingerprint.ts";
@@ -21,6 +27,42 @@ import { parseCheck } from "../engine/input.ts";
 import type { FieldError } from "../schema/errors.ts";
 import { extractAttachment, INPUT_ATTACHMENT, readSheetInfo, type SheetInfoFound } from "./attach.ts";
 import { compareRecords, readRecord, recordOf, RESULT_ATTACHMENT, type Difference, type SheetRecord } from "./record.ts";
+import { checkSignoffs, publicKeyFrom, readSignoffs, type SheetSignoffs, type SignoffCheck } from "./signatures.ts";
+
+function checkSignatures(
+  report: VerifyReport,
+  signed: SheetSignoffs | null,
+  input: unknown,
+  options: VerifyOptions,
+  problem: (p: string) => void,
+): void {
+  if (!signed) {
+    report.notes.push("The sheet carries no signed sign-offs: any names written on it are not proven by the records.");
+    return;
+  }
+  report.signoffs.attached = true;
+  report.signoffs.keyFingerprint = signed.keyFingerprint;
+  const keys: { key: import("node:crypto").KeyObject; fingerprint: string }[] = [];
+  for (const pem of options.publicKeys ?? []) {
+    try {
+      keys.push(publicKeyFrom(pem));
+    } catch (err) {
+      problem(`A key given to verify with cannot be read: ${(err as Error).message}.`);
+    }
+  }
+  if (keys.length === 0) {
+    if (signed.signoffs.length > 0)
+      report.notes.push(
+        `The sheet carries ${signed.signoffs.length} signed sign-off${signed.signoffs.length === 1 ? "" : "s"}, not checked: give the records' public key (--key KEY.pem, or --records URL) to check them.`,
+      );
+    return;
+  }
+  report.signoffs.checked = true;
+  report.signoffs.each = checkSignoffs(signed, input, keys);
+  for (const s of report.signoffs.each) {
+    if (!s.valid) problem(`The ${s.role} sign-off by ${s.name} does not verify: ${s.why}.`);
+  }
+}
 
 export interface VerifyReport {
   /** True when the input is intact and this engine reproduces the recorded results. */
@@ -44,6 +86,14 @@ export interface VerifyReport {
     matches: boolean;
     differences: Difference[];
   };
+  signoffs: {
+    /** Whether the sheet carries signed sign-offs. */
+    attached: boolean;
+    /** Whether a public key was given to check them with. */
+    checked: boolean;
+    keyFingerprint: string | null;
+    each: SignoffCheck[];
+  };
   /** Why the sheet does not verify, one sentence each; empty when it does. */
   problems: string[];
   /** Things worth knowing that do not fail the sheet. */
@@ -56,13 +106,19 @@ export interface VerifyReport {
  */
 const MAX_INPUT_BYTES = 128 * 1024 * 1024;
 
-export async function verifySheet(pdf: Uint8Array): Promise<VerifyReport> {
+export interface VerifyOptions {
+  /** Public keys (PEM) to check the sign-off signatures with. */
+  publicKeys?: readonly string[];
+}
+
+export async function verifySheet(pdf: Uint8Array, options: VerifyOptions = {}): Promise<VerifyReport> {
   const report: VerifyReport = {
     ok: false,
     input: { found: false, valid: false, errors: [] },
     fingerprint: { recorded: null, recomputed: null, matches: false, thisEngine: null },
     engine: { then: null, now: ENGINE_VERSION, same: false },
     results: { recorded: false, verdictThen: null, verdictNow: null, matches: false, differences: [] },
+    signoffs: { attached: false, checked: false, keyFingerprint: null, each: [] },
     problems: [],
     notes: [],
   };
@@ -83,6 +139,13 @@ export async function verifySheet(pdf: Uint8Array): Promise<VerifyReport> {
   if (!info.fingerprint)
     problem("The PDF records no fingerprint: it is not a Hoopwise check sheet, or its document information was rewritten.");
   if (!info.engineVersion) problem("The PDF does not name the engine version that made it.");
+
+  let signed: SheetSignoffs | null = null;
+  try {
+    signed = await readSignoffs(pdf);
+  } catch (err) {
+    problem((err as Error).message);
+  }
 
   let record: SheetRecord | null = null;
   try {
@@ -119,6 +182,7 @@ export async function verifySheet(pdf: Uint8Array): Promise<VerifyReport> {
   }
   report.input.valid = true;
   const document = parsed.value.document;
+  checkSignatures(report, signed, document, options, problem);
   report.fingerprint.thisEngine = fingerprint(document, ENGINE_VERSION);
   if (info.engineVersion) {
     report.fingerprint.recomputed = fingerprint(document, info.engineVersion);

@@ -1,52 +1,78 @@
-import type { StoreContext } from "./context.ts";
-import { WrongPassphraseError } from "./errors.ts";
+import type { Db } from "./db.ts";
+import { SlowDownError } from "./errors.ts";
 
 /**
- * Wrong passphrases per signer: after MAX_FAILURES within WINDOW_MS the signer's name is locked
- * until the window from the first failure has passed, so a passphrase cannot be guessed by
- * trying many (common practice for password checks). Kept in memory: a restart clears it, which
- * costs a guesser a restart per five tries.
+ * Guessing a passphrase is slowed, never locked out. Every attempt is counted in the database
+ * before the (slow) scrypt check, in one write transaction, so guesses sent together are
+ * counted one after another and a restart forgets nothing. After f wrong passphrases in a row,
+ * the next attempt waits 2^(f−1) seconds from the last one, up to a cap: per account (so a
+ * guesser gets about one try in five minutes at worst, while the owner is never shut out for
+ * longer) and per source address (so one machine trying many names is slowed too). A right
+ * passphrase clears the account's count; an admin can clear it as well. Common practice for
+ * online guessing (growing delays rather than lockout, as NIST SP 800-63B §5.2.2 recommends
+ * rate limiting without letting an attacker deny the owner).
  */
-export const MAX_FAILURES = 5;
-export const WINDOW_MS = 15 * 60 * 1000;
+export const ACCOUNT_CAP_S = 300;
+export const SOURCE_CAP_S = 900;
 
-interface Tally {
+export function delaySeconds(failures: number, cap: number): number {
+  return failures <= 0 ? 0 : Math.min(cap, 2 ** Math.min(failures - 1, 30));
+}
+
+export interface Subjects {
+  /** "account:" and the name's skeleton, whether or not anyone has that name. */
+  account: string;
+  /** "source:" and the client's address. */
+  source: string;
+}
+
+export function subjectsFor(nameKey: string, source: string): Subjects {
+  return { account: `account:${nameKey}`, source: `source:${source}` };
+}
+
+interface Row {
   failures: number;
-  since: number;
+  last_at: number;
 }
 
-const tallies = new WeakMap<StoreContext, Map<string, Tally>>();
-
-function tallyOf(ctx: StoreContext): Map<string, Tally> {
-  let t = tallies.get(ctx);
-  if (!t) tallies.set(ctx, (t = new Map()));
-  return t;
+/**
+ * Count one attempt for both subjects, or refuse with the wait left when either must still wait.
+ * Runs in its own IMMEDIATE transaction, so two attempts can never both see the same count.
+ */
+export function countAttempt(db: Db, s: Subjects, nowMs: number): void {
+  db.transaction(() => {
+    const get = db.prepare("SELECT failures, last_at FROM attempts WHERE subject = ?");
+    let wait = 0;
+    for (const [subject, cap] of [
+      [s.account, ACCOUNT_CAP_S],
+      [s.source, SOURCE_CAP_S],
+    ] as const) {
+      const row = get.get(subject) as Row | undefined;
+      if (row) wait = Math.max(wait, row.last_at + delaySeconds(row.failures, cap) * 1000 - nowMs);
+    }
+    if (wait > 0) throw new SlowDownError(Math.ceil(wait / 1000));
+    const bump = db.prepare(
+      `INSERT INTO attempts (subject, failures, last_at) VALUES (?, 1, ?)
+       ON CONFLICT (subject) DO UPDATE SET failures = failures + 1, last_at = excluded.last_at`,
+    );
+    bump.run(s.account, nowMs);
+    bump.run(s.source, nowMs);
+  }).immediate();
 }
 
-/** Refuse before the (slow) passphrase check when this name has failed too often lately. */
-export function refuseWhileLocked(ctx: StoreContext, key: string, shownName: string): void {
-  const t = tallyOf(ctx).get(key);
-  const now = ctx.now().getTime();
-  if (!t || now - t.since >= WINDOW_MS) return;
-  if (t.failures >= MAX_FAILURES) {
-    const minutes = Math.ceil((t.since + WINDOW_MS - now) / 60000);
-    throw new WrongPassphraseError([
-      {
-        path: "passphrase",
-        message: `too many wrong passphrases for "${shownName}"; signing as this person is paused for ${minutes} more minute${minutes === 1 ? "" : "s"}`,
-      },
-    ]);
-  }
+/** The attempt was right: the account starts afresh, and the source is not charged for it. */
+export function attemptSucceeded(db: Db, s: Subjects): void {
+  db.transaction(() => {
+    db.prepare("DELETE FROM attempts WHERE subject = ?").run(s.account);
+    db.prepare("UPDATE attempts SET failures = max(failures - 1, 0) WHERE subject = ?").run(s.source);
+  }).immediate();
 }
 
-export function noteFailure(ctx: StoreContext, key: string): void {
-  const tally = tallyOf(ctx);
-  const now = ctx.now().getTime();
-  const t = tally.get(key);
-  if (!t || now - t.since >= WINDOW_MS) tally.set(key, { failures: 1, since: now });
-  else t.failures++;
+/** An admin lifts the wait on an account. Returns whether there was one. */
+export function clearAccount(db: Db, nameKey: string): boolean {
+  return db.prepare("DELETE FROM attempts WHERE subject = ?").run(`account:${nameKey}`).changes > 0;
 }
 
-export function clearFailures(ctx: StoreContext, key: string): void {
-  tallyOf(ctx).delete(key);
+export function failuresOf(db: Db, subject: string): number {
+  return (db.prepare("SELECT failures FROM attempts WHERE subject = ?").get(subject) as Row | undefined)?.failures ?? 0;
 }

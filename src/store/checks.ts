@@ -7,6 +7,7 @@ import type { Db } from "./db.ts";
 import { isoNow, validInput, type StoreContext } from "./context.ts";
 import { InvalidRecordError, RecordConflictError, RecordNotFoundError } from "./errors.ts";
 import { appendEvent } from "./events.ts";
+import type { Actor } from "./users.ts";
 import { calcNumberField, personNameField, safeParseFields, titleField, zodFieldErrors } from "./fields.ts";
 
 export interface NewCheck {
@@ -48,13 +49,25 @@ const newCheckFields = z.strictObject({
 });
 const newRevisionFields = z.strictObject({ input: z.unknown(), savedBy: personNameField.optional() });
 
-/** Save a new check as revision 1. */
-export function createCheck(ctx: StoreContext, args: NewCheck): CreatedCheck {
+/**
+ * Save a new check as revision 1, saved by `by` (the signed-in user; none for the demo seed).
+ * The calculation number is the request's, else the input's, else one made from the id; it is
+ * what the sheet prints. A number the records cannot keep (taken, malformed, or two different
+ * ones in one request) is refused, never replaced by another.
+ */
+export function createCheck(ctx: StoreContext, args: NewCheck, by?: Actor | null): CreatedCheck {
   const { fields, input } = validate(ctx, newCheckFields, args);
   const id = randomUUID();
   const title = fields.title ?? fieldOf(input, "title", titleField) ?? "Untitled check";
-  const fromInput = fields.calcNumber === undefined ? fieldOf(input, "calcNumber", calcNumberField) : undefined;
+  const inputNumber = inputCalcNumber(input);
+  if (fields.calcNumber !== undefined && inputNumber !== undefined && inputNumber !== fields.calcNumber) {
+    throw new InvalidRecordError([
+      { path: "calcNumber", message: `differs from the input's calculation number "${inputNumber}"; give one number, in one place` },
+    ]);
+  }
+  const fromInput = fields.calcNumber === undefined ? inputNumber : undefined;
   const calcNumber = fields.calcNumber ?? fromInput ?? `HW-${id.slice(0, 8).toUpperCase()}`;
+  const savedBy = by ? by.name : (fields.savedBy ?? null);
   const canonical = canonicalJson(input);
   const fp = fingerprint(input, ctx.engineVersion);
   const at = isoNow(ctx);
@@ -69,9 +82,9 @@ export function createCheck(ctx: StoreContext, args: NewCheck): CreatedCheck {
         fingerprint: fp,
         engineVersion: ctx.engineVersion,
         savedAt: at,
-        savedBy: fields.savedBy ?? null,
+        savedBy,
       });
-      appendEvent(ctx.db, id, { at, kind: "saved", revision: 1, actor: fields.savedBy ?? null, detail: { fingerprint: fp } });
+      appendEvent(ctx.db, id, { at, kind: "saved", revision: 1, actor: savedBy, detail: { fingerprint: fp } });
     })
     .immediate();
   return { id, title, calcNumber, revision: 1, fingerprint: fp };
@@ -81,13 +94,22 @@ export function createCheck(ctx: StoreContext, args: NewCheck): CreatedCheck {
  * Save a changed input as the check's next revision, which supersedes the one
  * before. An input identical to the latest revision's saves nothing.
  */
-export function addRevision(ctx: StoreContext, checkId: string, args: NewRevision): SavedRevision {
-  requireCheck(ctx.db, checkId);
+export function addRevision(ctx: StoreContext, checkId: string, args: NewRevision, by?: Actor | null): SavedRevision {
+  const check = requireCheck(ctx.db, checkId);
   const { fields, input } = validate(ctx, newRevisionFields, args);
+  const inputNumber = inputCalcNumber(input);
+  if (inputNumber !== undefined && inputNumber !== check.calcNumber) {
+    throw new InvalidRecordError([
+      {
+        path: "input.calcNumber",
+        message: `is "${inputNumber}", but this check's calculation number is "${check.calcNumber}"; a revision keeps its check's number (save it as a new check to use another)`,
+      },
+    ]);
+  }
   const canonical = canonicalJson(input);
   const fp = fingerprint(input, ctx.engineVersion);
   const at = isoNow(ctx);
-  const savedBy = fields.savedBy ?? null;
+  const savedBy = by ? by.name : (fields.savedBy ?? null);
 
   // IMMEDIATE takes the write lock before reading the latest number, so two
   // writers (threads or processes) can never both claim the same next number.
@@ -135,12 +157,14 @@ export interface RevisionRow {
   engineVersion: string;
   savedAt: string;
   savedBy: string | null;
+  /** Brought in by an import whose sign-offs were not kept. */
+  importedUnsigned?: boolean;
 }
 
 export function insertRevision(db: Db, checkId: string, r: RevisionRow): void {
   db.prepare(
-    "INSERT INTO revisions (check_id, number, input_json, fingerprint, engine_version, saved_at, saved_by) VALUES (?, ?, ?, ?, ?, ?, ?)",
-  ).run(checkId, r.number, r.canonical, r.fingerprint, r.engineVersion, r.savedAt, r.savedBy);
+    "INSERT INTO revisions (check_id, number, input_json, fingerprint, engine_version, saved_at, saved_by, imported_unsigned) VALUES (?, ?, ?, ?, ?, ?, ?, ?)",
+  ).run(checkId, r.number, r.canonical, r.fingerprint, r.engineVersion, r.savedAt, r.savedBy, r.importedUnsigned ? 1 : 0);
 }
 
 /** Calculation numbers are unique: a sheet's number must name one check. `path` is where the number came from. */
@@ -175,6 +199,18 @@ function validate<S extends z.ZodType>(ctx: StoreContext, schema: S, args: unkno
   }
   if (errors.length || !parsed.success) throw new InvalidRecordError(errors);
   return { fields: parsed.data, input: value };
+}
+
+/**
+ * The input's own calculation number, trimmed; a number present but unusable as a record's is
+ * refused with the field's message rather than quietly replaced by a made-up one.
+ */
+function inputCalcNumber(input: unknown): string | undefined {
+  const raw = (input as Record<string, unknown> | null)?.calcNumber;
+  if (raw === undefined || raw === null || (typeof raw === "string" && raw.trim() === "")) return undefined;
+  const r = calcNumberField.safeParse(raw);
+  if (!r.success) throw new InvalidRecordError(zodFieldErrors(r.error, "input.calcNumber"));
+  return r.data;
 }
 
 /** A record field taken from the check document when it holds a usable one. */

@@ -2,6 +2,7 @@ import type { FieldError } from "../engine/errors.ts";
 import type { Db } from "./db.ts";
 import { InvalidRecordError } from "./errors.ts";
 import { joinPath } from "./fields.ts";
+import type { SigningKeys } from "./keys.ts";
 import type { ScryptCost } from "./passphrase.ts";
 
 /**
@@ -19,6 +20,8 @@ export interface StoreContext {
   engineVersion: string;
   /** The scrypt cost for newly registered passphrases; the default when absent. */
   passphraseCost?: ScryptCost;
+  /** The records' signing key pair. */
+  keys: SigningKeys;
 }
 
 /** The check input, validated and normalized, or an InvalidRecordError with paths under `prefix`. */

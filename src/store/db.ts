@@ -1,7 +1,8 @@
 import Database from "better-sqlite3";
-import { mkdirSync } from "node:fs";
+import { closeSync, mkdirSync, openSync } from "node:fs";
 import { dirname, resolve } from "node:path";
 import { fileURLToPath } from "node:url";
+import { ownerOnly } from "./keys.ts";
 import { MIGRATIONS, SCHEMA_VERSION } from "./migrations.ts";
 
 export type Db = Database.Database;
@@ -24,7 +25,13 @@ export function defaultDbPath(env: NodeJS.ProcessEnv = process.env): string {
 
 /** Open (creating when needed) the database and bring its schema up to date. */
 export function openDatabase(path: string = defaultDbPath()): Db {
-  if (path !== ":memory:") mkdirSync(dirname(path), { recursive: true });
+  if (path !== ":memory:") {
+    mkdirSync(dirname(path), { recursive: true });
+    // Created owner-only before SQLite opens it; SQLite gives its -wal and -shm files the
+    // database file's permissions.
+    closeSync(openSync(path, "a", 0o600));
+    ownerOnly(path);
+  }
   const db = new Database(path);
   try {
     // busy_timeout first: the pragmas after it may need a lock another process holds.
@@ -57,6 +64,7 @@ export function migrate(db: Db): void {
     db.transaction(() => {
       if (userVersion(db) >= m.version) return;
       db.exec(m.sql);
+      m.run?.(db);
       db.pragma(`user_version = ${m.version}`);
     }).immediate();
   }

@@ -25,8 +25,29 @@ export class RecordConflictError extends RecordError {}
 /** A sign-off the rules forbid: out of order, on a superseded revision, or the same person twice (HTTP 409). */
 export class SignOffRefusedError extends RecordError {}
 
-/** The passphrase does not match the signer's (HTTP 403). */
+/** The passphrase does not match the signed-in user's, given again to sign (HTTP 403). */
 export class WrongPassphraseError extends RecordError {}
+
+/** No one is signed in, or the name and passphrase do not match a user (HTTP 401). */
+export class NotSignedInError extends RecordError {}
+
+/** Signed in, but this needs an admin, or the user's own account (HTTP 403). */
+export class NotAllowedError extends RecordError {}
+
+/** Too many wrong passphrases lately: wait `retryAfter_s` seconds (HTTP 429 with Retry-After). */
+export class SlowDownError extends RecordError {
+  constructor(readonly retryAfter_s: number) {
+    super([
+      {
+        path: "passphrase",
+        message: `too many wrong passphrases lately from this account or this address; wait ${retryAfter_s} second${retryAfter_s === 1 ? "" : "s"} before trying again (the wait grows with each wrong try and resets on a right one)`,
+      },
+    ]);
+  }
+}
+
+/** The database cannot take a write now: full, read-only or failing (HTTP 503). */
+export class RecordsUnavailableError extends RecordError {}
 
 export function fieldError(path: string, message: string): FieldError {
   return { path, message };

@@ -1,7 +1,7 @@
-import { createHash } from "node:crypto";
 import { z } from "zod";
 import { fingerprint } from "../engine/fingerprint.ts";
 import { canonicalJson } from "../schema/canonical.ts";
+import { signoffMessage } from "../schema/signoff.ts";
 import type { FieldError } from "../engine/errors.ts";
 import { isoNow, validInput, type StoreContext } from "./context.ts";
 import { assertCalcNumberFree, insertRevision } from "./checks.ts";
@@ -9,32 +9,54 @@ import { InvalidRecordError, RecordConflictError } from "./errors.ts";
 import { appendEvent, EVENT_KINDS } from "./events.ts";
 import { calcNumberField, joinPath, parseFields, personNameField, revisionNumberField, roleField, titleField } from "./fields.ts";
 import { getCheck } from "./history.ts";
-import { nameKey } from "./signers.ts";
-import { signOffProblem, type SignoffRow } from "./signoffs.ts";
+import { keyFingerprint, readPublicKey, signatureValid } from "./keys.ts";
+import { identityOf, signOffProblem, type SignoffRow } from "./signoffs.ts";
 import { ROLES } from "./state.ts";
+import { keyForFingerprint } from "./trust.ts";
+import type { Actor } from "./users.ts";
 
 /**
- * One check with all its revisions, sign-offs and events as a single JSON
- * document, to carry it to another database. Signers' passphrase hashes are
- * never written: a sign-off travels as a record (role, name, time).
+ * One check with all its revisions, sign-offs and events as a single JSON document, to carry it
+ * to another database. Passphrase hashes are never written: a sign-off travels as its facts and
+ * their Ed25519 signature. The whole document is signed with the records' key, and carries the
+ * public key so the receiving records can name it.
  *
- * The digest is a checksum, not a signature: it catches a file edited by hand
- * or damaged on the way, but whoever edits the file can also recompute it.
+ * An import keeps sign-offs only when the document's signature and every sign-off's signature
+ * verify with a key these records trust (their own, or one an admin marked trusted). Otherwise
+ * every revision comes in unsigned, as a draft, marked "imported, not signed in these records".
  */
-export const EXCHANGE_FORMAT = "hoopwise.records/1";
+export const EXCHANGE_FORMAT = "hoopwise.records/2";
+
+/** Caps on what one import may bring, each refused with its own message. */
+export const MAX_IMPORT_REVISIONS = 500;
+export const MAX_IMPORT_EVENTS = 20_000;
+/** Bytes of the document's canonical JSON; the HTTP route refuses a larger body before reading it. */
+export const MAX_IMPORT_BYTES = 32 * 1024 * 1024;
 
 const isoTime = z.iso.datetime({ error: "must be an ISO 8601 time such as 2030-01-31T09:00:00.000Z" });
+const hex64 = z.string().regex(/^[0-9a-f]{64}$/, "must be 64 lowercase hexadecimal digits");
+const base64 = z
+  .string()
+  .max(200, "must be at most 200 characters")
+  .regex(/^[A-Za-z0-9+/]+={0,2}$/, "must be base64");
 
-const signoffDoc = z.strictObject({ role: roleField, name: personNameField, signedAt: isoTime });
+const signoffDoc = z.strictObject({
+  role: roleField,
+  name: personNameField,
+  userId: z.int({ error: "must be a whole number" }).min(1).nullable(),
+  signedAt: isoTime,
+  keyFingerprint: hex64.nullable(),
+  signature: base64.nullable(),
+});
 
 const revisionDoc = z.strictObject({
   number: revisionNumberField,
   input: z.unknown(),
-  fingerprint: z.string().regex(/^[0-9a-f]{64}$/, "must be 64 lowercase hexadecimal digits"),
+  fingerprint: hex64,
   engineVersion: z.string().min(1, "must not be empty").max(100, "must be at most 100 characters"),
   savedAt: isoTime,
   savedBy: personNameField.nullable(),
-  signoffs: z.array(signoffDoc),
+  signoffs: z.array(signoffDoc).max(ROLES.length, `must hold at most ${ROLES.length} sign-offs`),
 });
 
 const eventDoc = z.strictObject({
@@ -56,7 +78,12 @@ const exchangeDoc = z.strictObject({
   }),
   revisions: z.array(revisionDoc).min(1, "must hold at least one revision"),
   events: z.array(eventDoc),
-  digest: z.string(),
+  signature: z.strictObject({
+    algorithm: z.literal("Ed25519", { error: 'must be "Ed25519"' }),
+    publicKeyPem: z.string().max(4096),
+    keyFingerprint: hex64,
+    value: base64,
+  }),
 });
 
 export type ExchangeDocument = z.output<typeof exchangeDoc>;
@@ -66,59 +93,81 @@ export interface ImportedCheck {
   title: string;
   calcNumber: string;
   revisions: number;
+  /** Whether the sign-offs were kept: the document and each sign-off signed by a trusted key. */
+  signed: boolean;
+  /** Why not, in words, when they were not. */
+  unsignedBecause?: string;
 }
 
-/** The check as an exchange document; the export itself is logged first, so the file carries its own "exported" event. */
+/** The check as a signed exchange document. Reading for an export writes nothing. */
 export function exportCheck(ctx: StoreContext, checkId: string): ExchangeDocument {
-  return ctx.db
-    .transaction((): ExchangeDocument => {
-      const at = isoNow(ctx);
-      const before = getCheck(ctx.db, checkId);
-      appendEvent(ctx.db, checkId, { at, kind: "exported", revision: before.latestRevision, actor: null, detail: null });
-      const check = getCheck(ctx.db, checkId);
-      const body: Omit<ExchangeDocument, "digest"> = {
-        format: EXCHANGE_FORMAT,
-        exportedAt: at,
-        check: { id: check.id, title: check.title, calcNumber: check.calcNumber, createdAt: check.createdAt },
-        revisions: check.revisions.map((r) => ({
-          number: r.number,
-          input: r.input,
-          fingerprint: r.fingerprint,
-          engineVersion: r.engineVersion,
-          savedAt: r.savedAt,
-          savedBy: r.savedBy,
-          signoffs: r.signoffs.map(({ role, name, signedAt }) => ({ role, name, signedAt })),
+  const check = getCheck(ctx, checkId);
+  const body: Omit<ExchangeDocument, "signature"> = {
+    format: EXCHANGE_FORMAT,
+    exportedAt: isoNow(ctx),
+    check: { id: check.id, title: check.title, calcNumber: check.calcNumber, createdAt: check.createdAt },
+    revisions: check.revisions.map((r) => ({
+      number: r.number,
+      input: r.input,
+      fingerprint: r.fingerprint,
+      engineVersion: r.engineVersion,
+      savedAt: r.savedAt,
+      savedBy: r.savedBy,
+      // Only sign-offs that hold travel: one whose signature fails here would fail there too.
+      signoffs: r.signoffs
+        .filter((s) => s.valid && r.intact)
+        .map(({ role, name, userId, signedAt, keyFingerprint, signature }) => ({
+          role,
+          name,
+          userId,
+          signedAt,
+          keyFingerprint,
+          signature,
         })),
-        events: check.events,
-      };
-      return { ...body, digest: digestOf(body) };
-    })
-    .immediate();
+    })),
+    events: check.events,
+  };
+  return {
+    ...body,
+    signature: {
+      algorithm: "Ed25519",
+      publicKeyPem: ctx.keys.publicKeyPem,
+      keyFingerprint: ctx.keys.fingerprint,
+      value: ctx.keys.sign(canonicalJson(body)),
+    },
+  };
 }
 
 /**
- * Bring an exported check into this database after verifying every
- * fingerprint, the digest, the input of each revision and the sign-off rules.
- * Nothing is written unless all of it holds.
+ * Bring an exported check into this database after checking the caps, every fingerprint, the
+ * input of each revision, the signatures and the sign-off rules. Nothing is written unless all
+ * of it holds.
  */
-export function importCheck(ctx: StoreContext, document: unknown): ImportedCheck {
+export function importCheck(ctx: StoreContext, document: unknown, by: Actor): ImportedCheck {
+  refuseOverCaps(document);
   const doc = parseFields(exchangeDoc, document);
-  const errors = verify(ctx, doc, document);
+  const errors = checkContent(ctx, doc);
   if (errors.length) throw new InvalidRecordError(errors);
+  const trust = judgeTrust(ctx, doc, document);
+  if (trust.ok) {
+    const ruleErrors = doc.revisions.flatMap((r, i) => signoffErrors(r.signoffs, `revisions.${i}`));
+    if (ruleErrors.length) throw new InvalidRecordError(ruleErrors);
+  }
 
   const at = isoNow(ctx);
   const { check } = doc;
   ctx.db
     .transaction(() => {
       if (ctx.db.prepare("SELECT 1 FROM checks WHERE id = ?").get(check.id)) {
-        throw new RecordConflictError([{ path: "check.id", message: `check ${check.id} is already in this database` }]);
+        throw new RecordConflictError([{ path: "check.id", message: `check ${check.id} is already in these records` }]);
       }
       assertCalcNumberFree(ctx.db, check.calcNumber, "check.calcNumber");
       ctx.db
         .prepare("INSERT INTO checks (id, title, calc_number, created_at) VALUES (?, ?, ?, ?)")
         .run(check.id, check.title, check.calcNumber, check.createdAt);
       const addSignoff = ctx.db.prepare(
-        "INSERT INTO signoffs (check_id, revision, role, name, name_key, signer_id, signed_at) VALUES (?, ?, ?, ?, ?, NULL, ?)",
+        `INSERT INTO signoffs (check_id, revision, role, name, name_key, signer_id, signed_at, user_id, key_fingerprint, signature)
+         VALUES (?, ?, ?, ?, ?, NULL, ?, ?, ?, ?)`,
       );
       for (const r of doc.revisions) {
         insertRevision(ctx.db, check.id, {
@@ -128,28 +177,70 @@ export function importCheck(ctx: StoreContext, document: unknown): ImportedCheck
           engineVersion: r.engineVersion,
           savedAt: r.savedAt,
           savedBy: r.savedBy,
+          importedUnsigned: !trust.ok,
         });
-        for (const s of r.signoffs) addSignoff.run(check.id, r.number, s.role, s.name, nameKey(s.name), s.signedAt);
+        if (trust.ok) {
+          for (const s of r.signoffs)
+            addSignoff.run(
+              check.id,
+              r.number,
+              s.role,
+              s.name,
+              identityOf(s.keyFingerprint, s.userId),
+              s.signedAt,
+              s.userId,
+              s.keyFingerprint,
+              s.signature,
+            );
+        }
       }
       for (const e of doc.events) appendEvent(ctx.db, check.id, e);
       appendEvent(ctx.db, check.id, {
         at,
         kind: "imported",
         revision: doc.revisions.length,
-        actor: null,
-        detail: { exportedAt: doc.exportedAt },
+        actor: by.name,
+        detail: {
+          exportedAt: doc.exportedAt,
+          keyFingerprint: trust.fingerprint,
+          signed: trust.ok,
+          ...(trust.ok ? {} : { unsignedBecause: trust.why }),
+        },
       });
     })
     .immediate();
-  return { id: check.id, title: check.title, calcNumber: check.calcNumber, revisions: doc.revisions.length };
+  return {
+    id: check.id,
+    title: check.title,
+    calcNumber: check.calcNumber,
+    revisions: doc.revisions.length,
+    signed: trust.ok,
+    ...(trust.ok ? {} : { unsignedBecause: trust.why }),
+  };
 }
 
-function verify(ctx: StoreContext, doc: ExchangeDocument, raw: unknown): FieldError[] {
+/** The caps, judged on the raw document before anything heavier, so an oversized one costs little. */
+function refuseOverCaps(document: unknown): void {
+  const d = document as { revisions?: unknown; events?: unknown } | null;
   const errors: FieldError[] = [];
-  const { digest: _claimed, ...body } = raw as Record<string, unknown>;
-  if (digestOf(body) !== doc.digest) {
-    errors.push({ path: "digest", message: "does not match the file's contents: the file was changed after it was exported" });
+  if (Array.isArray(d?.revisions) && d.revisions.length > MAX_IMPORT_REVISIONS) {
+    errors.push({ path: "revisions", message: `holds ${d.revisions.length} revisions; an import takes at most ${MAX_IMPORT_REVISIONS}` });
   }
+  if (Array.isArray(d?.events) && d.events.length > MAX_IMPORT_EVENTS) {
+    errors.push({ path: "events", message: `holds ${d.events.length} events; an import takes at most ${MAX_IMPORT_EVENTS}` });
+  }
+  if (errors.length) throw new InvalidRecordError(errors);
+  const bytes = Buffer.byteLength(canonicalJson(document));
+  if (bytes > MAX_IMPORT_BYTES) {
+    throw new InvalidRecordError([
+      { path: "(document)", message: `is ${(bytes / 1048576).toFixed(1)} MiB; an import takes at most ${MAX_IMPORT_BYTES / 1048576} MiB` },
+    ]);
+  }
+}
+
+/** What must hold whether or not the file is trusted: numbering, fingerprints, valid inputs, events. */
+function checkContent(ctx: StoreContext, doc: ExchangeDocument): FieldError[] {
+  const errors: FieldError[] = [];
   doc.revisions.forEach((r, i) => {
     const at = `revisions.${i}`;
     if (r.number !== i + 1) errors.push({ path: `${at}.number`, message: `must be ${i + 1}: revisions are numbered 1, 2, 3… in order` });
@@ -165,7 +256,6 @@ function verify(ctx: StoreContext, doc: ExchangeDocument, raw: unknown): FieldEr
       if (!(err instanceof InvalidRecordError)) throw err;
       errors.push(...err.errors);
     }
-    errors.push(...signoffErrors(r.signoffs, at));
   });
   doc.events.forEach((e, i) => {
     if (e.revision !== null && e.revision > doc.revisions.length) {
@@ -175,20 +265,51 @@ function verify(ctx: StoreContext, doc: ExchangeDocument, raw: unknown): FieldEr
   return errors;
 }
 
-/** Imported sign-offs must obey the same order and four-eyes rules as ones given here. */
-function signoffErrors(signoffs: ExchangeDocument["revisions"][number]["signoffs"], at: string): FieldError[] {
-  const errors: FieldError[] = [];
-  const accepted: Pick<SignoffRow, "role" | "name" | "key">[] = [];
-  const inRoleOrder = signoffs.map((s, j) => ({ ...s, j })).sort((a, b) => ROLES.indexOf(a.role) - ROLES.indexOf(b.role));
-  for (const s of inRoleOrder) {
-    const key = nameKey(s.name);
-    const problem = signOffProblem(accepted, s.role, key);
-    if (problem) errors.push({ path: joinPath(`${at}.signoffs.${s.j}`, problem.path), message: problem.message });
-    else accepted.push({ role: s.role, name: s.name, key });
+type Trust = { ok: true; fingerprint: string } | { ok: false; fingerprint: string | null; why: string };
+
+/** Whether the document and all its sign-offs are signed by a key these records trust. */
+function judgeTrust(ctx: StoreContext, doc: ExchangeDocument, raw: unknown): Trust {
+  const key = readPublicKey(doc.signature.publicKeyPem);
+  if (!key) return { ok: false, fingerprint: null, why: "the file's public key cannot be read" };
+  // The fingerprint is worked out from the key itself, never taken from the file's word.
+  const fp = keyFingerprint(key);
+  const trusted = keyForFingerprint(ctx, fp);
+  if (!trusted)
+    return { ok: false, fingerprint: fp, why: `the file is signed with key ${fp}, which no admin of these records has marked trusted` };
+  const { signature: _s, ...body } = raw as Record<string, unknown>;
+  if (!signatureValid(trusted, canonicalJson(body), doc.signature.value)) {
+    return { ok: false, fingerprint: fp, why: "the file's signature does not match its contents: it was changed after it was exported" };
   }
-  return errors;
+  for (const [i, r] of doc.revisions.entries()) {
+    for (const s of r.signoffs) {
+      const facts = {
+        checkId: doc.check.id,
+        revision: r.number,
+        fingerprint: r.fingerprint,
+        role: s.role,
+        userId: s.userId ?? 0,
+        name: s.name,
+        signedAt: s.signedAt,
+      };
+      const signer = s.keyFingerprint ? keyForFingerprint(ctx, s.keyFingerprint) : undefined;
+      if (!signer || !s.signature || s.userId === null || !signatureValid(signer, signoffMessage(facts), s.signature)) {
+        return { ok: false, fingerprint: fp, why: `the ${s.role} sign-off of revision ${i + 1} has no valid signature from a trusted key` };
+      }
+    }
+  }
+  return { ok: true, fingerprint: fp };
 }
 
-function digestOf(body: unknown): string {
-  return createHash("sha256").update(canonicalJson(body)).digest("hex");
+/** Imported sign-offs must obey the same order and three-people rules as ones given here. */
+function signoffErrors(signoffs: ExchangeDocument["revisions"][number]["signoffs"], at: string): FieldError[] {
+  const errors: FieldError[] = [];
+  const accepted: Pick<SignoffRow, "role" | "name" | "identity">[] = [];
+  const inRoleOrder = signoffs.map((s, j) => ({ ...s, j })).sort((a, b) => ROLES.indexOf(a.role) - ROLES.indexOf(b.role));
+  for (const s of inRoleOrder) {
+    const identity = identityOf(s.keyFingerprint, s.userId);
+    const problem = signOffProblem(accepted, s.role, identity);
+    if (problem) errors.push({ path: joinPath(`${at}.signoffs.${s.j}`, problem.path), message: problem.message });
+    else accepted.push({ role: s.role, name: s.name, identity });
+  }
+  return errors;
 }

@@ -15,6 +15,9 @@ export const MIN_PASSPHRASE_LENGTH = 12;
 export const MAX_PASSPHRASE_LENGTH = 1024;
 
 const NO_CONTROL_CHARACTERS = /^[^\p{Cc}]*$/u;
+/** A lone UTF-16 surrogate: half of a character, which no text encoding can carry. */
+export const LONE_SURROGATE = /\p{Cs}/u;
+export const ILL_FORMED = "holds ill-formed Unicode (a lone surrogate, half of a character); send the text as proper UTF-8";
 
 function need(otherwise: string) {
   return (issue: { input?: unknown }) => (issue.input === undefined ? "is required" : otherwise);
@@ -26,7 +29,8 @@ function plainText(max: number) {
     .trim()
     .min(1, "must not be empty")
     .max(max, `must be at most ${max} characters`)
-    .regex(NO_CONTROL_CHARACTERS, "must not contain control characters such as line breaks");
+    .regex(NO_CONTROL_CHARACTERS, "must not contain control characters such as line breaks")
+    .refine((t) => !LONE_SURROGATE.test(t), ILL_FORMED);
 }
 
 export const titleField = plainText(200);
@@ -41,6 +45,7 @@ export const personNameField = plainText(100);
 
 export const passphraseField = z
   .string({ error: need("must be text") })
+  .refine((p) => !LONE_SURROGATE.test(p), ILL_FORMED)
   .refine((p) => [...p].length >= MIN_PASSPHRASE_LENGTH, `must be at least ${MIN_PASSPHRASE_LENGTH} characters`)
   .refine((p) => [...p].length <= MAX_PASSPHRASE_LENGTH, `must be at most ${MAX_PASSPHRASE_LENGTH} characters`);
 
@@ -50,6 +55,7 @@ export const passphraseField = z
  */
 export const offeredPassphraseField = z
   .string({ error: need("must be text") })
+  .refine((p) => !LONE_SURROGATE.test(p), ILL_FORMED)
   .refine((p) => [...p].length <= MAX_PASSPHRASE_LENGTH, `must be at most ${MAX_PASSPHRASE_LENGTH} characters`);
 
 export const roleField = z.enum(ROLES, { error: need(`must be one of ${ROLES.map((r) => `"${r}"`).join(", ")}`) });

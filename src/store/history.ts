@@ -1,9 +1,12 @@
-import type { Db } from "./db.ts";
+import { fingerprint as fingerprintOf } from "../engine/fingerprint.ts";
+import type { StoreContext } from "./context.ts";
 import { latestRevision, requireCheck } from "./checks.ts";
 import { RecordNotFoundError } from "./errors.ts";
 import { listEvents, type EventRecord } from "./events.ts";
 import { signoffRows, type SignOffRecord } from "./signoffs.ts";
-import { revisionState, type RevisionState, type Role } from "./state.ts";
+import { revisionState, type RevisionState } from "./state.ts";
+
+type ReadCtx = Pick<StoreContext, "db" | "keys">;
 
 /** A saved check as the list shows it. */
 export interface CheckSummary {
@@ -15,6 +18,8 @@ export interface CheckSummary {
   state: RevisionState;
   /** When the latest revision was saved. */
   updatedAt: string;
+  /** False when the latest revision's stored input no longer gives its stored fingerprint. */
+  intact: boolean;
 }
 
 export interface RevisionRecord {
@@ -25,9 +30,17 @@ export interface RevisionRecord {
   engineVersion: string;
   savedAt: string;
   savedBy: string | null;
+  /** From the valid sign-offs only; "draft" whatever they say when the revision is not intact. */
   state: RevisionState;
-  /** In role order: prepared, checked, approved. */
+  /** In role order: prepared, checked, approved. Each says whether its signature holds. */
   signoffs: SignOffRecord[];
+  /**
+   * The fingerprint recomputed from the stored input and engine version equals the stored one.
+   * False means the database was changed outside Hoopwise: nothing of this revision is to be trusted.
+   */
+  intact: boolean;
+  /** Brought in by an import whose sign-offs could not be trusted: it came in unsigned. */
+  importedUnsigned: boolean;
 }
 
 export interface CheckRecord {
@@ -48,59 +61,60 @@ export interface SheetRevision {
 }
 
 /** Every saved check, the most recently saved first. */
-export function listChecks(db: Db): CheckSummary[] {
-  const rows = db
-    .prepare(
-      `SELECT c.id, c.title, c.calc_number AS calcNumber, r.number AS latestRevision, r.saved_at AS updatedAt,
-              (SELECT group_concat(s.role) FROM signoffs s WHERE s.check_id = c.id AND s.revision = r.number) AS roles
-         FROM checks c
-         JOIN revisions r ON r.check_id = c.id
-          AND r.number = (SELECT max(number) FROM revisions WHERE check_id = c.id)
-        ORDER BY r.saved_at DESC, c.calc_number`,
-    )
-    .all() as (Omit<CheckSummary, "state"> & { roles: string | null })[];
-  return rows.map(({ roles, ...row }) => ({
-    ...row,
-    state: revisionState(row.latestRevision, row.latestRevision, (roles?.split(",") ?? []) as Role[]),
-  }));
+export function listChecks(ctx: ReadCtx): CheckSummary[] {
+  return ctx.db.transaction(() => {
+    const rows = ctx.db
+      .prepare(
+        `SELECT c.id, c.title, c.calc_number AS calcNumber, c.created_at AS createdAt, r.saved_at AS updatedAt
+           FROM checks c
+           JOIN revisions r ON r.check_id = c.id
+            AND r.number = (SELECT max(number) FROM revisions WHERE check_id = c.id)
+          ORDER BY r.saved_at DESC, c.calc_number`,
+      )
+      .all() as { id: string; title: string; calcNumber: string; createdAt: string; updatedAt: string }[];
+    return rows.map((row) => {
+      const latest = latestRevision(ctx.db, row.id).number;
+      const rev = readRevision(ctx, row.id, latest, latest);
+      return {
+        id: row.id,
+        title: row.title,
+        calcNumber: row.calcNumber,
+        latestRevision: latest,
+        state: rev.state,
+        updatedAt: row.updatedAt,
+        intact: rev.intact,
+      };
+    });
+  })();
 }
 
-export function getCheck(db: Db, checkId: string): CheckRecord {
+export function getCheck(ctx: ReadCtx, checkId: string): CheckRecord {
   // One read transaction: every query sees the same snapshot even while another process saves.
-  return db.transaction(() => readCheck(db, checkId))();
-}
-
-function readCheck(db: Db, checkId: string): CheckRecord {
-  const check = requireCheck(db, checkId);
-  const latest = latestRevision(db, checkId).number;
-  const rows = db.prepare(`${REVISION_SELECT} ORDER BY number`).all(checkId) as StoredRevision[];
-  return {
-    ...check,
-    latestRevision: latest,
-    revisions: rows.map((row) => revisionRecord(db, checkId, row, latest)),
-    events: listEvents(db, checkId),
-  };
+  return ctx.db.transaction(() => {
+    const check = requireCheck(ctx.db, checkId);
+    const latest = latestRevision(ctx.db, checkId).number;
+    const numbers = ctx.db.prepare("SELECT number FROM revisions WHERE check_id = ? ORDER BY number").pluck().all(checkId) as number[];
+    return {
+      ...check,
+      latestRevision: latest,
+      revisions: numbers.map((n) => readRevision(ctx, checkId, n, latest)),
+      events: listEvents(ctx.db, checkId),
+    };
+  })();
 }
 
 /** One revision with its sign-offs, for the sheet route. */
-export function getSheetRevision(db: Db, checkId: string, number: number): SheetRevision {
-  return db.transaction(() => readSheetRevision(db, checkId, number))();
+export function getSheetRevision(ctx: ReadCtx, checkId: string, number: number): SheetRevision {
+  return ctx.db.transaction(() => {
+    const check = requireCheck(ctx.db, checkId);
+    const latest = latestRevision(ctx.db, checkId).number;
+    return {
+      check: { id: check.id, title: check.title, calcNumber: check.calcNumber },
+      latestRevision: latest,
+      revision: readRevision(ctx, checkId, number, latest),
+    };
+  })();
 }
-
-function readSheetRevision(db: Db, checkId: string, number: number): SheetRevision {
-  const check = requireCheck(db, checkId);
-  const latest = latestRevision(db, checkId).number;
-  const row = db.prepare(`${REVISION_SELECT} AND number = ?`).get(checkId, number) as StoredRevision | undefined;
-  if (!row) throw new RecordNotFoundError([{ path: "revision", message: `check ${checkId} has no revision ${number}` }]);
-  return {
-    check: { id: check.id, title: check.title, calcNumber: check.calcNumber },
-    latestRevision: latest,
-    revision: revisionRecord(db, checkId, row, latest),
-  };
-}
-
-const REVISION_SELECT = `SELECT number, input_json AS inputJson, fingerprint, engine_version AS engineVersion,
-  saved_at AS savedAt, saved_by AS savedBy FROM revisions WHERE check_id = ?`;
 
 interface StoredRevision {
   number: number;
@@ -109,18 +123,39 @@ interface StoredRevision {
   engineVersion: string;
   savedAt: string;
   savedBy: string | null;
+  importedUnsigned: number;
 }
 
-function revisionRecord(db: Db, checkId: string, { inputJson, ...row }: StoredRevision, latest: number): RevisionRecord {
-  const signoffs = signoffRows(db, checkId, row.number).map(({ role, name, signedAt, imported }) => ({ role, name, signedAt, imported }));
+function readRevision(ctx: ReadCtx, checkId: string, number: number, latest: number): RevisionRecord {
+  const row = ctx.db
+    .prepare(
+      `SELECT number, input_json AS inputJson, fingerprint, engine_version AS engineVersion, saved_at AS savedAt,
+              saved_by AS savedBy, imported_unsigned AS importedUnsigned
+         FROM revisions WHERE check_id = ? AND number = ?`,
+    )
+    .get(checkId, number) as StoredRevision | undefined;
+  if (!row) throw new RecordNotFoundError([{ path: "revision", message: `check ${checkId} has no revision ${number}` }]);
+  let input: unknown;
+  let intact: boolean;
+  try {
+    input = JSON.parse(row.inputJson) as unknown;
+    intact = fingerprintOf(input, row.engineVersion) === row.fingerprint;
+  } catch {
+    input = null;
+    intact = false;
+  }
+  const signoffs = signoffRows(ctx, checkId, row.number, row.fingerprint).map(({ identity: _i, ...s }) => s);
+  const counted = intact ? signoffs.filter((s) => s.valid).map((s) => s.role) : [];
   return {
-    ...row,
-    input: JSON.parse(inputJson) as unknown,
-    state: revisionState(
-      row.number,
-      latest,
-      signoffs.map((s) => s.role),
-    ),
+    number: row.number,
+    input,
+    fingerprint: row.fingerprint,
+    engineVersion: row.engineVersion,
+    savedAt: row.savedAt,
+    savedBy: row.savedBy,
+    state: revisionState(row.number, latest, counted),
     signoffs,
+    intact,
+    importedUnsigned: row.importedUnsigned === 1,
   };
 }

@@ -1,28 +1,37 @@
 import { z } from "zod";
 import type { FieldError } from "../engine/errors.ts";
+import { signoffMessage, type SignedFacts } from "../schema/signoff.ts";
 import type { Db } from "./db.ts";
 import { isoNow, type StoreContext } from "./context.ts";
-import { clearFailures, noteFailure, refuseWhileLocked } from "./attempts.ts";
-import { RecordNotFoundError, SignOffRefusedError, WrongPassphraseError } from "./errors.ts";
-import { appendEvent } from "./events.ts";
 import { latestRevision, requireCheck } from "./checks.ts";
-import { offeredPassphraseField, parseFields, personNameField, revisionNumberField, roleField } from "./fields.ts";
-import { nameKey, verifySigner } from "./signers.ts";
+import { RecordNotFoundError, SignOffRefusedError } from "./errors.ts";
+import { appendEvent } from "./events.ts";
+import { offeredPassphraseField, parseFields, revisionNumberField, roleField } from "./fields.ts";
+import { keyForFingerprint } from "./trust.ts";
+import { signatureValid } from "./keys.ts";
+import { provePassphrase, type Actor } from "./users.ts";
 import { ROLES, revisionState, type RevisionState, type Role } from "./state.ts";
 
 export interface SignOffRequest {
   revision: number;
   role: Role;
-  name: string;
+  /** The signed-in user's passphrase, given again: a sign-off is a deliberate act, not a click. */
   passphrase: string;
 }
 
 export interface SignOffRecord {
   role: Role;
   name: string;
+  /** The signer's user id in the records that signed it (these, or the ones an import came from). */
+  userId: number | null;
   signedAt: string;
-  /** True for a sign-off brought in by an import: its passphrase was checked where it was given, not here. */
+  /** True for a sign-off brought in by an import from a trusted key. */
   imported: boolean;
+  /** Ed25519 signature (base64) over the sign-off's facts; null for one made before signatures were kept. */
+  signature: string | null;
+  keyFingerprint: string | null;
+  /** The signature is there, verifies, and is by these records' key or a trusted one. Only valid sign-offs count. */
+  valid: boolean;
 }
 
 export interface SignedRevision {
@@ -34,83 +43,108 @@ export interface SignedRevision {
 const signOffFields = z.strictObject({
   revision: revisionNumberField,
   role: roleField,
-  name: personNameField,
   passphrase: offeredPassphraseField,
 });
 
 /**
- * Sign one revision in one role. The rules, in the order a reader meets them:
- * roles go prepared → checked → approved; only the latest revision can be
- * signed; the checker must not be the preparer (the four-eyes rule, common
- * practice); the approver must not be the checker, so the approval is a second
- * look at the check rather than the checker's own stamp. The approver may be
- * the preparer, which lets a two-person office complete a sheet.
+ * Sign one revision in one role as the signed-in user, who gives their passphrase again. The
+ * rules, in the order a reader meets them: roles go prepared → checked → approved; only the
+ * latest revision can be signed; preparer, checker and approver are three different people
+ * (the four-eyes rule and a separate approval, common practice for calculation sheets). The
+ * sign-off signs the check id, revision, fingerprint, role, user id, name and time with the
+ * records' Ed25519 key.
  */
-export async function signOff(ctx: StoreContext, checkId: string, request: SignOffRequest): Promise<SignedRevision> {
+export async function signOff(
+  ctx: StoreContext,
+  checkId: string,
+  request: SignOffRequest,
+  by: Actor,
+  source: string,
+): Promise<SignedRevision> {
   const req = parseFields(signOffFields, request);
   requireCheck(ctx.db, checkId);
   requireRevision(ctx.db, checkId, req.revision);
-  const key = nameKey(req.name);
-  refuseWhileLocked(ctx, key, req.name.trim());
-  const signer = await verifySigner(ctx.db, req.name, req.passphrase).catch((err: unknown) => {
-    if (err instanceof WrongPassphraseError) noteFailure(ctx, key);
-    throw err;
-  });
-  clearFailures(ctx, key);
+  await provePassphrase(ctx, by, req.passphrase, source);
   const signedAt = isoNow(ctx);
 
-  // The rules are judged inside the write transaction, after the (slow)
-  // passphrase check, so a revision saved meanwhile is seen.
+  // The rules are judged inside the write transaction, after the (slow) passphrase check, so a
+  // revision saved meanwhile is seen.
   return ctx.db
     .transaction((): SignedRevision => {
-      const latest = latestRevision(ctx.db, checkId).number;
-      if (req.revision < latest) {
+      const latest = latestRevision(ctx.db, checkId);
+      if (req.revision < latest.number) {
         throw new SignOffRefusedError([
           {
             path: "revision",
-            message: `revision ${req.revision} is superseded by revision ${latest}; only the latest revision can be signed`,
+            message: `revision ${req.revision} is superseded by revision ${latest.number}; only the latest revision can be signed`,
           },
         ]);
       }
-      const existing = signoffRows(ctx.db, checkId, req.revision);
-      refuseUnlessAllowed(existing, req.role, signer.key);
+      const existing = signoffRows(ctx, checkId, req.revision, latest.fingerprint);
+      const identity = identityOf(ctx.keys.fingerprint, by.id);
+      const problem = signOffProblem(existing, req.role, identity);
+      if (problem) throw new SignOffRefusedError([problem]);
+      const facts: SignedFacts = {
+        checkId,
+        revision: req.revision,
+        fingerprint: latest.fingerprint,
+        role: req.role,
+        userId: by.id,
+        name: by.name,
+        signedAt,
+      };
+      const signature = ctx.keys.sign(signoffMessage(facts));
       ctx.db
-        .prepare("INSERT INTO signoffs (check_id, revision, role, name, name_key, signer_id, signed_at) VALUES (?, ?, ?, ?, ?, ?, ?)")
-        .run(checkId, req.revision, req.role, signer.name, signer.key, signer.id, signedAt);
+        .prepare(
+          `INSERT INTO signoffs (check_id, revision, role, name, name_key, signer_id, signed_at, user_id, key_fingerprint, signature)
+           VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?)`,
+        )
+        .run(checkId, req.revision, req.role, by.name, identity, by.id, signedAt, by.id, ctx.keys.fingerprint, signature);
       appendEvent(ctx.db, checkId, {
         at: signedAt,
         kind: "signed",
         revision: req.revision,
-        actor: signer.name,
-        detail: { role: req.role },
+        actor: by.name,
+        detail: { role: req.role, userId: by.id },
       });
-      const roles = [...existing.map((s) => s.role), req.role];
+      const roles = [...existing.filter((s) => s.valid).map((s) => s.role), req.role];
       return {
         revision: req.revision,
-        signoff: { role: req.role, name: signer.name, signedAt, imported: false },
-        state: revisionState(req.revision, latest, roles),
+        signoff: {
+          role: req.role,
+          name: by.name,
+          userId: by.id,
+          signedAt,
+          imported: false,
+          signature,
+          keyFingerprint: ctx.keys.fingerprint,
+          valid: true,
+        },
+        state: revisionState(req.revision, latest.number, roles),
       };
     })
     .immediate();
 }
 
-export interface SignoffRow {
-  role: Role;
-  name: string;
-  key: string;
-  signedAt: string;
-  imported: boolean;
+/** Who a sign-off is by: a user id is only unique within the records (the key) that gave it. */
+export function identityOf(keyFingerprint: string | null, userId: number | null): string {
+  return `${keyFingerprint ?? "unsigned"}/${userId ?? "?"}`;
+}
+
+export interface SignoffRow extends SignOffRecord {
+  /** identityOf(keyFingerprint, userId). */
+  identity: string;
 }
 
 /**
- * Why `role` may not be signed next by the person with `signerKey`, given the
- * sign-offs already on the revision, naming the field at fault; nothing when
- * it may. Shared with the import, which holds outside records to the same rules.
+ * Why `role` may not be signed next by the person `identity`, given the sign-offs already on the
+ * revision, naming the field at fault; nothing when it may. Shared with the import, which holds
+ * outside records to the same rules.
  */
 export function signOffProblem(
-  existing: readonly Pick<SignoffRow, "role" | "name" | "key">[],
+  existing: readonly Pick<SignoffRow, "role" | "name" | "identity">[],
   role: Role,
-  signerKey: string,
+  identity: string,
 ): FieldError | undefined {
   const by = (r: Role) => existing.find((s) => s.role === r);
   const already = by(role);
@@ -120,34 +154,52 @@ export function signOffProblem(
   if (before && !by(before)) {
     return { path: "role", message: `"${role}" needs the "${before}" sign-off first (order: ${ROLES.join(" → ")})` };
   }
-  const preparer = by("prepared");
-  if (role === "checked" && preparer?.key === signerKey) {
-    return { path: "name", message: `${preparer.name} prepared this revision and may not also check it (four-eyes rule)` };
-  }
-  const checker = by("checked");
-  if (role === "approved" && checker?.key === signerKey) {
+  const same = existing.find((s) => s.identity === identity);
+  if (same) {
     return {
-      path: "name",
-      message: `${checker.name} checked this revision and may not also approve it; the approval must be a second look`,
+      path: "role",
+      message: `${same.name} already signed this revision as ${same.role}; preparer, checker and approver must be three different people`,
     };
   }
   return undefined;
 }
 
-function refuseUnlessAllowed(existing: SignoffRow[], role: Role, signerKey: string): void {
-  const problem = signOffProblem(existing, role, signerKey);
-  if (problem) throw new SignOffRefusedError([problem]);
+interface StoredSignoff {
+  role: Role;
+  name: string;
+  userId: number | null;
+  signedAt: string;
+  local: number;
+  signature: string | null;
+  keyFingerprint: string | null;
 }
 
-export function signoffRows(db: Db, checkId: string, revision: number): SignoffRow[] {
-  return (
-    db
-      .prepare(
-        "SELECT role, name, name_key AS key, signed_at AS signedAt, signer_id IS NULL AS imported FROM signoffs WHERE check_id = ? AND revision = ?",
-      )
-      .all(checkId, revision) as (Omit<SignoffRow, "imported"> & { imported: number })[]
-  )
-    .map((r) => ({ ...r, imported: r.imported === 1 }))
+/**
+ * The revision's sign-offs in role order, each with its signature checked against the facts as
+ * stored now: a sign-off whose signature fails (a row or the revision's fingerprint edited in
+ * the database file, or a key no longer trusted) is shown but does not count.
+ */
+export function signoffRows(ctx: Pick<StoreContext, "db" | "keys">, checkId: string, revision: number, fingerprint: string): SignoffRow[] {
+  const rows = ctx.db
+    .prepare(
+      `SELECT role, name, user_id AS userId, signed_at AS signedAt, signer_id IS NOT NULL AS local, signature, key_fingerprint AS keyFingerprint
+         FROM signoffs WHERE check_id = ? AND revision = ?`,
+    )
+    .all(checkId, revision) as StoredSignoff[];
+  return rows
+    .map(({ local, ...r }) => {
+      const key = r.keyFingerprint ? keyForFingerprint(ctx, r.keyFingerprint) : undefined;
+      const valid =
+        key !== undefined &&
+        r.signature !== null &&
+        r.userId !== null &&
+        signatureValid(
+          key,
+          signoffMessage({ checkId, revision, fingerprint, role: r.role, userId: r.userId, name: r.name, signedAt: r.signedAt }),
+          r.signature,
+        );
+      return { ...r, imported: local === 0, valid, identity: identityOf(r.keyFingerprint, r.userId) };
+    })
     .sort((a, b) => ROLES.indexOf(a.role) - ROLES.indexOf(b.role));
 }
 

@@ -1,7 +1,7 @@
 import { Hono } from "hono";
 import { bodyLimit } from "hono/body-limit";
 import { checkText, sharedPool, WorkPoolBusy, type WorkPool } from "../pool/index.ts";
-import { MAX_JSON_DEPTH, tooDeepAt } from "../schema/depth.ts";
+import { illFormedAt, MAX_JSON_DEPTH, tooDeepAt } from "../schema/depth.ts";
 
 /** Largest JSON body the API reads: room for the longest history the schema takes (5 000 000 points of about 8 characters). */
 export const MAX_JSON_BYTES = 64 * 1024 * 1024;
@@ -36,6 +36,13 @@ export async function readJson(
       ok: false,
       status: 422,
       body: errorsDoc(deep, `nests deeper than ${MAX_JSON_DEPTH} levels; no field of Hoopwise nests that deep`),
+    };
+  const bad = illFormedAt(value);
+  if (bad !== undefined)
+    return {
+      ok: false,
+      status: 422,
+      body: errorsDoc(bad, "holds ill-formed Unicode (a lone surrogate, half of a character); send the text as proper UTF-8"),
     };
   return { ok: true, value };
 }

@@ -2,13 +2,20 @@ import { Hono } from "hono";
 import { secureHeaders } from "hono/secure-headers";
 import type { WorkPool } from "../pool/index.ts";
 import { checkApi, errorsDoc } from "./api.ts";
+import { isStorageFault, storageFaultWords, type Store } from "../store/index.ts";
 import { refuseCrossSite } from "./crossSite.ts";
+import { refuseForeignHost } from "./hosts.ts";
 
 export interface AppOptions {
   /** Extra sub-apps mounted at the root (sheet, records, page). */
-  mounts?: Hono[];
+  // biome-ignore lint/suspicious/noExplicitAny: sub-apps carry their own variables (the signed-in user).
+  mounts?: Hono<any, any, any>[];
   /** Worker threads for large check bodies; the process's shared pool unless given. */
   pool?: WorkPool;
+  /** The records, whose writability /healthz reports. */
+  store?: Pick<Store, "probeWrite">;
+  /** Host header values served (hosts.ts); the loopback names on any port by default. */
+  allowedHosts?: readonly string[];
 }
 
 /**
@@ -37,12 +44,24 @@ export function createApp(opts: AppOptions = {}): Hono {
       xFrameOptions: "DENY",
     }),
   );
+  app.use("*", refuseForeignHost(opts.allowedHosts));
   app.use("*", refuseCrossSite());
-  app.get("/healthz", (c) => c.json({ status: "ok" }));
+  app.get("/healthz", (c) => {
+    c.header("Cache-Control", "no-store");
+    if (!opts.store) return c.json({ status: "ok" });
+    try {
+      opts.store.probeWrite();
+      return c.json({ status: "ok", records: "writable" });
+    } catch (err) {
+      if (!isStorageFault(err)) console.error(err);
+      return c.json({ status: "unavailable", errors: [{ path: "(records)", message: storageFaultWords(err) }] }, 503);
+    }
+  });
   app.route("/", checkApi({ pool: opts.pool }));
   for (const m of opts.mounts ?? []) app.route("/", m);
   app.notFound((c) => c.json(errorsDoc("(url)", `no such page: ${c.req.method} ${c.req.path}`), 404));
   app.onError((err, c) => {
+    if (isStorageFault(err)) return c.json(errorsDoc("(server)", storageFaultWords(err)), 503);
     console.error(err);
     return c.json(errorsDoc("(server)", "the server met an unexpected problem; nothing saved was lost — please report it"), 500);
   });

@@ -3,7 +3,7 @@ import { errorsDoc } from "./api.ts";
 
 /**
  * Refuse state-changing requests that a browser marks as coming from another site: a page
- * elsewhere must not save revisions or register signers through the user's browser. Browsers
+ * elsewhere must not save revisions, add people or sign through the user's browser. Browsers
  * send Sec-Fetch-Site and Origin on such posts (Fetch Metadata; the Origin header, RFC 6454);
  * scripts, the CLI and tests that send neither are not browsers acting for someone else and pass.
  */

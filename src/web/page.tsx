@@ -99,7 +99,7 @@ function pickDefined(q: Record<string, string | undefined>, keys: string[]): Rec
   return Object.fromEntries(keys.filter((k) => q[k] !== undefined).map((k) => [k, q[k] as string]));
 }
 
-async function fullPage(c: Context, w: Worked, status: 200 | 403 | 404 | 409 | 422, notice?: string) {
+async function fullPage(c: Context, w: Worked, status: 200 | 401 | 403 | 404 | 409 | 422 | 429 | 503, notice?: string) {
   const title = w.state.values.title;
   const page = (
     <Page title={title} notice={notice}>
@@ -117,7 +117,7 @@ export async function showPosted(
   c: Context,
   posted: Posted,
   notice: string,
-  status: 403 | 404 | 409 | 422 = 422,
+  status: 401 | 403 | 404 | 409 | 422 | 429 | 503 = 422,
   beside: Record<string, string[]> = {},
 ) {
   const w = work(posted.document, undefined, posted);

@@ -51,7 +51,11 @@ export async function sheetResponse(json: unknown, opts: Omit<SheetOptions, "req
       return Response.json(errorsDoc("(server)", err.message), { status: 503, headers: { "retry-after": String(retry) } });
     }
     if (err instanceof BrowserUnavailableError || err instanceof RenderTimeoutError) {
-      return Response.json(errorsDoc("(server)", `the check sheet cannot be printed now: ${err.message}`), { status: 503 });
+      // A renderer that would not start or hung is relaunched for the next sheet: worth a retry soon.
+      return Response.json(errorsDoc("(server)", `the check sheet cannot be printed now: ${err.message}`), {
+        status: 503,
+        headers: { "retry-after": err instanceof RenderTimeoutError ? "5" : "30" },
+      });
     }
     throw err;
   }

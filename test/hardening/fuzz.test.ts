@@ -102,7 +102,8 @@ describe("every route that reads a body", () => {
     "/api/v1/checks/import",
     "/api/v1/checks/x/revisions",
     "/api/v1/checks/x/signoffs",
-    "/api/v1/signers",
+    "/api/v1/users",
+    "/api/v1/session",
   ];
   const FORM_ROUTES = [
     "/",
@@ -113,7 +114,7 @@ describe("every route that reads a body", () => {
     "/records/save",
     "/records/x/revisions",
     "/records/x/sign",
-    "/records/signers",
+    "/records/people",
   ];
 
   it("refuses a body over its limit with 413 before reading it, and JSON routes say the limit", { timeout: 60_000 }, async () => {

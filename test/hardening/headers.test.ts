@@ -63,14 +63,15 @@ function routeFamilies(id: string): [string, string, RequestInit, number][] {
     ["record", `/api/v1/checks/${id}`, {}, 200],
     ["record missing", "/api/v1/checks/none", {}, 404],
     ["record refused", "/api/v1/checks", { method: "POST", headers: json, body: "{}" }, 422],
-    ["signers", "/api/v1/signers", {}, 200],
+    ["people", "/api/v1/users", {}, 200],
+    ["keys", "/api/v1/keys", {}, 200],
     ["sheet API, invalid", "/api/v1/sheet", { method: "POST", headers: json, body: "{}" }, 422],
     ["sheet API, wrong type", "/api/v1/sheet", { method: "POST", headers: form, body: "a=b" }, 415],
     ["revision sheet missing", "/api/v1/checks/none/revisions/1/sheet", {}, 404],
     ["records page", "/records", {}, 200],
     ["record page", `/records/${id}`, {}, 200],
     ["record page missing", "/records/none", {}, 404],
-    ["signers page", "/records/signers", {}, 200],
+    ["people page", "/records/people", {}, 200],
     ["no such page", "/nowhere", {}, 404],
     ["no such method", "/api/v1/check", { method: "PUT", headers: json, body: cabin }, 404],
   ];
@@ -81,7 +82,7 @@ describe("in-process, every route family", () => {
   let id: string;
   beforeAll(() => {
     whole = wholeApp();
-    id = whole.store.createCheck({ input: DEMOS[0].document, calcNumber: "HDR-1" }).id;
+    id = whole.store.createCheck({ input: { ...DEMOS[0].document, calcNumber: "HDR-1" } }).id;
   });
   afterAll(() => whole.close());
 
@@ -140,9 +141,13 @@ describe("the server as started", () => {
   });
 
   it("sends the headers from the real wiring too", async () => {
-    const id = (await (await fetch(`${server.base}/api/v1/checks`)).json()).checks[0].id as string;
+    const authorization = `Bearer ${await server.adminToken()}`;
+    const id = (await (await fetch(`${server.base}/api/v1/checks`, { headers: { authorization } })).json()).checks[0].id as string;
     for (const [what, path, init, status] of routeFamilies(id).filter(([what]) => !what.includes("too large"))) {
-      const res = await fetch(`${server.base}${path}`, init);
+      const res = await fetch(`${server.base}${path}`, {
+        ...init,
+        headers: { ...(init.headers as Record<string, string>), authorization },
+      });
       await res.arrayBuffer();
       expect(res.status, what).toBe(status);
       expectSecurityHeaders(res, what);

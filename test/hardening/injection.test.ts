@@ -136,10 +136,18 @@ describe("in the JSON", () => {
     expect(res.headers.get("x-content-type-options")).toBe("nosniff");
     expect((await res.json()).title).toBe(HOSTILE_TEXT.title);
 
-    const saved = await whole.app.request("/api/v1/checks", {
+    // A calculation number the records cannot keep is refused, never replaced by another.
+    const refused = await whole.app.request("/api/v1/checks", {
       method: "POST",
       headers: { "content-type": "application/json" },
       body: JSON.stringify({ input: hostile, title: HOSTILE_TEXT.project }),
+    });
+    expect(refused.status).toBe(422);
+    expect((await refused.json()).errors[0].path).toBe("input.calcNumber");
+    const saved = await whole.app.request("/api/v1/checks", {
+      method: "POST",
+      headers: { "content-type": "application/json" },
+      body: JSON.stringify({ input: { ...hostile, calcNumber: undefined }, title: HOSTILE_TEXT.project }),
     });
     expect(saved.status).toBe(201);
     const { id } = await saved.json();
@@ -149,6 +157,7 @@ describe("in the JSON", () => {
     expect(exported.headers.get("content-disposition")).toMatch(/^attachment; filename="[A-Za-z0-9._-]+\.hoopwise\.json"$/);
     const input = (await exported.json()).revisions[0].input;
     for (const [field, text] of Object.entries(HOSTILE_TEXT)) {
+      if (field === "calcNumber") continue; // refused above
       const [a, b] = field.split(".");
       expect(b ? input[a === "cutout" ? "cutout" : "material"][b] : input[a], field).toBe(text);
     }

@@ -107,15 +107,21 @@ describe("the server under load and faults", () => {
 
   it("on SIGTERM lets requests in flight finish, closes Chromium and the database, and exits 0", { timeout: 120_000 }, async () => {
     const browsers = chromiumBrowsers(server.pid);
+    const authorization = `Bearer ${await server.adminToken()}`;
     let settled = 0;
     const sheets = Array.from({ length: 3 }, (_, i) => sheet(i).then(sheetOutcome));
     const inFlight = [
       ...sheets,
       ...Array.from({ length: 20 }, (_, i) => check(i).then((r) => r.status)),
       ...Array.from({ length: 5 }, (_, i) =>
-        post(`save ${i}`, "/api/v1/checks", JSON.stringify({ input: DEMOS[1].document, calcNumber: `TERM-${i}` })).then((r) =>
-          r.status === 201 ? (jsonOf(r) as { id: string }).id : r.status,
-        ),
+        bounded(
+          `save ${i}`,
+          send(`${server.base}/api/v1/checks`, {
+            method: "POST",
+            headers: { ...JSON_TYPE, authorization },
+            body: JSON.stringify({ input: { ...DEMOS[1].document, calcNumber: `TERM-${i}` } }),
+          }),
+        ).then((r) => (r.status === 201 ? (jsonOf(r) as { id: string }).id : r.status)),
       ),
     ];
     const done = () => (settled += 1);

@@ -7,6 +7,7 @@ import { mkdtempSync, rmSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { fileURLToPath } from "node:url";
+import { openStore } from "../../src/store/index.ts";
 
 const ROOT = fileURLToPath(new URL("../..", import.meta.url));
 /** Start-up includes compiling the TypeScript; generous so a slow CI machine is not taken for a broken server. */
@@ -23,7 +24,12 @@ export interface ServerChild {
   exited: Promise<{ code: number | null; signal: NodeJS.Signals | null }>;
   /** Kill the server if it still runs (SIGKILL, by its id) and remove its database folder. */
   dispose(): Promise<void>;
+  /** A bearer token of an admin added to the server's records (the first call adds and signs in). */
+  adminToken(): Promise<string>;
 }
+
+/** An invented admin for the server's records. */
+const ADMIN = { name: "Orla Penhaligon-Voss", passphrase: "cobalt meadow lantern quay" };
 
 export async function startServer(extraEnv: Record<string, string> = {}): Promise<ServerChild> {
   const dir = mkdtempSync(join(tmpdir(), "hoopwise-server-"));
@@ -65,5 +71,23 @@ export async function startServer(extraEnv: Record<string, string> = {}): Promis
     await dispose();
     throw err;
   });
-  return { child, pid: child.pid as number, base, dbPath, output: () => output, exited, dispose };
+  let token: Promise<string> | undefined;
+  const adminToken = () =>
+    (token ??= (async () => {
+      // Added through the records' own code, as `user add` does, by whoever owns the database file.
+      const store = openStore({ path: dbPath, passphraseCost: { n: 2 ** 10, r: 8, p: 1 } });
+      try {
+        await store.addUser({ ...ADMIN, role: "admin" }, "database-owner", "test");
+      } finally {
+        store.close();
+      }
+      const res = await fetch(`${base}/api/v1/session`, {
+        method: "POST",
+        headers: { "content-type": "application/json" },
+        body: JSON.stringify({ name: ADMIN.name, passphrase: ADMIN.passphrase }),
+      });
+      if (res.status !== 201) throw new Error(`sign-in to the test server answered ${res.status}: ${await res.text()}`);
+      return ((await res.json()) as { token: string }).token;
+    })());
+  return { child, pid: child.pid as number, base, dbPath, output: () => output, exited, dispose, adminToken };
 }

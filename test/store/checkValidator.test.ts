@@ -49,6 +49,7 @@ describe("the store with the real check schema", () => {
     const { id } = store.createCheck({ input: DEMOS[1].document });
     store.addRevision(id, { input: { ...DEMOS[1].document, shell: { ...DEMOS[1].document.shell, thickness_mm: 6 } } });
     const doc = JSON.parse(JSON.stringify(store.exportCheck(id))) as unknown;
-    expect(realStore().importCheck(doc)).toMatchObject({ id, revisions: 2 });
+    const admin = { id: 1, name: "Importing Admin", role: "admin" as const };
+    expect(realStore().importCheck(doc, admin)).toMatchObject({ id, revisions: 2, signed: false });
   });
 });

@@ -101,8 +101,29 @@ describe("saving checks and revisions", () => {
     const store = testStore();
     const fromInput = store.createCheck({ input: { ...sampleInput(1.6, "Receiver shell, invented"), calcNumber: "RX-12" } });
     expect(fromInput).toMatchObject({ title: "Receiver shell, invented", calcNumber: "RX-12" });
-    const given = store.createCheck({ input: { ...sampleInput(), calcNumber: "RX-13" }, title: "Given title", calcNumber: "GIVEN-1" });
+    const given = store.createCheck({ input: { ...sampleInput(), calcNumber: "GIVEN-1" }, title: "Given title", calcNumber: "GIVEN-1" });
     expect(given).toMatchObject({ title: "Given title", calcNumber: "GIVEN-1" });
+  });
+
+  // The sheet prints the record's number, so a number the records cannot keep is never quietly replaced.
+  it("refuses two different numbers in one request, a malformed input number, and a revision that changes the number", () => {
+    const store = testStore();
+    const two = catchError(() => store.createCheck({ input: { ...sampleInput(), calcNumber: "RX-13" }, calcNumber: "GIVEN-1" }));
+    expect((two as InvalidRecordError).errors).toEqual([
+      { path: "calcNumber", message: expect.stringMatching(/differs from the input's calculation number "RX-13"/) },
+    ]);
+    const odd = catchError(() => store.createCheck({ input: { ...sampleInput(), calcNumber: "-starts with a dash" } }));
+    expect((odd as InvalidRecordError).errors[0]).toMatchObject({
+      path: "input.calcNumber",
+      message: expect.stringMatching(/must start with a letter or digit/),
+    });
+    const { id } = store.createCheck({ input: { ...sampleInput(), calcNumber: "RX-14" } });
+    const moved = catchError(() => store.addRevision(id, { input: { ...sampleInput(2), calcNumber: "RX-15" } }));
+    expect((moved as InvalidRecordError).errors[0]).toMatchObject({
+      path: "input.calcNumber",
+      message: expect.stringMatching(/this check's calculation number is "RX-14"/),
+    });
+    expect(store.listChecks().map((c) => c.calcNumber)).toEqual(["RX-14"]);
   });
 
   it("generates a calculation number, and a title, when neither request nor input has one", () => {

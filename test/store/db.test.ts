@@ -1,5 +1,5 @@
 import Database from "better-sqlite3";
-import { existsSync } from "node:fs";
+import { existsSync, statSync } from "node:fs";
 import { dirname, join, resolve } from "node:path";
 import { describe, expect, it } from "vitest";
 import { defaultDbPath, openDatabase, SCHEMA_VERSION } from "../../src/store/index.ts";
@@ -14,7 +14,21 @@ describe("openDatabase", () => {
     const tables = (db.prepare("SELECT name FROM sqlite_master WHERE type = 'table' ORDER BY name").all() as { name: string }[]).map(
       (t) => t.name,
     );
-    expect(tables).toEqual(expect.arrayContaining(["checks", "events", "revisions", "signers", "signoffs"]));
+    expect(tables).toEqual(
+      expect.arrayContaining([
+        "attempts",
+        "checks",
+        "events",
+        "people_events",
+        "revisions",
+        "sessions",
+        "signoffs",
+        "trusted_keys",
+        "users",
+      ]),
+    );
+    // Readable by its owner only.
+    expect(statSync(path).mode & 0o777).toBe(0o600);
     db.close();
   });
 
@@ -23,7 +37,9 @@ describe("openDatabase", () => {
     expect(db.pragma("journal_mode", { simple: true })).toBe("wal");
     expect(db.pragma("foreign_keys", { simple: true })).toBe(1);
     expect(db.pragma("busy_timeout", { simple: true })).toBeGreaterThan(0);
-    expect(() => db.prepare("INSERT INTO revisions VALUES ('no-such-check', 1, '{}', 'x', 'v', 't', NULL)").run()).toThrow(/FOREIGN KEY/);
+    expect(() => db.prepare("INSERT INTO revisions VALUES ('no-such-check', 1, '{}', 'x', 'v', 't', NULL, 0)").run()).toThrow(
+      /FOREIGN KEY/,
+    );
     db.close();
   });
 

@@ -1,19 +1,32 @@
-import { createHash } from "node:crypto";
+import { createPrivateKey, generateKeyPairSync, sign } from "node:crypto";
+import { readFileSync } from "node:fs";
 import { describe, expect, it } from "vitest";
 import { canonicalJson } from "../../src/schema/canonical.ts";
-import { EXCHANGE_FORMAT, InvalidRecordError, RecordConflictError, type ExchangeDocument, type Store } from "../../src/store/index.ts";
+import { signoffMessage } from "../../src/schema/signoff.ts";
+import {
+  EXCHANGE_FORMAT,
+  InvalidRecordError,
+  MAX_IMPORT_EVENTS,
+  MAX_IMPORT_REVISIONS,
+  RecordConflictError,
+  type Actor,
+  type ExchangeDocument,
+  type SqliteStore,
+} from "../../src/store/index.ts";
 import { PEOPLE, registerPeople, sampleInput, testStore } from "./helpers.ts";
 
 /** A check with two revisions: the first prepared and checked, then superseded; the second prepared. */
-async function signedHistory(): Promise<{ store: Store; id: string }> {
+async function signedHistory() {
   const store = testStore();
-  await registerPeople(store);
-  const { id } = store.createCheck({ input: sampleInput(1.6), calcNumber: "HW-EXCH-1", savedBy: PEOPLE.ana.name });
-  await store.signOff(id, { revision: 1, role: "prepared", ...PEOPLE.ana });
-  await store.signOff(id, { revision: 1, role: "checked", ...PEOPLE.bo });
-  store.addRevision(id, { input: sampleInput(1.8), savedBy: PEOPLE.ana.name });
-  await store.signOff(id, { revision: 2, role: "prepared", ...PEOPLE.ana });
-  return { store, id };
+  const people = await registerPeople(store);
+  const { id } = store.createCheck({ input: sampleInput(1.6), calcNumber: "HW-EXCH-1" }, people.ana);
+  const s = (revision: number, role: "prepared" | "checked", who: "ana" | "bo") =>
+    store.signOff(id, { revision, role, passphrase: PEOPLE[who].passphrase }, people[who], "test");
+  await s(1, "prepared", "ana");
+  await s(1, "checked", "bo");
+  store.addRevision(id, { input: sampleInput(1.8) }, people.ana);
+  await s(2, "prepared", "ana");
+  return { store, id, people };
 }
 
 /** A deep copy of the document, as it would be after a trip through a file. */
@@ -21,9 +34,16 @@ function copy(doc: ExchangeDocument): ExchangeDocument {
   return JSON.parse(JSON.stringify(doc)) as ExchangeDocument;
 }
 
-function importError(store: Store, doc: unknown): InvalidRecordError {
+/** Records elsewhere, with an admin to import. */
+async function otherRecords(): Promise<{ store: SqliteStore; admin: Actor }> {
+  const store = testStore();
+  const admin = await store.addUser({ name: "Dee Marchetti", role: "admin", passphrase: "lilac thunder pebble road" }, null);
+  return { store, admin };
+}
+
+function importError(store: SqliteStore, admin: Actor, doc: unknown): InvalidRecordError {
   try {
-    store.importCheck(doc);
+    store.importCheck(doc, admin);
   } catch (err) {
     if (err instanceof InvalidRecordError) return err;
     throw err;
@@ -32,31 +52,44 @@ function importError(store: Store, doc: unknown): InvalidRecordError {
 }
 
 describe("export and import", () => {
-  it("carries a check with every revision, sign-off and event into another database", async () => {
+  it("carries a check with its sign-offs into records that trust the exporting key", async () => {
     const { store, id } = await signedHistory();
     const doc = copy(store.exportCheck(id));
     expect(doc.format).toBe(EXCHANGE_FORMAT);
-    expect(store.getCheck(id).events.at(-1)?.kind).toBe("exported");
+    expect(doc.signature.keyFingerprint).toBe(store.publicKey().fingerprint);
 
-    const elsewhere = testStore();
-    expect(elsewhere.importCheck(doc)).toEqual({ id, title: "Bay 7 skin panel (invented example)", calcNumber: "HW-EXCH-1", revisions: 2 });
+    const { store: elsewhere, admin } = await otherRecords();
+    elsewhere.trustKey({ publicKeyPem: store.publicKey().publicKeyPem, label: "the first office" }, admin);
+    expect(elsewhere.importCheck(doc, admin)).toMatchObject({ id, calcNumber: "HW-EXCH-1", revisions: 2, signed: true });
 
     const original = store.getCheck(id);
     const imported = elsewhere.getCheck(id);
-    expect(imported.revisions.map((r) => [r.number, r.fingerprint, r.state, r.input])).toEqual(
-      original.revisions.map((r) => [r.number, r.fingerprint, r.state, r.input]),
+    expect(imported.revisions.map((r) => [r.number, r.fingerprint, r.state, r.input, r.importedUnsigned])).toEqual(
+      original.revisions.map((r) => [r.number, r.fingerprint, r.state, r.input, false]),
     );
-    expect(imported.revisions.map((r) => r.signoffs.map((s) => [s.role, s.name, s.signedAt, s.imported]))).toEqual(
-      original.revisions.map((r) => r.signoffs.map((s) => [s.role, s.name, s.signedAt, true])),
+    expect(imported.revisions.map((r) => r.signoffs.map((s) => [s.role, s.name, s.signedAt, s.imported, s.valid]))).toEqual(
+      original.revisions.map((r) => r.signoffs.map((s) => [s.role, s.name, s.signedAt, true, true])),
     );
     expect(imported.events.slice(0, -1)).toEqual(original.events);
-    expect(imported.events.at(-1)).toMatchObject({ kind: "imported", detail: { exportedAt: doc.exportedAt } });
+    expect(imported.events.at(-1)).toMatchObject({ kind: "imported", actor: "Dee Marchetti", detail: { signed: true } });
   });
 
-  it("never writes a signer's passphrase hash or salt into the file", async () => {
+  it("brings a file from a key no admin trusts in unsigned, as drafts marked imported", async () => {
+    const { store, id } = await signedHistory();
+    const { store: elsewhere, admin } = await otherRecords();
+    const out = elsewhere.importCheck(copy(store.exportCheck(id)), admin);
+    expect(out).toMatchObject({ signed: false, unsignedBecause: expect.stringMatching(/no admin of these records has marked trusted/) });
+    const imported = elsewhere.getCheck(id);
+    expect(imported.revisions.map((r) => [r.state, r.importedUnsigned, r.signoffs.length])).toEqual([
+      ["superseded", true, 0],
+      ["draft", true, 0],
+    ]);
+  });
+
+  it("never writes a passphrase hash or salt into the file", async () => {
     const { store, id } = await signedHistory();
     const text = JSON.stringify(store.exportCheck(id));
-    const secrets = store.db.prepare("SELECT hex(salt) AS salt, hex(hash) AS hash FROM signers").all() as { salt: string; hash: string }[];
+    const secrets = store.db.prepare("SELECT hex(salt) AS salt, hex(hash) AS hash FROM users").all() as { salt: string; hash: string }[];
     for (const s of secrets) {
       expect(text.toLowerCase()).not.toContain(s.salt.toLowerCase());
       expect(text.toLowerCase()).not.toContain(s.hash.toLowerCase());
@@ -65,48 +98,132 @@ describe("export and import", () => {
     expect(text).not.toContain(PEOPLE.ana.passphrase);
   });
 
-  it("refuses a file whose input was edited, naming the revision, and stores nothing", async () => {
+  it("refuses a file whose input was edited without its fingerprint, naming the revision, and stores nothing", async () => {
     const { store, id } = await signedHistory();
     const doc = copy(store.exportCheck(id));
     (doc.revisions[0].input as { shell: { thickness_mm: number } }).shell.thickness_mm = 2.5;
-    const elsewhere = testStore();
-    const err = importError(elsewhere, doc);
-    expect(err.errors.map((e) => e.path)).toEqual(["digest", "revisions.0.fingerprint"]);
+    const { store: elsewhere, admin } = await otherRecords();
+    expect(importError(elsewhere, admin, doc).errors.map((e) => e.path)).toEqual(["revisions.0.fingerprint"]);
     expect(elsewhere.listChecks()).toEqual([]);
   });
 
-  it("refuses a file whose sign-off was edited, through the digest", async () => {
+  // Attack: an altered export. The attacker renames a sign-off to a trusted person; the file's
+  // and the sign-off's signatures no longer match, so the sign-offs are dropped.
+  it("attack — altered import: a sign-off renamed in a trusted file arrives unsigned", async () => {
     const { store, id } = await signedHistory();
+    const { store: elsewhere, admin } = await otherRecords();
+    elsewhere.trustKey({ publicKeyPem: store.publicKey().publicKeyPem, label: "the first office" }, admin);
     const doc = copy(store.exportCheck(id));
     doc.revisions[0].signoffs[1].name = "Someone Trusted";
-    expect(importError(testStore(), doc).errors).toEqual([
-      { path: "digest", message: expect.stringMatching(/changed after it was exported/) },
+    const out = elsewhere.importCheck(doc, admin);
+    expect(out).toMatchObject({ signed: false, unsignedBecause: expect.stringMatching(/changed after it was exported/) });
+    expect(elsewhere.getCheck(id).revisions.every((r) => r.signoffs.length === 0 && r.importedUnsigned)).toBe(true);
+  });
+
+  // Attack: a record made from nothing, signed with the attacker's own fresh key, with the
+  // fingerprints recomputed so every checksum is consistent.
+  it("attack — forged import: a record made from nothing with the forger's own key gets no sign-off", async () => {
+    const { store, id } = await signedHistory();
+    const forged = copy(store.exportCheck(id));
+    const { privateKey, publicKey } = generateKeyPairSync("ed25519");
+    const pem = publicKey.export({ type: "spki", format: "pem" }) as string;
+    const fp = (await import("node:crypto"))
+      .createHash("sha256")
+      .update(publicKey.export({ type: "spki", format: "der" }))
+      .digest("hex");
+    forged.check.id = "forged-check-1";
+    forged.check.calcNumber = "HW-FORGED-1";
+    forged.revisions = [forged.revisions[1]];
+    forged.revisions[0].number = 1;
+    forged.events = [];
+    const r = forged.revisions[0];
+    r.signoffs = (["prepared", "checked", "approved"] as const).map((role, i) => {
+      const facts = {
+        checkId: forged.check.id,
+        revision: 1,
+        fingerprint: r.fingerprint,
+        role,
+        userId: i + 1,
+        name: `Person ${i + 1}`,
+        signedAt: "2030-03-01T08:00:00.000Z",
+      };
+      return {
+        role,
+        name: facts.name,
+        userId: facts.userId,
+        signedAt: facts.signedAt,
+        keyFingerprint: fp,
+        signature: sign(null, Buffer.from(signoffMessage(facts)), privateKey).toString("base64"),
+      };
+    });
+    const { signature: _s, ...body } = forged;
+    const doc = {
+      ...body,
+      signature: {
+        algorithm: "Ed25519",
+        publicKeyPem: pem,
+        keyFingerprint: fp,
+        value: sign(null, Buffer.from(canonicalJson(body)), privateKey).toString("base64"),
+      },
+    };
+    const { store: elsewhere, admin } = await otherRecords();
+    expect(elsewhere.importCheck(doc, admin)).toMatchObject({ signed: false });
+    const [rev] = elsewhere.getCheck("forged-check-1").revisions;
+    expect(rev).toMatchObject({ state: "draft", importedUnsigned: true, signoffs: [] });
+  });
+
+  it("holds a trusted file's sign-offs to the three-people rule, even when every signature holds", async () => {
+    // Re-signed with the exporting records' own private key, so only the rule can refuse it.
+    const { store, id, people } = await signedHistory();
+    const key = createPrivateKey(readFileSync(store.keyPath ?? ""));
+    const doc = copy(store.exportCheck(id));
+    const r = doc.revisions[0];
+    const checked = r.signoffs[1];
+    checked.userId = people.ana.id;
+    checked.name = people.ana.name;
+    const facts = {
+      checkId: id,
+      revision: 1,
+      fingerprint: r.fingerprint,
+      role: checked.role,
+      userId: checked.userId,
+      name: checked.name,
+      signedAt: checked.signedAt,
+    };
+    checked.signature = sign(null, Buffer.from(signoffMessage(facts)), key).toString("base64");
+    const { signature: old, ...body } = doc;
+    const resigned = { ...body, signature: { ...old, value: sign(null, Buffer.from(canonicalJson(body)), key).toString("base64") } };
+    const { store: elsewhere, admin } = await otherRecords();
+    elsewhere.trustKey({ publicKeyPem: store.publicKey().publicKeyPem, label: "the first office" }, admin);
+    expect(importError(elsewhere, admin, resigned).errors).toEqual([
+      { path: "revisions.0.signoffs.1.role", message: expect.stringMatching(/three different people/) },
     ]);
   });
 
-  it("holds imported sign-offs to the four-eyes rule even when the digest is consistent", async () => {
-    const { store, id } = await signedHistory();
-    const doc = copy(store.exportCheck(id));
-    doc.revisions[0].signoffs[1].name = PEOPLE.ana.name;
-    // Whoever edits a file can recompute its checksum; the rules still hold.
-    const { digest: _old, ...body } = doc;
-    const resealed = { ...body, digest: createHash("sha256").update(canonicalJson(body)).digest("hex") };
-    expect(importError(testStore(), resealed).errors).toEqual([
-      { path: "revisions.0.signoffs.1.name", message: expect.stringMatching(/four-eyes/) },
+  it("refuses a file with more revisions or events than an import takes, each with its own message", () => {
+    const store = testStore();
+    const admin = { id: 1, name: "x", role: "admin" as const };
+    const big = { revisions: new Array(MAX_IMPORT_REVISIONS + 1).fill({}), events: new Array(MAX_IMPORT_EVENTS + 1).fill({}) };
+    const err = importError(store, admin, big);
+    expect(err.errors).toEqual([
+      { path: "revisions", message: expect.stringMatching(new RegExp(`at most ${MAX_IMPORT_REVISIONS}`)) },
+      { path: "events", message: expect.stringMatching(new RegExp(`at most ${MAX_IMPORT_EVENTS}`)) },
     ]);
   });
 
   it("refuses a file that is not an export, naming the fields", () => {
-    const err = importError(testStore(), { format: "something/else", revisions: [] });
+    const err = importError(testStore(), { id: 1, name: "x", role: "admin" }, { format: "something/else", revisions: [] });
     const paths = err.errors.map((e) => e.path);
-    expect(paths).toEqual(expect.arrayContaining(["format", "exportedAt", "check", "revisions", "events", "digest"]));
+    expect(paths).toEqual(expect.arrayContaining(["format", "exportedAt", "check", "revisions", "events", "signature"]));
   });
 
-  it("refuses to import a check the database already holds, leaving it as it was", async () => {
-    const { store, id } = await signedHistory();
+  it("refuses to import a check the records already hold, and a calculation number they already use, leaving both as they were", async () => {
+    const { store, id, people } = await signedHistory();
     const before = store.getCheck(id);
     const doc = copy(store.exportCheck(id));
-    expect(() => store.importCheck(doc)).toThrow(RecordConflictError);
+    expect(() => store.importCheck(doc, people.ana)).toThrow(RecordConflictError);
+    doc.check.id = "another-id";
+    expect(() => store.importCheck(doc, people.ana)).toThrow(/calculation number "HW-EXCH-1" is already used/);
     expect(store.getCheck(id).revisions).toEqual(before.revisions);
   });
 });

@@ -2,7 +2,7 @@ import { mkdtempSync, rmSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { onTestFinished } from "vitest";
-import { openStore, type Store, type StoreOptions } from "../../src/store/index.ts";
+import { openStore, type Actor, type SqliteStore, type StoreOptions } from "../../src/store/index.ts";
 import { fakeValidate } from "./fixtures/validator.ts";
 
 export { fakeValidate, sampleInput } from "./fixtures/validator.ts";
@@ -18,7 +18,7 @@ export function tempDbPath(): string {
 export const FAST_SCRYPT = { n: 2 ** 10, r: 8, p: 1 };
 
 /** A store on a fresh database, closed when the test ends. A fixed clock keeps times predictable. */
-export function testStore(options: Partial<StoreOptions> = {}): Store {
+export function testStore(options: Partial<StoreOptions> = {}): SqliteStore {
   const store = openStore({
     path: tempDbPath(),
     validate: fakeValidate,
@@ -30,13 +30,20 @@ export function testStore(options: Partial<StoreOptions> = {}): Store {
   return store;
 }
 
-/** Invented people for sign-off tests; passphrases meet the minimum length. */
+/** Invented people for sign-off tests; passphrases meet the minimum length and zxcvbn's score 3. */
 export const PEOPLE = {
   ana: { name: "Ana Brightwater", passphrase: "copper kettle morning" },
   bo: { name: "Bo Lindqvist-Arroyo", passphrase: "seven quiet lanterns" },
   cy: { name: "Cy Okonkwo-Hale", passphrase: "granite harbour tide" },
 } as const;
 
-export async function registerPeople(store: Store): Promise<void> {
-  for (const p of Object.values(PEOPLE)) await store.addSigner(p);
+export type Who = keyof typeof PEOPLE;
+
+/** Ana as the first user (an admin), who adds Bo and Cy as engineers. Returns each as the actor the store takes. */
+export async function registerPeople(store: SqliteStore): Promise<Record<Who, Actor>> {
+  const ana = await store.addUser({ ...PEOPLE.ana, role: "admin" }, null);
+  const bo = await store.addUser({ ...PEOPLE.bo, role: "engineer" }, ana);
+  const cy = await store.addUser({ ...PEOPLE.cy, role: "engineer" }, ana);
+  const actor = (u: Actor): Actor => ({ id: u.id, name: u.name, role: u.role });
+  return { ana: actor(ana), bo: actor(bo), cy: actor(cy) };
 }

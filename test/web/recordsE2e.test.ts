@@ -7,21 +7,24 @@ import type { Browser, Page } from "puppeteer-core";
 import { launchTestBrowser } from "./browser.ts";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { closeSharedPool } from "../../src/pdf/browser.ts";
+import { verifySheet } from "../../src/sheet/verify.ts";
 import { openStore, type Store } from "../../src/store/index.ts";
-import { createApp } from "../../src/web/app.ts";
-import { pageRoutes } from "../../src/web/page.tsx";
-import { recordsApi } from "../../src/web/records.ts";
-import { recordsPages } from "../../src/web/recordsPage.tsx";
-import { revisionSheetApi } from "../../src/web/revisionSheet.ts";
+import { wholeApp } from "../../src/web/whole.ts";
 import { FAST_SCRYPT } from "../store/helpers.ts";
 
-/** The records in real Chromium: save, revise, register, sign by two people, print, and see the history. */
+/**
+ * The sign-off walk in real Chromium: the first admin on the first-run page, two engineers added,
+ * save and revise from the checker, sign the three roles as three people each signed in as
+ * themselves, print, and verify the printed sheet's signatures with the records' public key.
+ */
 const TIMEOUT = 120_000;
 const ARTIFACTS = join(process.cwd(), "test-artifacts");
 
 /** Invented people. */
 const MIRA = { name: "Mira Castellanos-Ode", passphrase: "lantern over the saltmarsh" };
 const TEO = { name: "Teo Vantongeren", passphrase: "blue heron at low tide" };
+const RUI = { name: "Rui Adebayo-Lund", passphrase: "paper kites above the quarry" };
+type Person = typeof MIRA;
 
 let server: ServerType;
 let browser: Browser;
@@ -32,7 +35,7 @@ let dir: string;
 beforeAll(async () => {
   dir = mkdtempSync(join(tmpdir(), "hoopwise-records-e2e-"));
   store = openStore({ path: join(dir, "records.db"), passphraseCost: FAST_SCRYPT });
-  const app = createApp({ mounts: [revisionSheetApi({ store }), recordsApi({ store }), recordsPages({ store }), pageRoutes()] });
+  const app = wholeApp(store);
   await new Promise<void>((resolve) => {
     server = serve({ fetch: app.fetch, hostname: "127.0.0.1", port: 0 }, () => resolve());
   });
@@ -55,17 +58,27 @@ async function go(page: Page, selector: string) {
   await Promise.all([page.waitForNavigation({ waitUntil: "load" }), page.click(selector)]);
 }
 
-async function signAs(page: Page, role: string, who: { name: string; passphrase: string }) {
+async function signAs(page: Page, role: string, who: Person) {
+  expect(await text(page, "#signing-as")).toBe(who.name);
   await page.select("#sign-role", role);
-  await page.select("#sign-name", who.name);
   await page.type("#sign-passphrase", who.passphrase);
   await go(page, ".sign-form button[type=submit]");
   expect(await text(page, ".notice")).toBe(`Revision 2 signed as ${role} by ${who.name}.`);
 }
 
+/** Sign out whoever is signed in, and sign in as `who`, coming back to `next`. */
+async function signInAs(page: Page, who: Person, next: string) {
+  if (await page.$(".signout button")) await go(page, ".signout button");
+  await page.goto(`${base}/signin?next=${encodeURIComponent(next)}`, { waitUntil: "load" });
+  await page.type("#signin-name", who.name);
+  await page.type("#signin-passphrase", who.passphrase);
+  await go(page, "#signin button[type=submit]");
+  expect(await text(page, "#signed-in-as")).toContain(who.name);
+}
+
 describe("the records in Chromium", () => {
   it(
-    "saves the demo, saves a thicker skin as revision 2, has it signed by two people, prints the approved sheet",
+    "first run, people, save and revise, sign as three people, print, and verify the signatures with the key",
     async () => {
       const page = await browser.newPage();
       const problems: string[] = [];
@@ -75,9 +88,30 @@ describe("the records in Chromium", () => {
       });
       await page.setViewport({ width: 1280, height: 900 });
 
+      // No one is registered: the records send a browser on this machine to the first-run page.
+      await page.goto(`${base}/records`, { waitUntil: "load" });
+      expect(await page.$("#signin")).not.toBeNull();
+      await page.goto(`${base}/signin`, { waitUntil: "load" });
+      expect(new URL(page.url()).pathname).toBe("/setup");
+      await page.type("#setup-name", MIRA.name);
+      await page.type("#setup-passphrase", MIRA.passphrase);
+      await page.type("#setup-again", MIRA.passphrase);
+      await go(page, "#setup button[type=submit]");
+      expect(new URL(page.url()).pathname).toBe("/records/people");
+      expect(await text(page, "#signed-in-as")).toBe(`${MIRA.name} (admin)`);
+
+      // The admin adds two engineers.
+      for (const who of [TEO, RUI]) {
+        await page.type("#user-name", who.name);
+        await page.select("#user-role", "engineer");
+        await page.type("#user-passphrase", who.passphrase);
+        await page.type("#user-again", who.passphrase);
+        await go(page, ".signer-form button[type=submit]");
+        expect(await text(page, ".notice")).toBe(`${who.name} is added as engineer and can now sign in.`);
+      }
+
       // Save the cabin example from the checker.
       await page.goto(`${base}/`, { waitUntil: "networkidle0" });
-      await page.type("#f-savedBy", MIRA.name);
       await go(page, "#save-record");
       expect(new URL(page.url()).pathname).toMatch(/^\/records\/[0-9a-f-]{36}$/);
       expect(await text(page, ".notice")).toContain("Saved as revision 1");
@@ -98,30 +132,22 @@ describe("the records in Chromium", () => {
       await go(page, "#save-record");
       expect(await text(page, ".notice")).toContain("Saved as revision 2");
 
-      // Register two signers from the page.
-      for (const who of [MIRA, TEO]) {
-        await page.goto(`${base}/records/signers`, { waitUntil: "load" });
-        await page.type("#signer-name", who.name);
-        await page.type("#signer-passphrase", who.passphrase);
-        await page.type("#signer-again", who.passphrase);
-        await go(page, ".signer-form button[type=submit]");
-        expect(await text(page, ".notice")).toBe(`${who.name} is registered and can now sign.`);
-      }
-
-      // Mira prepares; she may not also check it; Teo checks; Mira approves.
+      // Mira prepares; she may not also check it.
       await page.goto(checkUrl, { waitUntil: "load" });
       await signAs(page, "prepared", MIRA);
       await page.select("#sign-role", "checked");
-      await page.select("#sign-name", MIRA.name);
       await page.type("#sign-passphrase", MIRA.passphrase);
       await go(page, ".sign-form button[type=submit]");
-      expect(await text(page, "#sign-name-error")).toContain("four-eyes rule");
+      expect(await text(page, "#sign-role-error")).toContain("three different people");
       expect(await page.$eval("#sign-passphrase", (e) => (e as HTMLInputElement).value)).toBe("");
       mkdirSync(ARTIFACTS, { recursive: true });
       await page.screenshot({ path: join(ARTIFACTS, "records-refused.png") });
-      await page.evaluate(() => (document.querySelector("#sign-passphrase") as HTMLInputElement).focus());
+
+      // Teo signs in and checks; Rui signs in and approves.
+      await signInAs(page, TEO, new URL(checkUrl).pathname);
       await signAs(page, "checked", TEO);
-      await signAs(page, "approved", MIRA);
+      await signInAs(page, RUI, new URL(checkUrl).pathname);
+      await signAs(page, "approved", RUI);
 
       // Revision 2 approved, revision 1 superseded, both plain on the page.
       expect(await page.$eval("#revision-2", (e) => e.getAttribute("data-state"))).toBe("approved");
@@ -129,21 +155,31 @@ describe("the records in Chromium", () => {
       expect(await text(page, "#revision-2 .state")).toBe("Approved");
       expect(await text(page, ".standing")).toContain("Revision 2 is Approved");
 
-      // Print the approved sheet: the link answers with a PDF.
+      // Print the approved sheet: the link answers with a PDF, which verifies with the records' public key.
       const href = await page.$eval("#revision-2 .row-actions a[href$='/sheet']", (a) => a.getAttribute("href"));
       expect(href).toMatch(/\/revisions\/2\/sheet$/);
       const pdf = await page.evaluate(async (url) => {
         const res = await fetch(url);
         const bytes = new Uint8Array(await res.arrayBuffer());
-        return {
-          status: res.status,
-          type: res.headers.get("content-type"),
-          head: String.fromCharCode(...bytes.slice(0, 5)),
-          size: bytes.length,
-        };
+        let binary = "";
+        for (const b of bytes) binary += String.fromCharCode(b);
+        return { status: res.status, type: res.headers.get("content-type"), cache: res.headers.get("cache-control"), base64: btoa(binary) };
       }, href!);
-      expect(pdf).toMatchObject({ status: 200, type: "application/pdf", head: "%PDF-" });
-      expect(pdf.size).toBeGreaterThan(10_000);
+      expect(pdf).toMatchObject({ status: 200, type: "application/pdf", cache: "no-store" });
+      const bytes = new Uint8Array(Buffer.from(pdf.base64, "base64"));
+      expect(Buffer.from(bytes.subarray(0, 5)).toString("latin1")).toBe("%PDF-");
+      const keys = (await (await fetch(`${base}/api/v1/keys`)).json()) as { keys: { publicKeyPem: string }[] };
+      const report = await verifySheet(bytes, { publicKeys: keys.keys.map((k) => k.publicKeyPem) });
+      expect(report.problems).toEqual([]);
+      expect(report.ok).toBe(true);
+      expect(report.signoffs.each.map((x) => [x.role, x.name, x.valid])).toEqual([
+        ["prepared", MIRA.name, true],
+        ["checked", TEO.name, true],
+        ["approved", RUI.name, true],
+      ]);
+      // Without the key the signatures are reported unchecked, never taken as proven.
+      const unchecked = await verifySheet(bytes);
+      expect(unchecked.signoffs).toMatchObject({ attached: true, checked: false });
 
       await page.screenshot({ path: join(ARTIFACTS, "records.png"), fullPage: true });
 
@@ -157,8 +193,12 @@ describe("the records in Chromium", () => {
       await page.screenshot({ path: join(ARTIFACTS, "records-list.png") });
       expect(await text(page, "#checks tbody tr .state")).toBe("Approved");
 
-      // The one refusal of the walk (the four-eyes rule) is answered 409, which the browser notes; nothing else went wrong.
-      expect(problems).toEqual(["console: Failed to load resource: the server responded with a status of 409 (Conflict)"]);
+      // The refusals of the walk (the records asked for before signing in: 401; one person signing
+      // twice: 409) are noted by the browser; nothing else went wrong.
+      expect(problems).toEqual([
+        "console: Failed to load resource: the server responded with a status of 401 (Unauthorized)",
+        "console: Failed to load resource: the server responded with a status of 409 (Conflict)",
+      ]);
       await page.close();
     },
     TIMEOUT,

@@ -2,17 +2,16 @@ import { postedForm } from "./postedForm.ts";
 import { describe, expect, it } from "vitest";
 import { findDemo } from "../../src/demo/index.ts";
 import { validateCheckDocument } from "../../src/store/checkValidator.ts";
-import { createApp } from "../../src/web/app.ts";
-import { pageRoutes } from "../../src/web/page.tsx";
-import { recordsApi } from "../../src/web/records.ts";
-import { recordsPages } from "../../src/web/recordsPage.tsx";
-import { seedDemos } from "../../src/web/seed.ts";
+import { seedDemos } from "../../src/web/records/seed.ts";
+import { wholeApp } from "../../src/web/whole.ts";
 import { testStore } from "../store/helpers.ts";
 
-/** Invented people; their passphrases must never come back in any answer. */
+/** Invented people; their passphrases must never come back in any answer. Mira is the admin. */
 const MIRA = { name: "Mira Castellanos-Ode", passphrase: "lantern over the saltmarsh" };
 const TEO = { name: "Teo Vantongeren", passphrase: "blue heron at low tide" };
-const SECRETS = [MIRA.passphrase, TEO.passphrase, "wrong but long enough"];
+const RUI = { name: "Rui Adebayo-Lund", passphrase: "paper kites above the quarry" };
+const SECRETS = [MIRA.passphrase, TEO.passphrase, RUI.passphrase, "wrong but long enough"];
+type Person = typeof MIRA;
 
 const cabin = findDemo("cabin")!.document;
 
@@ -21,24 +20,42 @@ function cabinForm(changes: Record<string, string> = {}): Record<string, string>
   return { ...postedForm(cabin), ...changes };
 }
 
-/** The records pages over a fresh database with the real check validator; every body read is kept for the passphrase sweep. */
-function site(seed = false) {
-  const store = testStore({ validate: validateCheckDocument });
+/**
+ * The records pages over a fresh database with the real check validator, Mira (admin), Teo and
+ * Rui (engineers) registered. Requests go as Mira, signed in through the sign-in form with her
+ * session cookie, unless `as` names another; every body read is kept for the passphrase sweep.
+ */
+async function site(seed = false) {
+  let t = Date.parse("2030-03-01T08:00:00.000Z");
+  const store = testStore({ validate: validateCheckDocument, now: () => new Date((t += 60_000)) });
   if (seed) seedDemos(store);
-  const app = createApp({ mounts: [recordsApi({ store }), recordsPages({ store }), pageRoutes()] });
+  const mira = await store.addUser({ ...MIRA, role: "admin" }, null);
+  await store.addUser({ ...TEO, role: "engineer" }, mira);
+  await store.addUser({ ...RUI, role: "engineer" }, mira);
+  const app = wholeApp(store);
   const bodies: string[] = [];
-  const request = async (path: string, init?: RequestInit) => {
-    const res = await app.request(path, { redirect: "manual", ...init });
+  const cookies = new Map<string, string>();
+  const request = async (path: string, init: RequestInit = {}, cookie?: string) => {
+    const res = await app.request(path, { redirect: "manual", ...init, headers: cookie ? { cookie } : {} });
     const html = await res.text();
     bodies.push(html, res.headers.get("location") ?? "");
-    return { status: res.status, location: res.headers.get("location") ?? "", html };
+    return { status: res.status, location: res.headers.get("location") ?? "", html, headers: res.headers };
   };
-  const get = (path: string) => request(path);
-  const post = (path: string, fields: Record<string, string>) => request(path, { method: "POST", body: new URLSearchParams(fields) });
-  return { store, get, post, bodies };
+  const signIn = async (who: Person) => {
+    const res = await request("/signin", { method: "POST", body: new URLSearchParams({ name: who.name, passphrase: who.passphrase }) });
+    expect(res.status).toBe(303);
+    cookies.set(who.name, (res.headers.get("set-cookie") ?? "").split(";")[0]);
+  };
+  for (const who of [MIRA, TEO, RUI]) await signIn(who);
+  const as = (who: Person | null) => ({
+    get: (path: string) => request(path, {}, who ? cookies.get(who.name) : undefined),
+    post: (path: string, fields: Record<string, string>) =>
+      request(path, { method: "POST", body: new URLSearchParams(fields) }, who ? cookies.get(who.name) : undefined),
+  });
+  return { store, ...as(MIRA), as, bodies };
 }
 
-type Site = ReturnType<typeof site>;
+type Site = Awaited<ReturnType<typeof site>>;
 
 /** The text of the element with this id (no nested elements). */
 function textOf(html: string, id: string): string | undefined {
@@ -56,17 +73,12 @@ async function saveCabin(s: Site, changes: Record<string, string> = {}) {
   return { ...res, id: /^\/records\/([^?]+)\?/.exec(res.location)![1] };
 }
 
-async function register(s: Site, person: { name: string; passphrase: string }) {
-  const res = await s.post("/records/signers", { name: person.name, passphrase: person.passphrase, again: person.passphrase });
-  expect(res.status).toBe(303);
-}
-
-const sign = (s: Site, id: string, revision: number, role: string, who: { name: string; passphrase: string }) =>
-  s.post(`/records/${id}/sign`, { revision: String(revision), role, name: who.name, passphrase: who.passphrase });
+const sign = (s: Site, id: string, revision: number, role: string, who: Person, passphrase = who.passphrase) =>
+  s.as(who).post(`/records/${id}/sign`, { revision: String(revision), role, passphrase });
 
 describe("the list of saved checks", () => {
   it("lists the seeded checks with their number, title, latest revision and state, under the caution", async () => {
-    const s = site(true);
+    const s = await site(true);
     const { status, html } = await s.get("/records");
     expect(status).toBe(200);
     for (const c of s.store.listChecks()) {
@@ -90,7 +102,7 @@ describe("the list of saved checks", () => {
   });
 
   it("answers an unknown check with a 404 page, not a server error", async () => {
-    const s = site();
+    const s = await site();
     const res = await s.get("/records/no-such-check");
     expect(res.status).toBe(404);
     expect(res.html).toContain("no saved check has the id &quot;no-such-check&quot;");
@@ -100,8 +112,9 @@ describe("the list of saved checks", () => {
 
 describe("saving from the checker", () => {
   it("saves revision 1, then a changed thickness as revision 2 that supersedes it; an unchanged input saves nothing", async () => {
-    const s = site();
-    const first = await saveCabin(s, { savedBy: "Mira Castellanos-Ode" });
+    const s = await site();
+    // The saver is the signed-in user, whatever name the form carries.
+    const first = await saveCabin(s, { savedBy: "Someone Else Entirely" });
     expect(first.location).toBe(`/records/${first.id}?saved=1`);
     const page1 = await s.get(first.location);
     expect(page1.html).toContain("Saved as revision 1");
@@ -137,7 +150,7 @@ describe("saving from the checker", () => {
   });
 
   it("asks before saving onto a calculation number already in the records, and saves the revision once confirmed", async () => {
-    const s = site(true);
+    const s = await site(true);
     const existing = s.store.listChecks().find((c) => c.calcNumber === "L30-FUS-017")!;
     const ask = await s.post("/records/save", cabinForm({ "shell.thickness": "1.1" }));
     expect(ask.status).toBe(409);
@@ -156,7 +169,7 @@ describe("saving from the checker", () => {
   });
 
   it("sends a check with mistakes back to the checker with the message beside the field, and saves nothing", async () => {
-    const s = site();
+    const s = await site();
     const res = await s.post("/records/save", cabinForm({ "shell.thickness": "abc" }));
     expect(res.status).toBe(422);
     expect(res.html).toContain("Not saved: correct the marked fields first.");
@@ -165,7 +178,7 @@ describe("saving from the checker", () => {
   });
 
   it("answers a save onto a check that does not exist with the checker and the reason, and a 404 page for a confirmed one", async () => {
-    const s = site();
+    const s = await site();
     const res = await s.post("/records/save", cabinForm({ record: "gone-check" }));
     expect(res.status).toBe(404);
     expect(res.html).toContain("Not saved: no saved check has the id &quot;gone-check&quot;");
@@ -176,65 +189,84 @@ describe("saving from the checker", () => {
     expect(s.store.listChecks()).toEqual([]);
   });
 
-  it("puts a refused saver's name beside its field and keeps the checker's input", async () => {
-    const s = site();
-    const res = await s.post("/records/save", cabinForm({ savedBy: "x".repeat(101), "shell.thickness": "1.3" }));
-    expect(res.status).toBe(422);
-    expect(textOf(res.html, "e-savedBy")).toBe("must be at most 100 characters");
-    expect(res.html).toContain('name="shell.thickness" value="1.3"');
-    expect(s.store.listChecks()).toEqual([]);
+  it("answers every records page without a session with 401 and the sign-in form, and no-store", async () => {
+    const s = await site(true);
+    for (const path of ["/records", "/records/people", `/records/${s.store.listChecks()[0].id}`]) {
+      const res = await s.as(null).get(path);
+      expect(res.status, path).toBe(401);
+      expect(res.html).toContain('id="signin"');
+      expect(res.headers.get("cache-control")).toBe("no-store");
+    }
+    const save = await s.as(null).post("/records/save", cabinForm());
+    expect(save.status).toBe(401);
+    expect(s.store.listChecks()).toHaveLength(2);
+    // The checker itself stays open.
+    expect((await s.as(null).get("/")).status).toBe(200);
   });
 });
 
-describe("people who sign, and signing", () => {
-  it("registers a signer, refusing mismatched, short and taken passphrases and names beside the field", async () => {
-    const s = site();
-    const mismatch = await s.post("/records/signers", { name: MIRA.name, passphrase: MIRA.passphrase, again: TEO.passphrase });
+describe("people, and signing", () => {
+  it("lets the admin add someone, refusing mismatched, weak and look-alike names beside the field; an engineer may not add", async () => {
+    const s = await site();
+    const dee = { name: "Dee Marchetti", passphrase: "lilac thunder pebble road" };
+    const mismatch = await s.post("/records/people", {
+      name: dee.name,
+      role: "engineer",
+      passphrase: dee.passphrase,
+      again: TEO.passphrase,
+    });
     expect(mismatch.status).toBe(422);
-    expect(textOf(mismatch.html, "signer-again-error")).toMatch(/does not match/);
-    expect(mismatch.html).toContain(`value="${MIRA.name}"`);
-    const short = await s.post("/records/signers", { name: TEO.name, passphrase: "short", again: "short" });
-    expect(textOf(short.html, "signer-passphrase-error")).toBe("must be at least 12 characters");
-    await register(s, MIRA);
-    const list = await s.get("/records/signers?added=" + encodeURIComponent(MIRA.name));
-    expect(list.html).toContain(`${MIRA.name} is registered and can now sign.`);
-    const taken = await s.post("/records/signers", { name: MIRA.name.toUpperCase(), passphrase: TEO.passphrase, again: TEO.passphrase });
-    expect(taken.status).toBe(409);
-    expect(textOf(taken.html, "signer-name-error")).toMatch(/already registered/);
-    expect(s.store.listSigners().map((p) => p.name)).toEqual([MIRA.name]);
-    for (const secret of [...SECRETS, "short"]) for (const body of s.bodies) expect(body).not.toContain(secret);
+    expect(textOf(mismatch.html, "user-again-error")).toMatch(/does not match/);
+    const weak = await s.post("/records/people", { name: dee.name, role: "engineer", passphrase: "password1234", again: "password1234" });
+    expect(textOf(weak.html, "user-passphrase-error")).toMatch(/too easy to guess/);
+    const added = await s.post("/records/people", { name: dee.name, role: "engineer", passphrase: dee.passphrase, again: dee.passphrase });
+    expect(added.status).toBe(303);
+    expect((await s.get(added.location)).html).toContain(`${dee.name} is added as engineer and can now sign in.`);
+    const lookalike = await s.post("/records/people", {
+      name: "D\u0435e Marchetti",
+      role: "engineer",
+      passphrase: TEO.passphrase,
+      again: TEO.passphrase,
+    });
+    expect(lookalike.status).toBe(409);
+    expect(textOf(lookalike.html, "user-name-error")).toMatch(/looks the same/);
+    const byEngineer = await s
+      .as(TEO)
+      .post("/records/people", { name: "Eli Other", role: "engineer", passphrase: dee.passphrase, again: dee.passphrase });
+    expect(byEngineer.status).toBe(403);
+    expect(s.store.listUsers().map((p) => p.name)).toEqual([dee.name, MIRA.name, RUI.name, TEO.name]);
+    for (const secret of [...SECRETS, dee.passphrase, "password1234"]) for (const body of s.bodies) expect(body).not.toContain(secret);
   });
 
-  it("signs prepared, checked and approved by two people; refuses the four-eyes breach and a wrong passphrase beside the field", async () => {
-    const s = site();
+  it("signs prepared, checked and approved as three people; refuses a second role for one person and a wrong passphrase beside the field", async () => {
+    const s = await site();
     const { id } = await saveCabin(s);
     const second = await saveCabin(s, { record: id, "shell.thickness": "1.2" });
     expect(second.location).toContain("saved=2");
-    await register(s, MIRA);
-    await register(s, TEO);
 
     const prepared = await sign(s, id, 2, "prepared", MIRA);
     expect(prepared).toMatchObject({ status: 303, location: `/records/${id}?signed=2&role=prepared` });
     expect((await s.get(prepared.location)).html).toContain(`Revision 2 signed as prepared by ${MIRA.name}.`);
 
-    const fourEyes = await sign(s, id, 2, "checked", MIRA);
-    expect(fourEyes.status).toBe(409);
-    expect(textOf(fourEyes.html, "sign-name-error")).toContain("may not also check it (four-eyes rule)");
-    expect(fourEyes.html).toContain("Not signed");
+    const twice = await sign(s, id, 2, "checked", MIRA);
+    expect(twice.status).toBe(409);
+    expect(twice.html).toContain("three different people");
+    expect(twice.html).toContain("Not signed");
 
-    const wrong = await sign(s, id, 2, "checked", { name: TEO.name, passphrase: "wrong but long enough" });
+    const wrong = await sign(s, id, 2, "checked", TEO, "wrong but long enough");
     expect(wrong.status).toBe(403);
-    expect(textOf(wrong.html, "sign-passphrase-error")).toContain("is not the one registered");
+    expect(textOf(wrong.html, "sign-passphrase-error")).toContain(`is not ${TEO.name}&#39;s passphrase`);
     // The choices come back; the passphrase field is always empty.
     expect(wrong.html).toMatch(/<option value="checked" selected/);
     expect(wrong.html).toMatch(/<input type="password" id="sign-passphrase" name="passphrase" autocomplete="current-password" required=""/);
 
-    const outOfOrder = await sign(s, id, 1, "approved", TEO);
+    const outOfOrder = await sign(s, id, 1, "approved", RUI);
     expect(outOfOrder.status).toBe(409);
     expect(textOf(outOfOrder.html, "sign-revision-error")).toContain("superseded by revision 2");
 
     expect((await sign(s, id, 2, "checked", TEO)).status).toBe(303);
-    expect((await sign(s, id, 2, "approved", MIRA)).status).toBe(303);
+    expect((await sign(s, id, 2, "approved", MIRA)).status).toBe(409);
+    expect((await sign(s, id, 2, "approved", RUI)).status).toBe(303);
 
     const page = await s.get(`/records/${id}`);
     expect(stateOf(page.html, 2)).toBe("approved");
@@ -249,7 +281,7 @@ describe("people who sign, and signing", () => {
 
 describe("comparing two revisions", () => {
   it("lists shell.thickness_mm as changed, with its unit, and marks the life as changed", async () => {
-    const s = site();
+    const s = await site();
     const { id } = await saveCabin(s);
     await saveCabin(s, { record: id, "shell.thickness": "1.2" });
     const { status, html } = await s.get(`/records/${id}/compare?from=1&to=2`);
@@ -269,7 +301,7 @@ describe("comparing two revisions", () => {
   });
 
   it("says beside the field when a revision asked for does not exist", async () => {
-    const s = site();
+    const s = await site();
     const { id } = await saveCabin(s);
     const res = await s.get(`/records/${id}/compare?from=1&to=7`);
     expect(res.status).toBe(422);
@@ -279,13 +311,18 @@ describe("comparing two revisions", () => {
 
 describe("hostile text", () => {
   it("escapes a hostile title and signer name wherever they are shown", async () => {
-    const s = site();
+    const s = await site();
     const hostile = `<script>alert("t")</script><img src=x onerror=alert(1)>`;
     const { id } = await saveCabin(s, { title: hostile });
     await saveCabin(s, { record: id, "shell.thickness": "1.2" });
-    await register(s, { name: hostile.slice(0, 90), passphrase: MIRA.passphrase });
-    const added = `/records/signers?added=${encodeURIComponent(hostile.slice(0, 90))}`;
-    for (const path of ["/records", `/records/${id}`, `/records/${id}/compare`, "/records/signers", added]) {
+    const add = await s.post("/records/people", {
+      name: hostile.slice(0, 90),
+      role: "engineer",
+      passphrase: "lilac thunder pebble road",
+      again: "lilac thunder pebble road",
+    });
+    expect(add.status).toBe(303);
+    for (const path of ["/records", `/records/${id}`, `/records/${id}/compare`, "/records/people", add.location]) {
       const { html } = await s.get(path);
       expect(html, path).not.toContain("<script>alert");
       expect(html, path).not.toContain("<img src=x");

@@ -1,13 +1,21 @@
-import type { CheckRecord, EventRecord, RevisionRecord, SignerRecord } from "../../src/store/index.ts";
+import type { Actor, CheckRecord, EventRecord, RevisionRecord } from "../../src/store/index.ts";
 import { comparePath, exportPath, inputPath, openPath, sheetPath } from "./paths.ts";
 import { SignForm, type SignFormState } from "./signForm.tsx";
 import { ROLE_WORDS, shortPrint, StateBadge, stateMeaning, StateTrack, When } from "./state.tsx";
 
 /** One saved check: where it stands, signing its latest revision, every revision, and its log. */
-export function CheckView({ check, signers, sign }: { check: CheckRecord; signers: readonly SignerRecord[]; sign: SignFormState }) {
+export function CheckView({ check, user, sign }: { check: CheckRecord; user: Actor; sign: SignFormState }) {
   const latest = check.revisions[check.revisions.length - 1];
+  const altered = check.revisions.filter((r) => !r.intact);
   return (
     <>
+      {altered.length > 0 ? (
+        <p class="notice refused" role="alert" id="altered">
+          Changed outside Hoopwise: revision{altered.length === 1 ? "" : "s"} {altered.map((r) => r.number).join(", ")} no longer give
+          {altered.length === 1 ? "s" : ""} the fingerprint saved with {altered.length === 1 ? "it" : "them"}. Their sign-offs do not count
+          and their sheets are not printed; restore the database from a backup.
+        </p>
+      ) : null}
       <section aria-labelledby="h-check" class="check-head">
         <p class="crumbs">
           <a href="/records">Saved checks</a> /
@@ -37,7 +45,7 @@ export function CheckView({ check, signers, sign }: { check: CheckRecord; signer
         </p>
         <p class="hint">A sheet takes a few seconds to print. Unsigned revisions print with the draft mark; superseded ones say so.</p>
       </section>
-      <SignForm check={check} signers={signers} form={sign} />
+      <SignForm check={check} user={user} form={sign} />
       <Revisions check={check} />
       <EventLog events={check.events} />
     </>
@@ -90,6 +98,7 @@ function RevisionRow({ check, r }: { check: CheckRecord; r: RevisionRecord }) {
         <span class="engine">{r.engineVersion}</span>
       </td>
       <td>
+        {r.importedUnsigned ? <p class="hint">imported, not signed in these records</p> : null}
         {r.signoffs.length === 0 ? (
           <span class="hint">none</span>
         ) : (
@@ -97,7 +106,8 @@ function RevisionRow({ check, r }: { check: CheckRecord; r: RevisionRecord }) {
             {r.signoffs.map((s) => (
               <li>
                 {ROLE_WORDS[s.role]} <strong>{s.name}</strong>, <When at={s.signedAt} />
-                {s.imported ? <span class="hint"> (imported)</span> : null}
+                {s.imported ? <span class="hint"> (imported, signed with a trusted key)</span> : null}
+                {s.valid ? null : <strong class="field-error"> — signature does not hold; not counted</strong>}
               </li>
             ))}
           </ul>

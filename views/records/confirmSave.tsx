@@ -7,17 +7,7 @@ import { StateBadge } from "./state.tsx";
  * the new revision would supersede the latest one, signed or not, so the user says so first.
  * The check travels in the form as its JSON document, whatever its size.
  */
-export function ConfirmSave({
-  existing,
-  document,
-  savedBy,
-  back,
-}: {
-  existing: CheckSummary;
-  document: unknown;
-  savedBy?: string;
-  back?: string;
-}) {
+export function ConfirmSave({ existing, document, back }: { existing: CheckSummary; document: unknown; back?: string }) {
   return (
     <section class="panel-box" aria-labelledby="h-confirm">
       <h1 id="h-confirm">This calculation number is already in the records</h1>
@@ -29,7 +19,6 @@ export function ConfirmSave({
       </p>
       <form method="post" action={revisionSavePath(existing.id)} class="actions">
         <input type="hidden" name="document" value={JSON.stringify(document)} />
-        {savedBy ? <input type="hidden" name="savedBy" value={savedBy} /> : null}
         <button type="submit" class="primary">
           Save as revision {existing.latestRevision + 1} of {existing.calcNumber}
         </button>

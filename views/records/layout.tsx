@@ -2,6 +2,8 @@ import type { Child } from "hono/jsx";
 import type { JSX } from "hono/jsx/jsx-runtime";
 import { assetUrl } from "../assetFiles.ts";
 import { CautionStrip } from "../cautions.tsx";
+import type { Actor } from "../../src/store/index.ts";
+import { PEOPLE_PATH, SIGNIN_PATH, SIGNOUT_PATH } from "./paths.ts";
 
 /** A message at the top of a page: the outcome of what was just done, or why it was not. */
 export interface Notice {
@@ -14,7 +16,7 @@ export interface Notice {
  * records and the checker, and the short caution under the header, so no saved or signed check
  * is ever shown without it.
  */
-export function RecordsLayout({ title, notice, children }: { title: string; notice?: Notice; children: Child }) {
+export function RecordsLayout({ title, notice, user, children }: { title: string; notice?: Notice; user?: Actor; children: Child }) {
   return (
     <html lang="en">
       <head>
@@ -36,7 +38,17 @@ export function RecordsLayout({ title, notice, children }: { title: string; noti
           <nav class="nav" aria-label="Hoopwise">
             <a href="/">Checker</a>
             <a href="/records">Saved checks</a>
-            <a href="/records/signers">People who sign</a>
+            <a href={PEOPLE_PATH}>People</a>
+            {user ? (
+              <form method="post" action={SIGNOUT_PATH} class="signout">
+                <span class="who" id="signed-in-as">
+                  {user.name} ({user.role})
+                </span>{" "}
+                <button type="submit">Sign out</button>
+              </form>
+            ) : (
+              <a href={SIGNIN_PATH}>Sign in</a>
+            )}
           </nav>
         </header>
         <div class="records-caution">

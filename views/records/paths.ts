@@ -10,5 +10,8 @@ export const inputPath = (checkId: string, revision: number) => `/records/${id(c
 export const revisionSavePath = (checkId: string) => `/records/${id(checkId)}/revisions`;
 export const sheetPath = (checkId: string, revision: number) => `/api/v1/checks/${id(checkId)}/revisions/${revision}/sheet`;
 export const exportPath = (checkId: string) => `/api/v1/checks/${id(checkId)}/export`;
-export const SIGNERS_PATH = "/records/signers";
+export const PEOPLE_PATH = "/records/people";
+export const SIGNIN_PATH = "/signin";
+export const SIGNOUT_PATH = "/signout";
+export const SETUP_PATH = "/setup";
 export const SAVE_PATH = "/records/save";

@@ -1,5 +1,5 @@
 import type { Context } from "hono";
-import type { FieldError } from "../engine/index.ts";
+import type { FieldError } from "../../engine/index.ts";
 
 /** A records form's problems: those that belong beside one of its fields, and the rest. */
 export interface FormErrors {

@@ -1,9 +1,18 @@
-import { defaultDbPath, openDatabase, RecordConflictError, RecordError, type Db, type ScryptCost } from "../store/index.ts";
+import {
+  defaultDbPath,
+  openStore,
+  RecordConflictError,
+  RecordError,
+  USER_ROLES,
+  type ScryptCost,
+  type SqliteStore,
+  type UserRole,
+} from "../store/index.ts";
 import { personNameField, safeParseFields, zodFieldErrors } from "../store/fields.ts";
-import { addSigner, assertNameFree } from "../store/signers.ts";
+import { assertNameFree } from "../store/users.ts";
 
 /** The streams the command talks through; the real process's, or test doubles. */
-export interface SignerIo {
+export interface UserIo {
   stdin: NodeJS.ReadableStream & { setRawMode?: (mode: boolean) => unknown };
   stdout: { write(s: string): unknown };
   stderr: { write(s: string): unknown };
@@ -11,15 +20,16 @@ export interface SignerIo {
   isTTY: boolean;
 }
 
-export interface SignerCommandOptions {
+export interface UserCommandOptions {
   /** The database file; `HOOPWISE_DB` or the default otherwise. */
   dbPath?: string;
   passphraseCost?: ScryptCost;
 }
 
 const USAGE =
-  'usage: signer add NAME   (quote a name with spaces: signer add "Ana Reyes")\n' +
-  "The passphrase is read from standard input when it is piped, or asked for twice without echo in a terminal.\n";
+  'usage: user add NAME --role admin|engineer   (quote a name with spaces: user add "Ana Reyes" --role admin)\n' +
+  "The passphrase is read from standard input when it is piped, or asked for twice without echo in a terminal.\n" +
+  "Whoever can write the database file may add people this way; the first person must be an admin.\n";
 
 /** Exit codes: 0 registered; 1 the name is already registered or the database failed; 2 a usage or input mistake; 130 cancelled. */
 const EXIT = { ok: 0, refused: 1, usage: 2, cancelled: 130 } as const;
@@ -28,30 +38,45 @@ const EXIT = { ok: 0, refused: 1, usage: 2, cancelled: 130 } as const;
 class Cancelled extends Error {}
 /** A passphrase that cannot be used, told in words for the terminal. */
 class InputMistake extends Error {}
-/** `signer add NAME`: register a person who may sign, with a passphrase kept only as a hash. `args` are the words after `signer add`. */
-export async function signerAddCommand(args: string[], io: SignerIo, options: SignerCommandOptions = {}): Promise<number> {
+/**
+ * `user add NAME --role admin|engineer`: register a person, with a passphrase kept only as a
+ * hash. `args` are the words after `user add`.
+ */
+export async function userAddCommand(args: string[], io: UserIo, options: UserCommandOptions = {}): Promise<number> {
   const fail = (code: number, message: string) => {
-    io.stderr.write(`signer add: ${message}\n`);
+    io.stderr.write(`user add: ${message}\n`);
     return code;
   };
-  if (args.length !== 1)
-    return fail(EXIT.usage, args.length === 0 ? `a name is required\n${USAGE}` : `give the name as one argument\n${USAGE}`);
-  const parsedName = safeParseFields(personNameField, args[0]);
+  const words = [...args];
+  let role: string | undefined;
+  const at = words.findIndex((w) => w === "--role" || w.startsWith("--role="));
+  if (at >= 0) {
+    const w = words[at];
+    role = w.includes("=") ? w.slice("--role=".length) : words[at + 1];
+    words.splice(at, w.includes("=") ? 1 : 2);
+  }
+  if (words.some((w) => w.startsWith("--"))) return fail(EXIT.usage, `unknown option ${words.find((w) => w.startsWith("--"))}\n${USAGE}`);
+  if (words.length !== 1)
+    return fail(EXIT.usage, words.length === 0 ? `a name is required\n${USAGE}` : `give the name as one argument\n${USAGE}`);
+  if (role === undefined) return fail(EXIT.usage, `give the role with --role admin or --role engineer\n${USAGE}`);
+  if (!(USER_ROLES as readonly string[]).includes(role)) return fail(EXIT.usage, `--role must be admin or engineer (got "${role}")`);
+  const parsedName = safeParseFields(personNameField, words[0]);
   if (!parsedName.success) return fail(EXIT.usage, `name ${zodFieldErrors(parsedName.error)[0].message}`);
   const name = parsedName.data;
 
-  let db: Db;
+  let store: SqliteStore;
   try {
-    db = openDatabase(options.dbPath ?? defaultDbPath());
+    store = openStore({ path: options.dbPath ?? defaultDbPath(), passphraseCost: options.passphraseCost });
   } catch (err) {
     return fail(EXIT.refused, `cannot open the records database: ${(err as Error).message}`);
   }
   try {
     // Say so before asking for a passphrase that could not be used.
-    assertNameFree(db, name);
+    assertNameFree(store.db, name);
+    if (store.countUsers() === 0 && role !== "admin") return fail(EXIT.usage, "the first person must be an admin: use --role admin");
     const passphrase = io.isTTY ? await promptTwice(io, name) : await readPiped(io.stdin);
-    await addSigner({ db, now: () => new Date(), passphraseCost: options.passphraseCost }, { name, passphrase });
-    io.stdout.write(`registered signer "${name}"\n`);
+    const user = await store.addUser({ name, role: role as UserRole, passphrase }, "database-owner", "cli");
+    io.stdout.write(`added ${user.role} "${user.name}" (user id ${user.id})\n`);
     return EXIT.ok;
   } catch (err) {
     if (err instanceof Cancelled) return fail(EXIT.cancelled, "cancelled; nothing was registered");
@@ -59,11 +84,11 @@ export async function signerAddCommand(args: string[], io: SignerIo, options: Si
     if (err instanceof RecordError || err instanceof InputMistake) return fail(EXIT.usage, err.message);
     return fail(EXIT.refused, (err as Error).message);
   } finally {
-    db.close();
+    store.close();
   }
 }
 
-async function promptTwice(io: SignerIo, name: string): Promise<string> {
+async function promptTwice(io: UserIo, name: string): Promise<string> {
   const first = await promptHidden(io, `Passphrase for ${name}: `);
   const second = await promptHidden(io, "Same passphrase again: ");
   if (first !== second) throw new InputMistake("passphrase: the two entries differ; nothing was registered");
@@ -71,7 +96,7 @@ async function promptTwice(io: SignerIo, name: string): Promise<string> {
 }
 
 /** One line typed with echo off: a passphrase must not stay on the screen or in a terminal log. */
-function promptHidden(io: SignerIo, prompt: string): Promise<string> {
+function promptHidden(io: UserIo, prompt: string): Promise<string> {
   const { stdin, stderr } = io;
   if (!stdin.setRawMode)
     return Promise.reject(new InputMistake("cannot turn off echo on this terminal; pipe the passphrase on standard input instead"));

@@ -1,17 +1,18 @@
 import { Hono, type Context } from "hono";
 import { bodyLimit } from "hono/body-limit";
-import type { FieldError } from "../engine/index.ts";
-import { parseCheck } from "../engine/input.ts";
-import { RecordError, type SavedRevision, type Store } from "../store/index.ts";
-import { ConfirmSave } from "../../views/records/confirmSave.tsx";
-import { pageHtml, RecordsLayout } from "../../views/records/layout.tsx";
-import { checkPath, SAVE_PATH } from "../../views/records/paths.ts";
-import { MAX_JSON_BYTES } from "./api.ts";
-import { readPosted, type Posted } from "./form/index.ts";
-import { encodeCheck, MAX_LINK_CHARS } from "./link.ts";
-import { showPosted } from "./page.tsx";
-import { statusOf } from "./recordsHttp.ts";
-import { postedFields } from "./recordsForms.ts";
+import type { FieldError } from "../../engine/index.ts";
+import { parseCheck } from "../../engine/input.ts";
+import { RecordError, type SavedRevision, type Store } from "../../store/index.ts";
+import { ConfirmSave } from "../../../views/records/confirmSave.tsx";
+import { pageHtml, RecordsLayout } from "../../../views/records/layout.tsx";
+import { checkPath, SAVE_PATH } from "../../../views/records/paths.ts";
+import { MAX_JSON_BYTES } from "../api.ts";
+import { readPosted, type Posted } from "../form/index.ts";
+import { encodeCheck, MAX_LINK_CHARS } from "../link.ts";
+import { showPosted } from "../page.tsx";
+import { statusOf } from "./http.ts";
+import { postedFields } from "./forms.ts";
+import type { RecordsEnv } from "./auth.ts";
 
 const formLimit = bodyLimit({
   maxSize: MAX_JSON_BYTES,
@@ -25,26 +26,26 @@ const formLimit = bodyLimit({
  * is asked first. A check with mistakes goes back to the checker with the messages beside the
  * fields; nothing is saved until it is whole.
  */
-export function saveRoutes({ store }: { store: Store }): Hono {
-  const app = new Hono();
+export function saveRoutes({ store }: { store: Store }): Hono<RecordsEnv> {
+  const app = new Hono<RecordsEnv>();
 
   app.post(SAVE_PATH, formLimit, async (c) => {
     const posted = await readPosted(c.req.raw);
     if (!parseCheck(posted.document).ok) return showPosted(c, posted, "Not saved: correct the marked fields first.");
-    const savedBy = blankToUndefined(posted.values.savedBy);
+    // The revision is saved by the signed-in user, whatever name the form carries.
+    const user = c.get("user");
     const record = blankToUndefined(posted.values.record);
     try {
-      if (record && posted.values.as !== "new")
-        return savedAnswer(c, record, store.addRevision(record, { input: posted.document, savedBy }));
+      if (record && posted.values.as !== "new") return savedAnswer(c, record, store.addRevision(record, { input: posted.document }, user));
       const calcNumber = typeof posted.document.calcNumber === "string" ? posted.document.calcNumber.trim() : "";
       const existing = calcNumber ? store.listChecks().find((x) => x.calcNumber === calcNumber) : undefined;
       if (existing) {
         const link = encodeCheck(posted.document);
         const back = link.length <= MAX_LINK_CHARS ? `/?c=${link}` : undefined;
-        const body = <ConfirmSave existing={existing} document={posted.document} savedBy={savedBy} back={back} />;
-        return c.html(await pageHtml(<RecordsLayout title="Save as a new revision?" children={body} />), 409);
+        const body = <ConfirmSave existing={existing} document={posted.document} back={back} />;
+        return c.html(await pageHtml(<RecordsLayout title="Save as a new revision?" user={user} children={body} />), 409);
       }
-      const created = store.createCheck({ input: posted.document, savedBy });
+      const created = store.createCheck({ input: posted.document }, user);
       return c.redirect(`${checkPath(created.id)}?saved=1`, 303);
     } catch (err) {
       if (!(err instanceof RecordError)) throw err;
@@ -64,7 +65,7 @@ export function saveRoutes({ store }: { store: Store }): Hono {
       input = undefined;
     }
     // An unreadable document is passed on as missing: the store then says the check to save is required.
-    return savedAnswer(c, c.req.param("id"), store.addRevision(c.req.param("id"), { input, savedBy: blankToUndefined(f.savedBy) }));
+    return savedAnswer(c, c.req.param("id"), store.addRevision(c.req.param("id"), { input }, c.get("user")));
   });
 
   return app;

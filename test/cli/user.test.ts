@@ -1,8 +1,7 @@
 import { PassThrough, Readable } from "node:stream";
 import { describe, expect, it } from "vitest";
-import { signerAddCommand, type SignerIo } from "../../src/cli/signer.ts";
-import { openDatabase } from "../../src/store/index.ts";
-import { verifySigner } from "../../src/store/signers.ts";
+import { userAddCommand, type UserIo } from "../../src/cli/user.ts";
+import { openDatabase, openStore } from "../../src/store/index.ts";
 import { FAST_SCRYPT, tempDbPath } from "../store/helpers.ts";
 
 const PHRASE = "lichen on the north wall";
@@ -15,7 +14,7 @@ class Collect extends PassThrough {
   }
 }
 
-function pipedIo(input: string): SignerIo & { stdout: Collect; stderr: Collect } {
+function pipedIo(input: string): UserIo & { stdout: Collect; stderr: Collect } {
   return { stdin: Readable.from([input]), stdout: new Collect(), stderr: new Collect(), isTTY: false };
 }
 
@@ -33,27 +32,50 @@ function terminalIo(entries: string[]) {
 
 async function registered(path: string): Promise<string[]> {
   const db = openDatabase(path);
-  const names = (db.prepare("SELECT name FROM signers").all() as { name: string }[]).map((r) => r.name);
+  const names = (db.prepare("SELECT name FROM users").all() as { name: string }[]).map((r) => r.name);
   db.close();
   return names;
 }
 
-describe("signer add", () => {
-  it("registers a signer with the passphrase piped on standard input", async () => {
+describe("user add", () => {
+  it("adds the first admin with the passphrase piped on standard input, who can then sign in", async () => {
     const dbPath = tempDbPath();
     const io = pipedIo(`${PHRASE}\n`);
-    expect(await signerAddCommand(["Mira Solberg"], io, { dbPath, passphraseCost: FAST_SCRYPT })).toBe(0);
-    expect(io.stdout.text).toBe('registered signer "Mira Solberg"\n');
-    const db = openDatabase(dbPath);
+    expect(await userAddCommand(["Mira Solberg", "--role", "admin"], io, { dbPath, passphraseCost: FAST_SCRYPT })).toBe(0);
+    expect(io.stdout.text).toBe('added admin "Mira Solberg" (user id 1)\n');
+    const store = openStore({ path: dbPath });
     // The trailing newline is not part of the passphrase.
-    await expect(verifySigner(db, "Mira Solberg", PHRASE)).resolves.toMatchObject({ name: "Mira Solberg" });
-    db.close();
+    await expect(store.signIn({ name: "Mira Solberg", passphrase: PHRASE }, "test")).resolves.toMatchObject({
+      user: { name: "Mira Solberg", role: "admin" },
+    });
+    store.close();
+  });
+
+  it("refuses an engineer as the first person, and a role that is not one, with exit code 2", async () => {
+    const dbPath = tempDbPath();
+    const first = pipedIo(`${PHRASE}\n`);
+    expect(await userAddCommand(["Mira Solberg", "--role", "engineer"], first, { dbPath })).toBe(2);
+    expect(first.stderr.text).toMatch(/first person must be an admin/);
+    const odd = pipedIo(`${PHRASE}\n`);
+    expect(await userAddCommand(["Mira Solberg", "--role", "boss"], odd, { dbPath })).toBe(2);
+    expect(odd.stderr.text).toMatch(/--role must be admin or engineer/);
+    expect(await registered(dbPath)).toEqual([]);
+  });
+
+  it("refuses a common or trivially repeated passphrase, saying why", async () => {
+    const dbPath = tempDbPath();
+    for (const weak of ["password1234", "aaaaaaaaaaaaaaaa", "abcabcabcabcabc"]) {
+      const io = pipedIo(`${weak}\n`);
+      expect(await userAddCommand(["Mira Solberg", "--role", "admin"], io, { dbPath })).toBe(2);
+      expect(io.stderr.text).toMatch(/too easy to guess/);
+    }
+    expect(await registered(dbPath)).toEqual([]);
   });
 
   it("asks twice in a terminal with echo off, and never prints the passphrase", async () => {
     const dbPath = tempDbPath();
     const io = terminalIo([`${PHRASE}\r`, `${PHRASE}\r`]);
-    expect(await signerAddCommand(["Mira Solberg"], io, { dbPath, passphraseCost: FAST_SCRYPT })).toBe(0);
+    expect(await userAddCommand(["Mira Solberg", "--role", "admin"], io, { dbPath, passphraseCost: FAST_SCRYPT })).toBe(0);
     expect(io.stdin.rawModes).toEqual([true, false, true, false]);
     expect(io.stderr.text).toContain("Passphrase for Mira Solberg: ");
     expect(io.stderr.text).toContain("Same passphrase again: ");
@@ -64,13 +86,13 @@ describe("signer add", () => {
   it("treats backspace as a correction while typing", async () => {
     const dbPath = tempDbPath();
     const io = terminalIo([`${PHRASE}x\u007f\r`, `${PHRASE}\r`]);
-    expect(await signerAddCommand(["Mira Solberg"], io, { dbPath, passphraseCost: FAST_SCRYPT })).toBe(0);
+    expect(await userAddCommand(["Mira Solberg", "--role", "admin"], io, { dbPath, passphraseCost: FAST_SCRYPT })).toBe(0);
   });
 
   it("registers nothing when the two entries differ", async () => {
     const dbPath = tempDbPath();
     const io = terminalIo([`${PHRASE}\r`, `${PHRASE} typo\r`]);
-    expect(await signerAddCommand(["Mira Solberg"], io, { dbPath, passphraseCost: FAST_SCRYPT })).toBe(2);
+    expect(await userAddCommand(["Mira Solberg", "--role", "admin"], io, { dbPath, passphraseCost: FAST_SCRYPT })).toBe(2);
     expect(io.stderr.text).toMatch(/the two entries differ/);
     expect(await registered(dbPath)).toEqual([]);
   });
@@ -78,16 +100,16 @@ describe("signer add", () => {
   it("stops on Ctrl-C with exit code 130", async () => {
     const dbPath = tempDbPath();
     const io = terminalIo(["lich\u0003"]);
-    expect(await signerAddCommand(["Mira Solberg"], io, { dbPath })).toBe(130);
+    expect(await userAddCommand(["Mira Solberg", "--role", "admin"], io, { dbPath })).toBe(130);
     expect(io.stdin.rawModes.at(-1)).toBe(false);
     expect(await registered(dbPath)).toEqual([]);
   });
 
   it("refuses a taken name before asking for a passphrase", async () => {
     const dbPath = tempDbPath();
-    await signerAddCommand(["Mira Solberg"], pipedIo(PHRASE), { dbPath, passphraseCost: FAST_SCRYPT });
+    await userAddCommand(["Mira Solberg", "--role", "admin"], pipedIo(PHRASE), { dbPath, passphraseCost: FAST_SCRYPT });
     const io = terminalIo([]);
-    expect(await signerAddCommand(["mira solberg"], io, { dbPath })).toBe(1);
+    expect(await userAddCommand(["mira solberg", "--role", "engineer"], io, { dbPath })).toBe(1);
     expect(io.stderr.text).toMatch(/already registered/);
     expect(io.stdin.rawModes).toEqual([]);
   });
@@ -95,16 +117,16 @@ describe("signer add", () => {
   it("refuses a short passphrase, several lines, or no name, with exit code 2 and the reason", async () => {
     const dbPath = tempDbPath();
     const short = pipedIo("too short\n");
-    expect(await signerAddCommand(["Mira Solberg"], short, { dbPath })).toBe(2);
+    expect(await userAddCommand(["Mira Solberg", "--role", "admin"], short, { dbPath })).toBe(2);
     expect(short.stderr.text).toMatch(/passphrase: must be at least 12 characters/);
     const lines = pipedIo(`${PHRASE}\n${PHRASE}\n`);
-    expect(await signerAddCommand(["Mira Solberg"], lines, { dbPath })).toBe(2);
+    expect(await userAddCommand(["Mira Solberg", "--role", "admin"], lines, { dbPath })).toBe(2);
     expect(lines.stderr.text).toMatch(/more than one line/);
     const none = pipedIo(PHRASE);
-    expect(await signerAddCommand([], none, { dbPath })).toBe(2);
-    expect(none.stderr.text).toMatch(/usage: signer add NAME/);
+    expect(await userAddCommand([], none, { dbPath })).toBe(2);
+    expect(none.stderr.text).toMatch(/usage: user add NAME --role/);
     const blank = pipedIo(PHRASE);
-    expect(await signerAddCommand(["   "], blank, { dbPath })).toBe(2);
+    expect(await userAddCommand(["   ", "--role", "admin"], blank, { dbPath })).toBe(2);
     expect(blank.stderr.text).toMatch(/name must not be empty/);
     expect(await registered(dbPath)).toEqual([]);
   });

@@ -1,0 +1,63 @@
+import { createHash, randomBytes } from "node:crypto";
+import { z } from "zod";
+import { isoNow, type StoreContext } from "./context.ts";
+import { offeredPassphraseField, parseFields } from "./fields.ts";
+import { logPeopleEvent } from "./peopleLog.ts";
+import { authenticate, type Actor } from "./users.ts";
+
+/**
+ * Sign-in sessions. A token is 32 random bytes (base64url); the database keeps only its SHA-256,
+ * so a copy of the database gives no one a way in. A session lasts SESSION_HOURS and ends at
+ * sign-out, when the account is disabled, or when an admin resets its passphrase.
+ */
+export const SESSION_HOURS = 12;
+
+export interface Session {
+  token: string;
+  user: Actor;
+  expiresAt: string;
+}
+
+const signInFields = z.strictObject({
+  name: z.string({ error: "is required: the name you were registered with" }).max(200, "must be at most 200 characters"),
+  passphrase: offeredPassphraseField,
+});
+
+export async function signIn(ctx: StoreContext, body: unknown, source: string): Promise<Session> {
+  const { name, passphrase } = parseFields(signInFields, body);
+  const user = await authenticate(ctx, name, passphrase, source);
+  const token = randomBytes(32).toString("base64url");
+  const now = ctx.now();
+  const expiresAt = new Date(now.getTime() + SESSION_HOURS * 3600_000).toISOString();
+  ctx.db
+    .transaction(() => {
+      // Expired sessions are swept here, on a write, so reading a page never writes.
+      ctx.db.prepare("DELETE FROM sessions WHERE expires_at <= ?").run(now.toISOString());
+      ctx.db
+        .prepare("INSERT INTO sessions (token_hash, user_id, created_at, expires_at) VALUES (?, ?, ?, ?)")
+        .run(tokenHash(token), user.id, isoNow(ctx), expiresAt);
+      logPeopleEvent(ctx.db, { at: isoNow(ctx), kind: "sign-in", userId: user.id, actorId: user.id, source, detail: null });
+    })
+    .immediate();
+  return { token, user, expiresAt };
+}
+
+/** The enabled user a token belongs to, or undefined. Reads only. */
+export function userForToken(ctx: StoreContext, token: string): Actor | undefined {
+  if (!/^[A-Za-z0-9_-]{20,100}$/.test(token)) return undefined;
+  const row = ctx.db
+    .prepare(
+      `SELECT u.id, u.name, u.role FROM sessions s JOIN users u ON u.id = s.user_id
+        WHERE s.token_hash = ? AND s.expires_at > ? AND u.disabled = 0`,
+    )
+    .get(tokenHash(token), isoNow(ctx)) as Actor | undefined;
+  return row;
+}
+
+export function signOut(ctx: StoreContext, token: string): void {
+  ctx.db.prepare("DELETE FROM sessions WHERE token_hash = ?").run(tokenHash(token));
+}
+
+function tokenHash(token: string): string {
+  return createHash("sha256").update(token).digest("hex");
+}

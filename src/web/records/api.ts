@@ -1,0 +1,131 @@
+import { Hono } from "hono";
+import { bodyLimit } from "hono/body-limit";
+import { MAX_IMPORT_BYTES, type NewCheck, type NewRevision, type NewUser, type SignOffRequest, type Store } from "../../store/index.ts";
+import { errorsDoc, readJson, tooLarge } from "../api.ts";
+import { clearSessionCookie, noStore, requireUser, setSessionCookie, sourceOf, tokenOf, type RecordsEnv } from "./auth.ts";
+import { recordsErrorResponse } from "./http.ts";
+
+export interface RecordsDeps {
+  /** The open records store; it validates check inputs with the validator it was opened with. */
+  store: Store;
+}
+
+const importLimit = bodyLimit({
+  maxSize: MAX_IMPORT_BYTES,
+  onError: (c) => c.json(errorsDoc("(document)", `an import is at most ${MAX_IMPORT_BYTES / 1048576} MiB; this one is larger`), 413),
+});
+
+/**
+ * The JSON API for saved checks, revisions, sign-offs, people, sessions and keys. The store
+ * checks every body in full, so a client hears every problem in one 422 answer; these handlers
+ * only carry requests in and answers out, for the signed-in user. Only POST /api/v1/session and
+ * GET /api/v1/keys are open.
+ */
+export function recordsApi({ store }: RecordsDeps): Hono<RecordsEnv> {
+  const app = new Hono<RecordsEnv>();
+  app.onError(recordsErrorResponse);
+  for (const path of ["/api/v1/checks", "/api/v1/users", "/api/v1/session", "/api/v1/keys"]) {
+    app.use(path, noStore);
+    app.use(`${path}/*`, noStore);
+  }
+
+  // Signing in: the one records route open to anyone, slowed against guessing by the store.
+  app.post("/api/v1/session", tooLarge, async (c) => {
+    const body = await readJson(c.req.raw);
+    if (!body.ok) return c.json(body.body, body.status);
+    const session = await store.signIn(body.value, sourceOf(c));
+    setSessionCookie(c, session);
+    return c.json({ token: session.token, user: session.user, expiresAt: session.expiresAt }, 201);
+  });
+
+  // The public key: anyone may check a signature, so anyone may have it.
+  app.get("/api/v1/keys", (c) => c.json({ keys: [store.publicKey()] }));
+
+  const signedIn = requireUser(store);
+  app.use("/api/v1/checks", signedIn);
+  app.use("/api/v1/checks/*", signedIn);
+  app.use("/api/v1/users", signedIn);
+  app.use("/api/v1/users/*", signedIn);
+  app.use("/api/v1/keys/trusted", signedIn);
+  app.get("/api/v1/session", signedIn, (c) => c.json({ user: c.get("user") }));
+  app.delete("/api/v1/session", signedIn, (c) => {
+    const token = tokenOf(c);
+    if (token) store.signOut(token);
+    clearSessionCookie(c);
+    return c.body(null, 204);
+  });
+
+  app.get("/api/v1/checks", (c) => c.json({ checks: store.listChecks() }));
+
+  app.post("/api/v1/checks", tooLarge, async (c) => {
+    const body = await readJson(c.req.raw);
+    if (!body.ok) return c.json(body.body, body.status);
+    const created = store.createCheck(body.value as NewCheck, c.get("user"));
+    c.header("Location", `/api/v1/checks/${encodeURIComponent(created.id)}`);
+    return c.json(created, 201);
+  });
+
+  // "import" can never be taken for a check id here: it has no second path segment.
+  app.post("/api/v1/checks/import", importLimit, async (c) => {
+    const body = await readJson(c.req.raw);
+    if (!body.ok) return c.json(body.body, body.status);
+    const imported = store.importCheck(body.value, c.get("user"));
+    c.header("Location", `/api/v1/checks/${encodeURIComponent(imported.id)}`);
+    return c.json(imported, 201);
+  });
+
+  app.get("/api/v1/checks/:id", (c) => c.json(store.getCheck(c.req.param("id"))));
+
+  app.post("/api/v1/checks/:id/revisions", tooLarge, async (c) => {
+    const body = await readJson(c.req.raw);
+    if (!body.ok) return c.json(body.body, body.status);
+    const saved = store.addRevision(c.req.param("id"), body.value as NewRevision, c.get("user"));
+    // An unchanged input creates nothing: 200 with the existing revision, and says so.
+    return c.json(saved, saved.unchanged ? 200 : 201);
+  });
+
+  app.post("/api/v1/checks/:id/signoffs", tooLarge, async (c) => {
+    const body = await readJson(c.req.raw);
+    if (!body.ok) return c.json(body.body, body.status);
+    return c.json(await store.signOff(c.req.param("id"), body.value as SignOffRequest, c.get("user"), sourceOf(c)), 201);
+  });
+
+  app.get("/api/v1/checks/:id/export", (c) => {
+    const doc = store.exportCheck(c.req.param("id"));
+    const file = doc.check.calcNumber.replace(/[^A-Za-z0-9._-]+/g, "_");
+    c.header("Content-Disposition", `attachment; filename="${file}.hoopwise.json"`);
+    return c.json(doc);
+  });
+
+  app.get("/api/v1/users", (c) => c.json({ users: store.listUsers() }));
+
+  app.post("/api/v1/users", tooLarge, async (c) => {
+    const body = await readJson(c.req.raw);
+    if (!body.ok) return c.json(body.body, body.status);
+    return c.json(await store.addUser(body.value as NewUser, c.get("user"), sourceOf(c)), 201);
+  });
+
+  app.post("/api/v1/users/:id/disable", (c) => c.json(store.setDisabled(userId(c.req.param("id")), true, c.get("user"))));
+  app.post("/api/v1/users/:id/enable", (c) => c.json(store.setDisabled(userId(c.req.param("id")), false, c.get("user"))));
+  app.post("/api/v1/users/:id/clear-delay", (c) => c.json({ cleared: store.clearDelay(userId(c.req.param("id")), c.get("user")) }));
+  app.post("/api/v1/users/:id/passphrase", tooLarge, async (c) => {
+    const body = await readJson(c.req.raw);
+    if (!body.ok) return c.json(body.body, body.status);
+    await store.setPassphrase(userId(c.req.param("id")), body.value, c.get("user"), sourceOf(c));
+    return c.body(null, 204);
+  });
+
+  app.get("/api/v1/keys/trusted", (c) => c.json({ trusted: store.listTrustedKeys() }));
+  app.post("/api/v1/keys/trusted", tooLarge, async (c) => {
+    const body = await readJson(c.req.raw);
+    if (!body.ok) return c.json(body.body, body.status);
+    return c.json(store.trustKey(body.value, c.get("user")), 201);
+  });
+
+  return app;
+}
+
+/** A user id from the path; anything that is not a number names no one, a 404 from the store. */
+function userId(raw: string): number {
+  return /^\d{1,12}$/.test(raw) ? Number(raw) : -1;
+}
