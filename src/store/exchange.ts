@@ -31,7 +31,7 @@ export const EXCHANGE_FORMAT = "hoopwise.records/2";
 export const MAX_IMPORT_REVISIONS = 500;
 export const MAX_IMPORT_EVENTS = 20_000;
 /** Bytes of the document's canonical JSON; the HTTP route refuses a larger body before reading it. */
-export const MAX_IMPORT_BYTES = 32 * 1024 * 1024;
+export const MAX_IMPORT_BYTES = 64 * 1024 * 1024;
 
 const isoTime = z.iso.datetime({ error: "must be an ISO 8601 time such as 2030-01-31T09:00:00.000Z" });
 const hex64 = z.string().regex(/^[0-9a-f]{64}$/, "must be 64 lowercase hexadecimal digits");
