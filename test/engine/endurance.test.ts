@@ -1,21 +1,7 @@
-import { readFileSync } from "node:fs";
 import { describe, expect, it } from "vitest";
-import { checkDocument, type CheckResult } from "../../src/engine/index.ts";
+import { base, example, run } from "./exampleRun.ts";
 import { basquinLife, enduranceLimitInUse, modifyingFactors } from "../../src/engine/sn.ts";
 import { normalQuantile } from "../../src/engine/special.ts";
-
-const example = JSON.parse(readFileSync(new URL("../fixtures/format-example.json", import.meta.url), "utf8"));
-
-function run(doc: unknown): CheckResult {
-  const out = checkDocument(doc);
-  if (!out.ok) throw new Error(JSON.stringify(out.errors));
-  return out.result;
-}
-
-function base(extra: Record<string, unknown> = {}) {
-  const { crack: _c, evidence: _e, ...doc } = structuredClone(example);
-  return { ...doc, ...extra };
-}
 
 describe("endurance limit against the curve", () => {
   it("a limit above the curve at 10⁶ cycles is brought down to it, with a warning", () => {

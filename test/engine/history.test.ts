@@ -1,21 +1,7 @@
-import { readFileSync } from "node:fs";
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { checkDocument, type CheckResult } from "../../src/engine/index.ts";
+import { base, example, run } from "./exampleRun.ts";
 import { resolveLoad, rotateToPeak } from "../../src/engine/load.ts";
-
-const example = JSON.parse(readFileSync(new URL("../fixtures/format-example.json", import.meta.url), "utf8"));
-
-function run(doc: unknown): CheckResult {
-  const out = checkDocument(doc);
-  if (!out.ok) throw new Error(JSON.stringify(out.errors));
-  return out.result;
-}
-
-function base(extra: Record<string, unknown> = {}) {
-  const { crack: _c, evidence: _e, ...doc } = structuredClone(example);
-  return { ...doc, ...extra };
-}
 
 describe("repeated histories", () => {
   // ASTM E1049-85 §5.4.4 example history, shifted by +5 so the shell stays pressurized

@@ -1,21 +1,8 @@
-import { readFileSync } from "node:fs";
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { GAUGES_MM, roundUp } from "../../src/engine/gauges.ts";
-import { checkDocument, type CheckResult } from "../../src/engine/index.ts";
-
-const example = JSON.parse(readFileSync(new URL("../fixtures/format-example.json", import.meta.url), "utf8"));
-
-function run(doc: unknown): CheckResult {
-  const out = checkDocument(doc);
-  if (!out.ok) throw new Error(JSON.stringify(out.errors));
-  return out.result;
-}
-
-function base(extra: Record<string, unknown> = {}) {
-  const { crack: _c, evidence: _e, ...doc } = structuredClone(example);
-  return { ...doc, ...extra };
-}
+import { checkDocument } from "../../src/engine/index.ts";
+import { base, example, run } from "./exampleRun.ts";
 
 describe("a solved thickness a designer can use", () => {
   it("rounds up to the next gauge of the list (common practice lists)", () => {
