@@ -100,9 +100,19 @@ function PrincipalResults({ m, num }: { m: SheetModel; num: string }) {
   }
   if (r.crack) {
     q("Initial crack", r.crack.initial_mm, "length");
-    q(`Critical crack (by ${r.crack.criticalBy})`, r.crack.critical_mm, "length");
+    if (r.crack.detectable_mm !== null) q("Detectable crack", r.crack.detectable_mm, "length");
+    q(`Critical crack (${r.crack.governingOrientation}, set by ${r.crack.criticalBy})`, r.crack.critical_mm, "length");
     t("Cycles to grow to critical", life(r.crack.cycles));
-    t("Inspection interval", life(r.crack.inspectionInterval_cycles));
+    t("Inspection threshold", life(r.crack.threshold_cycles));
+    t(
+      "Repeat inspection interval",
+      r.crack.repeatInterval_cycles === null ? "— (no detectable size)" : life(r.crack.repeatInterval_cycles),
+    );
+  }
+  if (r.fleet) {
+    t(`Fleet of ${r.fleet.size}: expected first failure`, life(r.fleet.firstFailure_cycles));
+    t("Fleet: 5th-percentile life", life(r.fleet.percentile5_cycles));
+    t("Fleet: probability one fails before the design life", sig(r.fleet.probabilityAnyFailsBeforeDesignLife, 2));
   }
   if (r.evidence) t("Lower tolerance bound of the test lives", life(r.evidence.lowerBound_cycles));
   if (r.solution?.thickness_mm !== undefined) q("Least wall thickness that passes", r.solution.thickness_mm, "length");

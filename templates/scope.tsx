@@ -18,6 +18,7 @@ export function Scope({ m, num }: { m: SheetModel; num: number }) {
     "fatigue life at the opening",
     r.crack ? "crack growth and the inspection interval" : "",
     r.evidence ? "the test evidence" : "",
+    r.fleet ? "the fleet view" : "",
   ].filter(Boolean);
   return (
     <section>
@@ -60,8 +61,27 @@ export function Scope({ m, num }: { m: SheetModel; num: number }) {
         </li>
         {r.crack ? (
           <li>
-            <b>Crack growth.</b> Paris law driven by the nominal hoop stress range, the crack lying along the axis; the inspection interval
-            is the growth life to the critical size divided by the inspection factor.
+            <b>Damage tolerance.</b> Paris law driven by the nominal stress range opening the crack:{" "}
+            {r.crack.orientation === "both"
+              ? `a crack along the axis (hoop stress) and a crack around the shell (axial stress) are both grown; the ${r.crack.governingOrientation} crack has the shorter life and governs.`
+              : r.crack.orientation === "circumferential"
+                ? "the crack runs around the shell and is opened by the axial stress."
+                : "the crack lies along the axis and is opened by the hoop stress."}{" "}
+            {d.crack?.bulging === false
+              ? "The bulging of the shell at the crack is switched off, which is unconservative."
+              : "The shell's bulging at the crack (Folias) raises its stress intensity."}{" "}
+            The critical size comes from the BS 7910 / R6 Option 1 failure assessment diagram (fracture against collapse).{" "}
+            {r.crack.uniformCurve
+              ? "The crack grows from a fastener hole toward the opening, through the opening's rising stress (Green's function). "
+              : ""}
+            The first inspection (threshold) is the growth life from the initial flaw to critical divided by the inspection factor; the
+            repeat interval is the growth life from the detectable size to critical divided by the same factor. The compressive part of a
+            cycle is left out of the range.
+          </li>
+        ) : null}
+        {r.fleet ? (
+          <li>
+            <b>What a single test article can and cannot show.</b> {r.fleet.statement}
           </li>
         ) : null}
         {r.evidence ? (

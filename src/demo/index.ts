@@ -16,7 +16,8 @@ const cabinBarrel: CheckDocument = {
   project: "Larkspur L-30 commuter (invented demo)",
   calcNumber: "L30-FUS-017",
   notes:
-    "Demo scenario: skin bay between two frames at a passenger window; the window opening is a rounded rectangle with a row of fastener holes round its upper aft corner.",
+    "Demo scenario: skin bay between two frames at a passenger window; the window opening is a rounded rectangle with a row of fastener holes round its upper aft corner." +
+    " A crack from the corner fastener hole grows toward the window; a fleet of 150 invented aircraft is assumed.",
   display: { length: "mm", stress: "MPa", pressure: "kPa", altitude: "m" },
   shell: { form: "cylinder", radius_mm: 1150, radiusAt: "mean", thickness_mm: 1.0, theory: "auto" },
   pressure: { fromAltitude: { flight_m: 7620, cabin_m: 2440 }, min_MPa: 0 },
@@ -34,8 +35,17 @@ const cabinBarrel: CheckDocument = {
   },
   material: { id: "al-2024-t3" },
   fatigue: { meanStress: "goodman", designLife_cycles: 60000, scatterFactor: 3 },
-  crack: { geometry: "hole-through", initial_mm: 1.27, holeRadius_mm: 2.4, width_mm: 480, inspectionFactor: 2 },
+  crack: {
+    geometry: "hole-through",
+    initial_mm: 1.27,
+    holeRadius_mm: 2.4,
+    openingDistance_mm: 12,
+    detectableBy: "surface-eddy-current",
+    width_mm: 480,
+    inspectionFactor: 2,
+  },
   evidence: { lives_cycles: [410000], reliability: 0.9, confidence: 0.95, assumedLogStdDev: 0.14 },
+  fleet: { size: 150 },
 };
 
 const airReceiver: CheckDocument = {

@@ -2,10 +2,11 @@ import { MEAN_STRESS_CRITERIA } from "../schema/check.ts";
 import { fingerprint } from "./fingerprint.ts";
 import type { ResolvedCheck } from "./input.ts";
 import { fitCoupons } from "./coupons.ts";
-import { crackGrowth } from "./crack.ts";
+import { damageTolerance } from "./crackProgramme.ts";
 import { InputError } from "./errors.ts";
 import { cycleAtPoint, evaluate, evaluationSteps, type Context, type Evaluation } from "./evaluate.ts";
 import { evaluateEvidence } from "./evidence.ts";
+import { fleetView } from "./fleet.ts";
 import { resolveLoad, type Load } from "./load.ts";
 import { CRITERION_LABEL } from "./meanStress.ts";
 import type { CheckResult, CriterionRow } from "./result.ts";
@@ -246,6 +247,7 @@ export function runCheck(input: ResolvedCheck): CheckResult {
     steps.push(...evidenceSteps);
     warnings.push(...evidenceWarnings);
   }
+  if (input.fleet) addFleet(result, input, e, steps, warnings);
   const table = verdictTable(result);
   result.verdictTable = table.rows;
   result.verdict = table.verdict;
@@ -259,53 +261,41 @@ export function runCheck(input: ResolvedCheck): CheckResult {
 }
 
 function addCrack(result: CheckResult, input: ResolvedCheck, e: Evaluation, load: Load, steps: Step[], warnings: string[]): void {
-  const c = input.crack!;
-  const m = input.material;
-  const spectrum = load.isSpectrum ? equivalentRange(load, e, m.parisM!) : null;
-  if (spectrum) steps.push(spectrum.step);
-  const holeRadius = c.holeRadius_mm ?? (input.cutout.kind === "circular-hole" ? input.cutout.radius_mm : undefined);
-  const g = withPressurePath(input, () =>
-    crackGrowth({
-      geometry: c.geometry,
-      initial_mm: c.initial_mm,
-      width_mm: c.width_mm,
-      holeRadius_mm: holeRadius,
-      cracksAtHole: c.cracksAtHole,
-      bulging: c.bulging,
-      form: input.shell.form,
-      shellRadius_mm: e.radii.mean_mm,
-      thickness_mm: e.thickness_mm,
-      hoopMax_MPa: e.hoopMax,
-      hoopMin_MPa: spectrum ? e.hoopMax - spectrum.range_MPa : e.hoopMin,
-      yield_MPa: m.yield_MPa,
-      parisC: m.parisC!,
-      parisM: m.parisM!,
-      toughness_MPaSqrtM: m.toughness_MPaSqrtM!,
-      walkerGamma: c.walkerGamma,
-      inspectionFactor: c.inspectionFactor,
-    }),
-  );
-  result.crack = {
-    geometry: c.geometry,
-    initial_mm: c.initial_mm,
-    critical_mm: g.critical_mm,
-    criticalBy: g.criticalBy,
-    cycles: g.cycles,
-    inspectionInterval_cycles: g.inspectionInterval_cycles,
-    curve: g.curve,
-    leakBeforeBreak: g.leakBeforeBreak ?? null,
-  };
-  if (spectrum) {
-    result.crack.passes = g.cycles === null ? null : g.cycles / spectrum.cyclesPerPass;
-    result.crack.inspectionInterval_passes =
-      g.inspectionInterval_cycles === null ? null : g.inspectionInterval_cycles / spectrum.cyclesPerPass;
-    if (c.walkerGamma !== undefined)
-      warnings.push(
-        "with a spectrum the crack grows under the damage-equivalent range from the peak down; the R-ratio effect is applied to that one equivalent cycle only",
-      );
+  const d = withPressurePath(input, () => damageTolerance(input, e, load));
+  result.crack = d.crack;
+  steps.push(...d.steps);
+  warnings.push(...d.warnings);
+}
+
+/** The fleet view from the test evidence, or from the computed life with an assumed scatter. */
+function addFleet(result: CheckResult, input: ResolvedCheck, e: Evaluation, steps: Step[], warnings: string[]): void {
+  const f = input.fleet!;
+  const ev = result.evidence;
+  const sigma = ev?.logStdDev ?? f.logStdDev;
+  const mu = ev ? ev.logMean : e.life !== null && e.life > 0 ? Math.log10(e.life) : null;
+  if (mu === null || sigma === null || sigma === undefined || !Number.isFinite(mu) || mu > 250) {
+    warnings.push(
+      "the fleet view needs a finite median life and a scatter; the computed life is unlimited or nil, so no fleet figures are given",
+    );
+    return;
   }
-  steps.push(...g.steps);
-  warnings.push(...g.warnings);
+  if (!(sigma >= 0.001)) {
+    warnings.push(
+      `the scatter of log10 life (${fmt(sigma)}) is below 0.001: no real fleet is that uniform, and the fleet figures would be noise, so none are given`,
+    );
+    return;
+  }
+  const v = fleetView({
+    size: f.size,
+    logMean: mu,
+    logStdDev: sigma,
+    designLife_cycles: input.fatigue.designLife_cycles,
+    basis: ev ? "test evidence" : "computed life",
+    testLives_cycles: input.evidence?.lives_cycles ?? [],
+  });
+  result.fleet = v.fleet;
+  steps.push(...v.steps);
+  warnings.push(...v.warnings);
 }
 
 /** Pressure given by altitude, history or blocks has no max_MPa/min_MPa field: point at the pressure as a whole. */
@@ -317,34 +307,6 @@ function withPressurePath<T>(input: ResolvedCheck, fn: () => T): T {
       throw new InputError("pressure", err.message);
     throw err;
   }
-}
-
-/**
- * Spectrum crack growth without load-interaction: the Paris-law damage-equivalent range
- * Δσ_eq = (Σ nᵢ·Δσᵢ^m / Σ nᵢ)^(1/m) grows the crack as the spectrum does cycle for cycle when Y varies
- * slowly (no retardation; Schijve, Fatigue of Structures and Materials, §11 — from memory).
- */
-function equivalentRange(load: Load, e: Evaluation, m: number): { range_MPa: number; cyclesPerPass: number; step: Step } {
-  let sum = 0;
-  let n = 0;
-  for (const c of load.cycles) {
-    sum += c.count * (e.unit.hoop * c.range) ** m;
-    n += c.count;
-  }
-  const range_MPa = (sum / n) ** (1 / m);
-  return {
-    range_MPa,
-    cyclesPerPass: n,
-    step: step(
-      "crack-equivalent-range",
-      "Damage-equivalent nominal hoop range of the spectrum",
-      "Δσ_eq = (Σ nᵢ·Δσᵢ^m / Σ nᵢ)^(1/m)",
-      `Δσ_eq = (Σ over ${load.cycles.length} cycle groups / ${fmt(n)})^(1/${fmt(m)})`,
-      range_MPa,
-      "MPa",
-      "Paris law without load interaction; Schijve, Fatigue of Structures and Materials (from memory)",
-    ),
-  };
 }
 
 /** Life under each criterion at the same thickness, so the user sees how much the choice matters. */

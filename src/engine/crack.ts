@@ -1,53 +1,85 @@
 /**
- * Fatigue crack growth in the skin of a pressurized shell by the Paris law.
+ * Fatigue crack growth and residual strength of a through-crack in the skin of a pressurized
+ * shell, for one orientation of the crack.
  *
- *   da/dN = C·(ΔK_eff)^m,  ΔK = M·Y(a)·Δσ·√(πa)
+ *   da/dN = C·(ΔK_eff)^m,  ΔK = M·Y(a)·β(a)·Δσ·√(πa)
  * with da/dN in m/cycle and ΔK in MPa·√m (the trade convention: a is turned from mm to m
- * here), Δσ the nominal hoop stress range (the crack lies along the axis and is opened by
- * the hoop stress), Y the geometry factor (crackGeometry.ts), M Folias's bulging factor when
- * asked for (cylinders only), and optionally Walker's R-ratio form
- * ΔK_eff = ΔK/(1 − R)^(1 − γ) (Walker, ASTM STP 462 (1970); Dowling, Mechanical Behavior of
- * Materials, ch. 11). Paris & Erdogan, J. Basic Eng. 85 (1963) 528.
+ * here), Δσ the nominal stress range opening the crack (the hoop stress for a crack along the
+ * axis, the axial stress for a crack around it), Y the geometry factor (crackGeometry.ts), M the
+ * bulging factor of the shell (Folias; on by default), β the correction for a stress gradient
+ * along the crack's path (weightFunction.ts; 1 in a uniform field), and optionally Walker's
+ * R-ratio form ΔK_eff = ΔK/(1 − R)^(1 − γ) (Walker, ASTM STP 462 (1970); Dowling, Mechanical
+ * Behavior of Materials, ch. 11). Paris & Erdogan, J. Basic Eng. 85 (1963) 528.
  *
- * The critical size is the smaller of: M·Y·σmax·√(πa) reaching the toughness K_c, and —
- * when a width is given — the net-section stress σmax·W/(W − cracked width) reaching yield.
- * The cycles from the initial to the critical size are N = ∫ da/(C·ΔK_eff^m), integrated in
- * ln a by adaptive Gauss–Kronrod to a relative accuracy of about 1e-10.
- * Leak before break (Irwin's criterion): a crack grown through the wall is about 2t long;
- * the vessel leaks first if a centre crack of half-length t is below its critical size.
+ * The critical size comes from the failure assessment diagram (fad.ts): Kr = K/K_mat against
+ * Lr = σ_ref/σy, with σ_ref the larger of the bulged stress M·σmax (local collapse of the shell,
+ * as BS 7910 takes it for a through-wall flaw in a cylinder) and, with a width, the net-section
+ * stress σmax·W/(W − cracked width). A crack growing toward an opening links up with it when
+ * its ligament is gone, which is critical too.
  *
- * Validity: linear-elastic fracture mechanics (small-scale yielding), Paris regime (well above
- * threshold, well below K_c), constant-amplitude hoop cycles, through-thickness cracks.
+ * The cycles between two sizes are N = ∫ da/(C·ΔK_eff^m), integrated in ln a by adaptive
+ * Gauss–Kronrod. The inspection programme: threshold = N(initial → critical)/factor, repeat
+ * interval = N(detectable → critical)/factor.
+ *
+ * Validity: fracture mechanics of through-thickness cracks, Paris regime (well above threshold,
+ * well below K_c), no load-interaction (retardation) effects.
  */
 import {
   accurateLimit_mm,
+  bulgingFactor,
+  bulgingFactorFor,
   bulgingHalfLength_mm,
   describeFactor,
-  foliasFactor,
   geometryFactor,
   growthLimit_mm,
   type CrackGeometry,
+  type CrackOrientation,
   type CrackShape,
 } from "./crackGeometry.ts";
 import { InputError } from "./errors.ts";
-import { bracketRoot, integrate } from "./special.ts";
+import { fadCriticalSize, lrCutOff, type CriticalBy, type FadResult } from "./fad.ts";
+import { integrate } from "./special.ts";
 import { fmt, step, type Step } from "./step.ts";
+import { effectiveStress } from "./weightFunction.ts";
+
+/** The stress normal to a crack's path at a point of it, as coefficients of the nominal hoop and axial stresses. */
+export interface PathField {
+  hoopCoeff: number;
+  axialCoeff: number;
+}
+
+/** A crack from a fastener hole growing into the field of a nearby opening. */
+export interface CrackGradient {
+  /** The stress the part carries at distance x (mm) from the hole's edge along the path, without the hole, over the nominal stress. */
+  field: (x_mm: number) => number;
+  /** Distance from the hole's edge to the opening's edge along the path: the crack links up there. */
+  ligament_mm: number;
+  /** Where the field comes from, for the steps. */
+  source: string;
+}
 
 export interface CrackInput {
   geometry: CrackGeometry;
-  /** Half-length (centre crack) or depth from the edge or the hole's edge. */
+  /** Half-length (centre crack) or depth from the edge or the hole's edge: the flaw assumed at the start of service. */
   initial_mm: number;
+  /** The size an inspection finds reliably; sets the repeat interval. */
+  detectable_mm?: number;
   width_mm?: number;
   holeRadius_mm?: number;
   cracksAtHole?: 1 | 2;
-  /** Folias bulging of a crack along the axis of a cylinder; off by default. */
+  /** "axial": along the axis, opened by the hoop stress; "circumferential": around it, opened by the axial stress. */
+  orientation?: CrackOrientation;
+  /** The shell's bulging at the crack; on by default (off is unconservative and warns). */
   bulging?: boolean;
   form: "cylinder" | "sphere";
   shellRadius_mm: number;
   thickness_mm: number;
-  hoopMax_MPa: number;
-  hoopMin_MPa: number;
+  /** Nominal stress opening the crack at the peak and at the valley of the cycle. */
+  stressMax_MPa: number;
+  stressMin_MPa: number;
   yield_MPa: number;
+  /** For the cut-off of the failure assessment diagram; yield when absent (Lr,max = 1, conservative). */
+  ultimate_MPa?: number;
   /** Paris coefficient, da/dN in m/cycle with ΔK in MPa·√m. */
   parisC: number;
   parisM: number;
@@ -55,6 +87,10 @@ export interface CrackInput {
   /** Walker exponent γ for the R-ratio effect; off when absent. */
   walkerGamma?: number;
   inspectionFactor: number;
+  /** A stress gradient along the path (hole-through only). */
+  gradient?: CrackGradient;
+  /** Skip the leak-before-break check (it is made for the axial crack only). */
+  leakCheck?: boolean;
 }
 
 export interface CrackCurvePoint {
@@ -69,75 +105,35 @@ export interface LeakBeforeBreak {
 }
 
 export interface CrackResult {
+  orientation: CrackOrientation;
+  stressMax_MPa: number;
+  range_MPa: number;
   critical_mm: number;
-  criticalBy: "toughness" | "net-section yield";
+  criticalBy: CriticalBy;
+  fad: Omit<FadResult, "by" | "critical_mm">;
   /** null when the stress range is zero (no growth). */
   cycles: number | null;
+  threshold_cycles: number | null;
+  /** null without a detectable size; 0 when the detectable size is already critical. */
+  repeatInterval_cycles: number | null;
+  /** The repeat interval with a detectable size, else the threshold. */
   inspectionInterval_cycles: number | null;
   curve: CrackCurvePoint[];
-  leakBeforeBreak: LeakBeforeBreak;
+  /** With a gradient: the same crack grown as if the field were uniform (the hole alone). */
+  uniform?: { cycles: number | null; critical_mm: number; curve: CrackCurvePoint[] };
+  leakBeforeBreak: LeakBeforeBreak | null;
   steps: Step[];
   warnings: string[];
 }
 
 const PARIS = "Paris & Erdogan, J. Basic Eng. 85 (1963) 528: da/dN = C·ΔK^m (da/dN in m/cycle, ΔK in MPa·√m)";
 const WALKER = "Walker, ASTM STP 462 (1970); Dowling, Mechanical Behavior of Materials, ch. 11 (from memory)";
-const FOLIAS = "Folias, Int. J. Fracture Mech. 1 (1965) 104: axial crack in a pressurized cylinder (short form, from memory)";
-const NET_SECTION = "Net-section yield of the cracked strip: σmax·W/(W − cracked width) = σy (common practice)";
+const FAD = "BS 7910 / R6 Option 1 failure assessment diagram (from memory)";
 const LBB =
   "Irwin's leak-before-break criterion: a through-wall crack about 2t long must be below critical (e.g. Broek, Elementary Engineering Fracture Mechanics; from memory)";
+const CLOSURE =
+  "Compressive part of the cycle left out: a through-crack closes in compression and does not grow (ASTM E647 takes ΔK = Kmax for R ≤ 0); common practice";
 const CURVE_POINTS = 60;
-
-/** Stress intensity at crack size a (mm) for a nominal stress σ (MPa), with the bulging factor when used. */
-function stressIntensity(a_mm: number, sigma_MPa: number, shape: CrackShape, bulge: ((a: number) => number) | null): number {
-  const M = bulge ? bulge(a_mm) : 1;
-  return M * geometryFactor(a_mm, shape) * sigma_MPa * Math.sqrt((Math.PI * a_mm) / 1000);
-}
-
-/**
- * Crack size where K reaches K_c. K rises with a from 0 for all the geometries here (and
- * without bound towards the strip's limit), so a geometric walk from `start` brackets the
- * single crossing, which bracketRoot then narrows.
- */
-function toughnessSize(start_mm: number, limit_mm: number, K: (a: number) => number, Kc: number): number {
-  const g = (a: number) => K(a) - Kc;
-  const top = Number.isFinite(limit_mm) ? limit_mm * (1 - 1e-12) : Infinity;
-  let lo = Math.min(start_mm, top / 2);
-  let hi = lo;
-  for (let i = 0; i < 10000; i++) {
-    if (g(lo) >= 0) {
-      hi = lo;
-      lo /= 1.25;
-    } else if (g(hi) < 0) {
-      // A stress so low that K stays below the toughness up to the strip's limit: critical only where it cuts through.
-      if (hi >= top) return top;
-      lo = hi;
-      hi = Math.min(hi * 1.25, top);
-    } else {
-      return bracketRoot(g, lo, hi, 1e-13);
-    }
-  }
-  throw new RangeError("toughnessSize: no crossing of the toughness found");
-}
-
-/**
- * Net-section yield size: the width lost (2a for a centre crack, a for an edge crack, 2(R + a)
- * or 2R + a at a hole) equals W·(1 − σmax/σy), solved for a; null without a width.
- */
-function netSectionSize(shape: CrackShape, sigmaMax: number, yieldStress: number): number | null {
-  const W = shape.width_mm;
-  if (W === undefined) return null;
-  const lost = W * (1 - sigmaMax / yieldStress);
-  const R = shape.holeRadius_mm ?? 0;
-  switch (shape.geometry) {
-    case "center-through":
-      return lost / 2;
-    case "edge-through":
-      return lost;
-    case "hole-through":
-      return shape.cracksAtHole === 2 ? lost / 2 - R : lost - 2 * R;
-  }
-}
 
 function positive(value: number | undefined, path: string, message: string): void {
   if (!(value !== undefined && Number.isFinite(value) && value > 0)) throw new InputError(path, message);
@@ -145,6 +141,8 @@ function positive(value: number | undefined, path: string, message: string): voi
 
 function validate(o: CrackInput): void {
   positive(o.initial_mm, "crack.initial_mm", "The initial crack size must be a positive length in mm.");
+  if (o.detectable_mm !== undefined)
+    positive(o.detectable_mm, "crack.detectable_mm", "The detectable crack size must be a positive length in mm.");
   if (o.width_mm !== undefined) positive(o.width_mm, "crack.width_mm", "The width must be a positive length in mm.");
   if (o.geometry === "hole-through") {
     positive(o.holeRadius_mm, "crack.holeRadius_mm", "A crack at a hole needs the hole radius in mm.");
@@ -164,39 +162,99 @@ function validate(o: CrackInput): void {
   if (o.walkerGamma !== undefined && !(o.walkerGamma >= 0 && o.walkerGamma <= 1)) {
     throw new InputError("crack.walkerGamma", "Walker's exponent γ must lie between 0 and 1.");
   }
-  if (!(Number.isFinite(o.hoopMax_MPa) && o.hoopMax_MPa > 0)) {
+  if (!(Number.isFinite(o.stressMax_MPa) && o.stressMax_MPa > 0)) {
     throw new InputError(
-      "pressure.max_MPa",
-      "The hoop stress never becomes tensile, so a crack along the axis is never opened; a crack-growth check does not apply.",
+      o.orientation === "circumferential" ? "crack.orientation" : "pressure.max_MPa",
+      o.orientation === "circumferential"
+        ? "The axial stress never becomes tensile, so a crack around the shell is never opened; choose the axial orientation."
+        : "The hoop stress never becomes tensile, so a crack along the axis is never opened; a crack-growth check does not apply.",
     );
   }
-  if (!(Number.isFinite(o.hoopMin_MPa) && o.hoopMin_MPa <= o.hoopMax_MPa)) {
+  if (!(Number.isFinite(o.stressMin_MPa) && o.stressMin_MPa <= o.stressMax_MPa)) {
     throw new InputError("pressure.min_MPa", "The minimum pressure must not exceed the maximum.");
+  }
+  if (o.gradient && o.geometry !== "hole-through")
+    throw new InputError(
+      "crack.openingDistance_mm",
+      "A crack growing toward an opening must start at a hole: choose the hole-through geometry.",
+    );
+  if (o.gradient)
+    positive(
+      o.gradient.ligament_mm,
+      "crack.openingDistance_mm",
+      "The fastener hole must lie clear of the opening: its edge must not reach the opening's edge.",
+    );
+}
+
+/** Width lost to the crack (and its hole) across a strip, for the net-section stress. */
+function lostWidth(a_mm: number, shape: CrackShape): number {
+  const R = shape.holeRadius_mm ?? 0;
+  switch (shape.geometry) {
+    case "center-through":
+      return 2 * a_mm;
+    case "edge-through":
+      return a_mm;
+    case "hole-through":
+      return shape.cracksAtHole === 2 ? 2 * (R + a_mm) : 2 * R + a_mm;
   }
 }
 
-/** Critical size of a crack in a shape, by toughness and (with a width) net-section yield, whichever is smaller. */
-function criticalSize(
-  shape: CrackShape,
-  sigmaMax: number,
-  yieldStress: number,
-  Kc: number,
-  bulge: ((a: number) => number) | null,
-  start_mm: number,
-): { size: number; by: CrackResult["criticalBy"]; byToughness: number; byNet: number | null } {
-  const K = (a: number) => stressIntensity(a, sigmaMax, shape, bulge);
-  const byToughness = toughnessSize(start_mm, growthLimit_mm(shape), K, Kc);
-  const byNet = netSectionSize(shape, sigmaMax, yieldStress);
-  if (byNet !== null && byNet < byToughness) return { size: byNet, by: "net-section yield", byToughness, byNet };
-  return { size: byToughness, by: "toughness", byToughness, byNet };
+interface Model {
+  shape: CrackShape;
+  /** Bulging factor at crack size a; 1 when off. */
+  M: (a_mm: number) => number;
+  /** Gradient correction at crack size a; 1 in a uniform field. */
+  beta: (a_mm: number) => number;
+  limit_mm: number;
+}
+
+/** K (MPa·√m) at crack size a (mm) for a nominal stress σ (MPa). */
+function stressIntensity(model: Model, a_mm: number, sigma_MPa: number): number {
+  return model.M(a_mm) * model.beta(a_mm) * geometryFactor(a_mm, model.shape) * sigma_MPa * Math.sqrt((Math.PI * a_mm) / 1000);
+}
+
+/** Reference stress of the cracked skin: the bulged stress M·σ and, with a width, the net-section stress; the larger. */
+function referenceStress(model: Model, a_mm: number, sigma_MPa: number): number {
+  const bulged = model.M(a_mm) * sigma_MPa;
+  const W = model.shape.width_mm;
+  if (W === undefined) return bulged;
+  const ligament = W - lostWidth(a_mm, model.shape);
+  const net = ligament > 0 ? (sigma_MPa * W) / ligament : Infinity;
+  return Math.max(bulged, net);
+}
+
+/** Cycles to grow from a to b (mm) in the model; the growth rate in m/cycle. */
+function cyclesBetween(rate: (a_mm: number) => number, a_mm: number, b_mm: number): number {
+  if (b_mm <= a_mm) return 0;
+  return integrate((u) => Math.exp(u) / 1000 / rate(Math.exp(u)), Math.log(a_mm), Math.log(b_mm), { relTol: 1e-10 });
+}
+
+function growthCurve(rate: (a_mm: number) => number, a0: number, ac: number): { cycles: number; curve: CrackCurvePoint[] } {
+  const u0 = Math.log(a0);
+  const u1 = Math.log(ac);
+  const curve: CrackCurvePoint[] = [{ a_mm: a0, n_cycles: 0 }];
+  let n = 0;
+  for (let i = 1; i < CURVE_POINTS; i++) {
+    const ua = u0 + ((u1 - u0) * (i - 1)) / (CURVE_POINTS - 1);
+    const ub = i === CURVE_POINTS - 1 ? u1 : u0 + ((u1 - u0) * i) / (CURVE_POINTS - 1);
+    n += integrate((u) => Math.exp(u) / 1000 / rate(Math.exp(u)), ua, ub, { relTol: 1e-11 });
+    curve.push({ a_mm: Math.exp(ub), n_cycles: n });
+  }
+  curve[curve.length - 1].a_mm = ac;
+  return { cycles: n, curve };
 }
 
 /**
- * Paris-law growth of a through-crack from its initial to its critical size.
+ * Paris-law growth of a through-crack from its initial to its critical size, with the critical
+ * size from the failure assessment diagram and the inspection programme.
  * Units: lengths in mm, stresses in MPa, toughness in MPa·√m, C with da/dN in m/cycle.
  */
 export function crackGrowth(opts: CrackInput): CrackResult {
   validate(opts);
+  const orientation: CrackOrientation = opts.orientation ?? "axial";
+  const id = (name: string) => (orientation === "circumferential" ? `crack-circ-${name}` : `crack-${name}`);
+  const which = orientation === "circumferential" ? "circumferential crack" : "axial crack";
+  const stressName = orientation === "circumferential" ? "axial" : "hoop";
   const shape: CrackShape = {
     geometry: opts.geometry,
     width_mm: opts.width_mm,
@@ -204,70 +262,81 @@ export function crackGrowth(opts: CrackInput): CrackResult {
     cracksAtHole: opts.cracksAtHole ?? 1,
   };
   const a0 = opts.initial_mm;
-  const sMax = opts.hoopMax_MPa;
+  const sMax = opts.stressMax_MPa;
   const Kc = opts.toughness_MPaSqrtM;
   const { parisC: C, parisM: m } = opts;
   const steps: Step[] = [];
   const warnings: string[] = [];
 
-  const limit = growthLimit_mm(shape);
+  let limit = growthLimit_mm(shape);
+  if (opts.gradient) limit = Math.min(limit, opts.gradient.ligament_mm);
   if (a0 >= limit) {
     throw new InputError(
       "crack.initial_mm",
-      `The initial crack (${fmt(a0)} mm) already cuts through the ${fmt(opts.width_mm ?? 0)} mm width.`,
+      opts.gradient && opts.gradient.ligament_mm <= growthLimit_mm(shape)
+        ? `The initial crack (${fmt(a0)} mm) already reaches the opening (${fmt(opts.gradient.ligament_mm)} mm from the hole's edge).`
+        : `The initial crack (${fmt(a0)} mm) already cuts through the ${fmt(opts.width_mm ?? 0)} mm width.`,
     );
   }
 
-  // Bulging: Folias's factor is for cylinders; a sphere's factor differs and is not applied.
-  let bulge: ((a: number) => number) | null = null;
-  if (opts.bulging && opts.form === "sphere") {
+  // Bulging: on by default; the sphere has its own factor, the circumferential crack its own.
+  const bulgingOn = opts.bulging ?? true;
+  const factorM = bulgingFactorFor(opts.form, orientation);
+  const Rt = opts.shellRadius_mm * opts.thickness_mm;
+  const M = bulgingOn
+    ? (a: number) => bulgingFactor(bulgingHalfLength_mm(a, shape), opts.shellRadius_mm, opts.thickness_mm, factorM.k)
+    : () => 1;
+  if (!bulgingOn)
     warnings.push(
-      "Bulging was asked for, but the Folias factor used here is for an axial crack in a cylinder; it is not applied to a sphere. " +
-        "A sphere's skin bulges at a crack too, so crack growth and critical size read unconservatively for long cracks.",
+      `Bulging is switched off for the ${which}: the shell's skin bulges out at a crack under pressure, which raises the stress intensity. ` +
+        "Without it the critical size and the crack-growth life read unconservatively (long), more so for long cracks.",
     );
-  } else if (opts.bulging) {
-    bulge = (a: number) => foliasFactor(bulgingHalfLength_mm(a, shape), opts.shellRadius_mm, opts.thickness_mm);
-  }
+  const gradient = opts.gradient;
+  const R = shape.holeRadius_mm ?? 0;
+  const beta = gradient ? (a: number) => effectiveStress(gradient.field, a, R) : () => 1;
+  const model: Model = { shape, M, beta, limit_mm: limit };
 
   // Stress range: the compressive part of a cycle closes the crack and does not drive it.
-  const sMinEff = Math.max(opts.hoopMin_MPa, 0);
+  const sMinEff = Math.max(opts.stressMin_MPa, 0);
   const range = sMax - sMinEff;
-  if (opts.hoopMin_MPa < 0) {
+  if (opts.stressMin_MPa < 0) {
     warnings.push(
-      `The hoop stress goes into compression (${fmt(opts.hoopMin_MPa)} MPa); the compressive part is taken to close the crack and is left out of the range.`,
+      `The ${stressName} stress goes into compression (${fmt(opts.stressMin_MPa)} MPa); the compressive part is taken to close the ${which} and is left out of its range.`,
     );
   }
   steps.push(
     step(
-      "crack-range",
-      "Nominal hoop stress range driving the crack",
-      opts.hoopMin_MPa < 0 ? "Δσ = σmax − 0 (compressive part ignored)" : "Δσ = σmax − σmin",
+      id("range"),
+      `Nominal ${stressName} stress range driving the ${which}`,
+      opts.stressMin_MPa < 0 ? "Δσ = σmax − 0 (compressive part left out)" : "Δσ = σmax − σmin",
       `Δσ = ${fmt(sMax)} − ${fmt(sMinEff)}`,
       range,
       "MPa",
-      opts.hoopMin_MPa < 0
-        ? "Crack along the axis opened by the hoop stress; compressive part ignored (common practice, e.g. Dowling ch. 11)"
-        : "Crack along the axis opened by the hoop stress",
+      opts.stressMin_MPa < 0
+        ? `${orientation === "circumferential" ? "Crack around the shell opened by the axial stress" : "Crack along the axis opened by the hoop stress"}; ${CLOSURE}`
+        : orientation === "circumferential"
+          ? "Crack around the shell opened by the axial stress"
+          : "Crack along the axis opened by the hoop stress",
     ),
   );
-  const R = sMinEff / sMax;
+  const Rratio = sMinEff / sMax;
   let walker = 1;
   if (opts.walkerGamma !== undefined) {
-    walker = 1 / (1 - R) ** (1 - opts.walkerGamma);
+    walker = 1 / (1 - Rratio) ** (1 - opts.walkerGamma);
     steps.push(
       step(
-        "crack-walker",
-        "Walker factor for the stress ratio",
+        id("walker"),
+        `Walker factor for the stress ratio (${which})`,
         "ΔK_eff/ΔK = 1/(1 − R)^(1 − γ), R = σmin/σmax",
-        `1/(1 − ${fmt(R)})^(1 − ${fmt(opts.walkerGamma)})`,
+        `1/(1 − ${fmt(Rratio)})^(1 − ${fmt(opts.walkerGamma)})`,
         walker,
         "—",
         WALKER,
       ),
     );
-  } else if (R >= 0.5) {
+  } else if (Rratio >= 0.5) {
     warnings.push(
-      `The stress ratio R = ${fmt(R)} is high; Paris constants are usually measured near R = 0.1 and cracks grow faster at high R. Consider giving Walker's exponent.`,
+      `The stress ratio R = ${fmt(Rratio)} is high; Paris constants are usually measured near R = 0.1 and cracks grow faster at high R. Consider giving Walker's exponent.`,
     );
   }
 
@@ -275,8 +344,8 @@ export function crackGrowth(opts: CrackInput): CrackResult {
   const Y0 = geometryFactor(a0, shape);
   steps.push(
     step(
-      "crack-y-initial",
-      "Geometry factor at the initial crack",
+      id("y-initial"),
+      `Geometry factor at the initial ${which}`,
       factor.equation,
       `Y(${fmt(a0)} mm) = ${fmt(Y0)}`,
       Y0,
@@ -284,166 +353,256 @@ export function crackGrowth(opts: CrackInput): CrackResult {
       factor.source,
     ),
   );
-  if (bulge) {
+  if (bulgingOn) {
     const c0 = bulgingHalfLength_mm(a0, shape);
     steps.push(
       step(
-        "crack-bulging-initial",
-        "Bulging factor at the initial crack",
-        "M = √(1 + 1.61·c²/(R·t))",
-        `M = √(1 + 1.61 × ${fmt(c0)}² / (${fmt(opts.shellRadius_mm)} × ${fmt(opts.thickness_mm)}))`,
-        bulge(a0),
+        id("bulging-initial"),
+        `Bulging factor at the initial ${which}${opts.form === "sphere" ? " (sphere)" : ""}`,
+        `M = √(1 + ${factorM.k}·c²/(R·t)), c the half-length seen from afar`,
+        `M = √(1 + ${factorM.k} × ${fmt(c0)}² / (${fmt(opts.shellRadius_mm)} × ${fmt(opts.thickness_mm)}))`,
+        M(a0),
         "—",
-        FOLIAS,
+        factorM.source,
       ),
     );
   }
-  const dK0 = walker * stressIntensity(a0, range, shape, bulge);
+  if (gradient) {
+    steps.push(
+      step(
+        id("gradient-initial"),
+        "Stress-gradient correction at the initial crack (the opening's field along the path)",
+        "β = ∫σ(x)·k(x)·m(x,a) dx / ∫k(x)·m(x,a) dx, k the hole's Kirsch field, m the edge-crack Green's function",
+        `β(${fmt(a0)} mm) = ${fmt(beta(a0))}; ligament to the opening ${fmt(gradient.ligament_mm)} mm`,
+        beta(a0),
+        "—",
+        `Tada, Paris & Irwin, edge crack with point loads (Hartranft–Sih form, from memory), compounded with Bowie's factor; field: ${gradient.source}`,
+      ),
+    );
+  }
+  const dK0 = walker * stressIntensity(model, a0, range);
+  const parts = `${bulgingOn ? "M·" : ""}${gradient ? "β·" : ""}`;
   steps.push(
     step(
-      "crack-dk-initial",
-      walker !== 1 ? "Effective stress intensity range at the initial crack" : "Stress intensity range at the initial crack",
-      `${walker !== 1 ? "ΔK_eff" : "ΔK"} = ${bulge ? "M·" : ""}Y·Δσ·√(πa)${walker !== 1 ? "/(1 − R)^(1 − γ)" : ""}`,
-      `${walker !== 1 ? "ΔK_eff" : "ΔK"} = ${bulge ? `${fmt(bulge(a0))} × ` : ""}${fmt(Y0)} × ${fmt(range)} × √(π × ${fmt(a0 / 1000)} m)${walker !== 1 ? ` × ${fmt(walker)}` : ""}`,
+      id("dk-initial"),
+      `${walker !== 1 ? "Effective stress intensity range" : "Stress intensity range"} at the initial ${which}`,
+      `${walker !== 1 ? "ΔK_eff" : "ΔK"} = ${parts}Y·Δσ·√(πa)${walker !== 1 ? "/(1 − R)^(1 − γ)" : ""}`,
+      `${walker !== 1 ? "ΔK_eff" : "ΔK"} = ${bulgingOn ? `${fmt(M(a0))} × ` : ""}${gradient ? `${fmt(beta(a0))} × ` : ""}${fmt(Y0)} × ${fmt(range)} × √(π × ${fmt(a0 / 1000)} m)${walker !== 1 ? ` × ${fmt(walker)}` : ""}`,
       dK0,
       "MPa·√m",
       PARIS,
     ),
   );
 
-  // Critical size.
-  const crit = criticalSize(shape, sMax, opts.yield_MPa, Kc, bulge, a0);
-  if (crit.byNet !== null && crit.byNet <= 0) {
+  // Critical size by the failure assessment diagram.
+  const W = opts.width_mm;
+  const fadOf = (mdl: Model, start: number) =>
+    fadCriticalSize({
+      K: (a) => stressIntensity(mdl, a, sMax),
+      sigmaRef: (a) => referenceStress(mdl, a, sMax),
+      toughness_MPaSqrtM: Kc,
+      yield_MPa: opts.yield_MPa,
+      ultimate_MPa: opts.ultimate_MPa ?? opts.yield_MPa,
+      start_mm: start,
+      limit_mm: mdl.limit_mm,
+    });
+  if (referenceStress(model, 1e-9, sMax) / opts.yield_MPa >= lrCutOff(opts.yield_MPa, opts.ultimate_MPa ?? opts.yield_MPa)) {
     throw new InputError(
       "pressure.max_MPa",
-      `The peak hoop stress (${fmt(sMax)} MPa) already yields the net section of the ${fmt(opts.width_mm ?? 0)} mm width without any crack (yield ${fmt(opts.yield_MPa)} MPa).`,
+      `The peak ${stressName} stress (${fmt(sMax)} MPa) already reaches the collapse limit of the section without any crack (flow stress ${fmt(((opts.ultimate_MPa ?? opts.yield_MPa) + opts.yield_MPa) / 2)} MPa).`,
     );
   }
-  const Yc = geometryFactor(crit.byToughness, shape);
-  const Mc = bulge ? bulge(crit.byToughness) : 1;
+  const fad = fadOf(model, a0);
+  let ac = fad.critical_mm;
+  let by: CriticalBy = fad.by;
+  const linkUp = gradient !== undefined && ac >= gradient.ligament_mm * (1 - 1e-9);
+  if (linkUp) {
+    ac = gradient.ligament_mm;
+    by = "link-up";
+  }
+  const Yc = geometryFactor(fad.lefm_mm, shape);
+  const Mc = M(fad.lefm_mm);
   steps.push(
     step(
-      "crack-critical-toughness",
-      "Crack size at which the stress intensity reaches the toughness",
-      "a_c = (K_c/(M·Y·σmax))²/π, Y and M at a_c",
-      `a_c = (${fmt(Kc)} / (${fmt(Mc)} × ${fmt(Yc)} × ${fmt(sMax)}))² / π × 1000`,
-      crit.byToughness,
+      id("critical-toughness"),
+      `LEFM limit: ${which} size at which the stress intensity reaches the toughness (Kr = 1)`,
+      `a_K: ${parts}Y·σmax·√(πa) = K_mat`,
+      `${bulgingOn ? `${fmt(Mc)} × ` : ""}${gradient ? `${fmt(beta(fad.lefm_mm))} × ` : ""}${fmt(Yc)} × ${fmt(sMax)} × √(π × ${fmt(fad.lefm_mm / 1000)} m) = ${fmt(Kc)}`,
+      fad.lefm_mm,
       "mm",
-      "Irwin: K = Y·σ·√(πa) reaching K_c (Tada, Paris & Irwin)",
+      "Irwin: K = Y·σ·√(πa) reaching K_c (Tada, Paris & Irwin); the Kr = 1 limit of the diagram",
     ),
   );
-  if (crit.byNet !== null) {
+  steps.push(
+    step(
+      id("critical-collapse"),
+      `Collapse limit: ${which} size at which the reference stress reaches the flow stress (Lr = Lr,max)`,
+      W === undefined
+        ? "σ_ref = M·σmax = Lr,max·σy, Lr,max = (σy + σu)/(2σy)"
+        : "σ_ref = max(M·σmax, σmax·W/(W − cracked width)) = Lr,max·σy",
+      `Lr,max = (${fmt(opts.yield_MPa)} + ${fmt(opts.ultimate_MPa ?? opts.yield_MPa)})/(2 × ${fmt(opts.yield_MPa)}) = ${fmt(fad.LrMax)}`,
+      fad.collapse_mm >= limit * (1 - 1e-9) && !Number.isFinite(limit) ? null : fad.collapse_mm,
+      "mm",
+      `${FAD}; reference stress of a through-wall flaw in a shell with the bulging factor (BS 7910, from memory)${W === undefined ? "" : "; net section of the strip (common practice)"}`,
+    ),
+  );
+  steps.push(
+    step(
+      id("critical-fad"),
+      `Critical ${which} size by the failure assessment diagram (set by ${fad.by === "toughness" ? "the toughness" : fad.by === "collapse" ? "collapse" : "the interaction of fracture and collapse"})`,
+      "Kr = f(Lr), f = (1 + 0.5Lr²)^(−1/2)·[0.3 + 0.7·exp(−0.6Lr⁶)], Lr ≤ Lr,max",
+      `at a = ${fmt(fad.critical_mm)} mm: Lr = ${fmt(fad.Lr)}, Kr = ${fmt(fad.Kr)}, f(Lr) = ${fmt(fad.Lr >= fad.LrMax ? 0 : fad.Kr)}`,
+      fad.critical_mm,
+      "mm",
+      `${FAD}; toughness when within 5 % of the LEFM size, collapse on the cut-off or within 5 % of the collapse size, else the interaction`,
+    ),
+  );
+  if (linkUp) {
     steps.push(
       step(
-        "crack-critical-net",
-        "Crack size at which the net section yields",
-        "σmax·W/(W − cracked width) = σy",
-        `cracked width = ${fmt(opts.width_mm ?? 0)} × (1 − ${fmt(sMax)}/${fmt(opts.yield_MPa)})`,
-        crit.byNet,
+        id("critical-link-up"),
+        "The crack reaches the opening before it is critical by the diagram: link-up",
+        "a_crit = ligament from the hole's edge to the opening",
+        `a_crit = ${fmt(gradient.ligament_mm)} mm (< ${fmt(fad.critical_mm)} mm by the diagram)`,
+        ac,
         "mm",
-        NET_SECTION,
+        "A crack that joins an opening becomes part of a much longer crack: taken as critical (conservative, common practice)",
       ),
     );
   }
-  const ac = crit.size;
   steps.push(
     step(
-      "crack-critical",
-      `Critical crack size (governed by ${crit.by})`,
-      "a_crit = min(a_c, a_net)",
-      crit.byNet === null ? `a_crit = a_c = ${fmt(ac)}` : `a_crit = min(${fmt(crit.byToughness)}, ${fmt(crit.byNet)})`,
+      id("critical"),
+      `Critical ${which} size (set by ${by})`,
+      linkUp ? "a_crit = min(a_FAD, ligament)" : "a_crit = a_FAD",
+      linkUp ? `a_crit = min(${fmt(fad.critical_mm)}, ${fmt(ac)})` : `a_crit = ${fmt(ac)}`,
       ac,
       "mm",
-      crit.by === "toughness" ? "Irwin: K = Y·σ·√(πa) reaching K_c" : NET_SECTION,
+      linkUp ? "Link-up with the opening (common practice)" : FAD,
     ),
   );
   if (a0 >= ac) {
     throw new InputError(
       "crack.initial_mm",
-      `The initial crack (${fmt(a0)} mm) is already at or beyond the critical size (${fmt(ac)} mm, by ${crit.by}); the part would fail at the first peak pressure.`,
+      `The initial crack (${fmt(a0)} mm) is already at or beyond the critical size (${fmt(ac)} mm, set by ${by}); the part would fail at the first peak pressure.`,
     );
   }
   if (ac > accurateLimit_mm(shape)) {
     warnings.push(
-      `The critical crack (${fmt(ac)} mm) lies beyond the range where the width correction keeps its stated accuracy (${fmt(accurateLimit_mm(shape))} mm); treat the last part of the growth as approximate.`,
+      `The critical ${which} (${fmt(ac)} mm) lies beyond the range where the width correction keeps its stated accuracy (${fmt(accurateLimit_mm(shape))} mm); treat the last part of the growth as approximate.`,
     );
   }
-  if (shape.geometry === "hole-through" && shape.cracksAtHole === 1) {
+  const cc = bulgingHalfLength_mm(ac, shape);
+  if (bulgingOn && (cc * cc) / Rt > factorM.range) {
     warnings.push(
-      "The factor for one crack at a hole is interpolated between its exact short- and long-crack limits; for cracks of about 0.3 to 3 hole radii " +
-        "it may read several per cent below tabulated one-crack values, so consider two cracks for a conservative answer.",
+      `At the critical size the ${which} reaches c²/(R·t) = ${fmt((cc * cc) / Rt)}, beyond the range of the bulging fit (${factorM.range}); the factor there is extrapolated.`,
     );
   }
 
-  // Growth: N = ∫ da/(C·ΔK_eff^m), in u = ln a so that dN/du = a/(C·ΔK_eff^m), a in metres.
-  const growthRate = (a_mm: number) => C * (walker * stressIntensity(a_mm, range, shape, bulge)) ** m; // m/cycle
-  const dNdu = (u: number) => {
-    const a = Math.exp(u);
-    return a / 1000 / growthRate(a);
-  };
+  // Growth and the inspection programme.
+  const rate = (mdl: Model) => (a_mm: number) => C * (walker * stressIntensity(mdl, a_mm, range)) ** m;
   let cycles: number | null = null;
-  const curve: CrackCurvePoint[] = [];
+  let threshold: number | null = null;
+  let repeat: number | null = null;
+  let curve: CrackCurvePoint[] = [];
+  let uniform: CrackResult["uniform"];
+  const ad = opts.detectable_mm;
   if (range > 0) {
-    const u0 = Math.log(a0);
-    const u1 = Math.log(ac);
-    let n = 0;
-    curve.push({ a_mm: a0, n_cycles: 0 });
-    for (let i = 1; i < CURVE_POINTS; i++) {
-      const ua = u0 + ((u1 - u0) * (i - 1)) / (CURVE_POINTS - 1);
-      const ub = i === CURVE_POINTS - 1 ? u1 : u0 + ((u1 - u0) * i) / (CURVE_POINTS - 1);
-      n += integrate(dNdu, ua, ub, { relTol: 1e-12 });
-      curve.push({ a_mm: Math.exp(ub), n_cycles: n });
-    }
-    curve[curve.length - 1].a_mm = ac;
-    cycles = n;
+    const g = growthCurve(rate(model), a0, ac);
+    cycles = g.cycles;
+    curve = g.curve;
     steps.push(
       step(
-        "crack-cycles",
-        "Cycles to grow the crack to its critical size",
+        id("cycles"),
+        `Cycles to grow the ${which} from the initial flaw to its critical size`,
         "N = ∫ da / (C·ΔK_eff^m), from a₀ to a_crit",
-        `N = ∫ da / (${fmt(C)} × (${walker !== 1 ? `${fmt(walker)}·` : ""}${bulge ? "M·" : ""}Y·${fmt(range)}·√(πa))^${fmt(m)}), a from ${fmt(a0)} to ${fmt(ac)} mm`,
+        `N = ∫ da / (${fmt(C)} × (${walker !== 1 ? `${fmt(walker)}·` : ""}${parts}Y·${fmt(range)}·√(πa))^${fmt(m)}), a from ${fmt(a0)} to ${fmt(ac)} mm`,
         cycles,
         "cycles",
         `${PARIS}; integrated numerically (adaptive Gauss–Kronrod in ln a)`,
       ),
     );
-    // Hand check: Y (and M) held at their initial values gives the closed form of the Paris integral.
-    const k0 = dK0 / Math.sqrt((Math.PI * a0) / 1000); // ΔK/√(πa) at a₀
+    const k0 = dK0 / Math.sqrt((Math.PI * a0) / 1000);
     const hand = parisClosedForm(a0 / 1000, ac / 1000, C, m, k0 * Math.sqrt(Math.PI));
     steps.push(
       step(
-        "crack-cycles-hand",
-        "Hand check: cycles with the geometry factor held at its initial value",
+        id("cycles-hand"),
+        "Hand check: cycles with the factors held at their initial values",
         m === 2 ? "N = ln(a_c/a₀) / (C·k²·π), k = ΔK₀/√(πa₀)" : "N = (a₀^(1−m/2) − a_c^(1−m/2)) / (C·(k·√π)^m·(m/2 − 1)), k = ΔK₀/√(πa₀)",
         `k = ${fmt(k0)} MPa, a₀ = ${fmt(a0 / 1000)} m, a_c = ${fmt(ac / 1000)} m, C = ${fmt(C)}, m = ${fmt(m)}`,
         hand,
         "cycles",
-        `${PARIS}; closed form for constant Y (differs from N where Y changes with a)`,
+        `${PARIS}; closed form for constant factors (differs from N where they change with a)`,
       ),
     );
-    const interval = cycles / opts.inspectionFactor;
+    threshold = cycles / opts.inspectionFactor;
     steps.push(
       step(
-        "crack-inspection",
-        "Inspection interval",
-        "N_insp = N / inspection factor",
-        `N_insp = ${fmt(cycles)} / ${fmt(opts.inspectionFactor)}`,
-        interval,
+        id("threshold"),
+        `Inspection threshold (${which}): growth from the initial flaw to critical over the factor`,
+        "N_th = N(a₀ → a_crit) / inspection factor",
+        `N_th = ${fmt(cycles)} / ${fmt(opts.inspectionFactor)}`,
+        threshold,
         "cycles",
-        "Damage-tolerance practice: at least two inspections while the crack grows from detectable to critical (common practice)",
+        "Damage-tolerance practice: the first inspection before the assumed initial flaw could grow to critical, with a factor on life (common practice)",
       ),
     );
+    if (ad !== undefined) {
+      const Nd = ad >= ac ? 0 : cyclesBetween(rate(model), Math.max(ad, 1e-9), ac);
+      repeat = Nd / opts.inspectionFactor;
+      steps.push(
+        step(
+          id("repeat"),
+          `Repeat inspection interval (${which}): growth from the detectable size to critical over the factor`,
+          "N_rep = N(a_det → a_crit) / inspection factor",
+          ad >= ac
+            ? `a_det = ${fmt(ad)} mm ≥ a_crit = ${fmt(ac)} mm: no interval`
+            : `N_rep = ${fmt(Nd)} / ${fmt(opts.inspectionFactor)}, a from ${fmt(ad)} to ${fmt(ac)} mm`,
+          repeat,
+          "cycles",
+          "Damage-tolerance practice: at least two chances to find the crack between detectable and critical (common practice)",
+        ),
+      );
+      if (ad >= ac)
+        warnings.push(
+          `The detectable ${which} size (${fmt(ad)} mm) is already at or beyond the critical size (${fmt(ac)} mm): inspections by this method cannot find the crack in time.`,
+        );
+    }
+    if (gradient) {
+      const flat: Model = { ...model, beta: () => 1, limit_mm: growthLimit_mm(shape) };
+      const fu = fadOf(flat, a0);
+      const gu = growthCurve(rate(flat), a0, fu.critical_mm);
+      uniform = { cycles: gu.cycles, critical_mm: fu.critical_mm, curve: gu.curve };
+      steps.push(
+        step(
+          id("cycles-uniform"),
+          "For comparison: cycles to critical if the stress along the path were uniform (the fastener hole alone)",
+          "N = ∫ da / (C·ΔK^m), β = 1",
+          `a from ${fmt(a0)} to ${fmt(fu.critical_mm)} mm`,
+          gu.cycles,
+          "cycles",
+          PARIS,
+        ),
+      );
+    }
   } else {
-    warnings.push("The hoop stress does not vary, so the crack does not grow by fatigue; only its critical size applies.");
+    warnings.push(`The ${stressName} stress does not vary, so the ${which} does not grow by fatigue; only its critical size applies.`);
   }
 
-  const leakBeforeBreak = leakCheck(opts, sMax, Kc, bulge, steps, warnings);
+  const leakBeforeBreak = opts.leakCheck === false ? null : leakCheck(opts, sMax, Kc, factorM.k, bulgingOn, steps, warnings);
   return {
+    orientation,
+    stressMax_MPa: sMax,
+    range_MPa: range,
     critical_mm: ac,
-    criticalBy: crit.by,
+    criticalBy: by,
+    fad: { Lr: fad.Lr, Kr: fad.Kr, LrMax: fad.LrMax, lefm_mm: fad.lefm_mm, collapse_mm: fad.collapse_mm },
     cycles,
-    inspectionInterval_cycles: cycles === null ? null : cycles / opts.inspectionFactor,
+    threshold_cycles: threshold,
+    repeatInterval_cycles: repeat,
+    inspectionInterval_cycles: repeat ?? threshold,
     curve,
+    ...(uniform ? { uniform } : {}),
     leakBeforeBreak,
     steps,
     warnings,
@@ -459,35 +618,45 @@ export function parisClosedForm(a0_m: number, ac_m: number, C: number, m: number
   return (a0_m ** (1 - m / 2) - ac_m ** (1 - m / 2)) / (C * k ** m * (m / 2 - 1));
 }
 
-/** Leak before break: compare a through-wall centre crack of half-length t with its critical half-length. */
+/** Leak before break: a through-wall centre crack of half-length t against its critical half-length by the diagram. */
 function leakCheck(
   opts: CrackInput,
   sMax: number,
   Kc: number,
-  bulge: ((a: number) => number) | null,
+  k: number,
+  bulgingOn: boolean,
   steps: Step[],
   warnings: string[],
 ): LeakBeforeBreak {
   const t = opts.thickness_mm;
   const centre: CrackShape = { geometry: "center-through", width_mm: opts.width_mm, cracksAtHole: 1 };
-  const centreBulge = bulge ? (a: number) => foliasFactor(a, opts.shellRadius_mm, opts.thickness_mm) : null;
-  const crit = criticalSize(centre, sMax, opts.yield_MPa, Kc, centreBulge, t);
-  const leak = t < crit.size;
+  const M = bulgingOn ? (a: number) => bulgingFactor(a, opts.shellRadius_mm, t, k) : () => 1;
+  const model: Model = { shape: centre, M, beta: () => 1, limit_mm: growthLimit_mm(centre) };
+  const crit = fadCriticalSize({
+    K: (a) => stressIntensity(model, a, sMax),
+    sigmaRef: (a) => referenceStress(model, a, sMax),
+    toughness_MPaSqrtM: Kc,
+    yield_MPa: opts.yield_MPa,
+    ultimate_MPa: opts.ultimate_MPa ?? opts.yield_MPa,
+    start_mm: t,
+    limit_mm: model.limit_mm,
+  });
+  const leak = t < crit.critical_mm;
   steps.push(
     step(
       "crack-lbb",
       "Leak before break: through-wall crack half-length against its critical half-length",
-      "t < c_crit (centre crack, same stress field)",
-      `${fmt(t)} mm ${leak ? "<" : "≥"} ${fmt(crit.size)} mm`,
-      crit.size,
+      "t < c_crit (centre crack, same stress field, failure assessment diagram)",
+      `${fmt(t)} mm ${leak ? "<" : "≥"} ${fmt(crit.critical_mm)} mm`,
+      crit.critical_mm,
       "mm",
-      LBB,
+      `${LBB}; critical half-length by the ${FAD}`,
     ),
   );
   if (!leak) {
     warnings.push(
-      `A crack grown through the wall (about ${fmt(2 * t)} mm long) would already be critical (critical length ${fmt(2 * crit.size)} mm): the shell could burst without leaking first.`,
+      `A crack grown through the wall (about ${fmt(2 * t)} mm long) would already be critical (critical length ${fmt(2 * crit.critical_mm)} mm): the shell could burst without leaking first.`,
     );
   }
-  return { leakBeforeBreak: leak, throughWallHalfLength_mm: t, criticalHalfLength_mm: crit.size };
+  return { leakBeforeBreak: leak, throughWallHalfLength_mm: t, criticalHalfLength_mm: crit.critical_mm };
 }

@@ -9,13 +9,15 @@
  *    (0.5 %). Beyond 0.6 the polynomial reads low, so Tada's formula for any α is used there:
  *    Y = √(tan(πα/2)/(πα/2))·[0.752 + 2.02α + 0.37(1 − sin(πα/2))³]/cos(πα/2).
  *  - through-crack at a circular hole of radius R, a = depth from the hole's edge: Bowie's
- *    solution for two symmetric cracks in uniaxial tension as fitted in the handbook,
- *    F₂(s) = 0.5(3 − s)[1 + 1.243(1 − s)³], s = a/(R + a) (from memory). Its limits: s → 0
- *    gives 3 × 1.1215, an edge crack at the hole's stress concentration of 3; s → 1 gives 1,
- *    a centre crack of half-length R + a. One crack: F₁ = F₂·√((2 − s)/2), the ratio of the
- *    long-crack limits (a single long crack acts as a centre crack of half-length R + a/2);
- *    exact at both ends, an interpolation between (stated here from the limits, not from a
- *    table). In a strip of width W the factor √sec(π(R + a)/W) is applied for either case.
+ *    solution in uniaxial tension. Two symmetric cracks: the handbook fit
+ *    F₂(s) = 0.5(3 − s)[1 + 1.243(1 − s)³], s = a/(R + a) (from memory). One crack: the
+ *    quartic fit of Bowie's one-crack table in λ = R/(R + a),
+ *    F₁ = 0.707 − 0.18λ + 6.55λ² − 10.54λ³ + 6.85λ⁴ (within about 1 % of the table over the
+ *    whole range, 0.707 for a long crack, 3.39 at the hole's edge; the fit as quoted by Broek,
+ *    Elementary Engineering Fracture Mechanics, and in Grandt's fastener-hole work, from memory).
+ *    From a = 3R on, where the fit dips below the table, the long-crack limit √((2 − s)/(2s))
+ *    (a centre crack of half-length R + a/2) is taken when it is larger: a conservative envelope.
+ *    In a strip of width W the factor √sec(π(R + a)/W) is applied for either case.
  *    The hoop-only field is conservative for a cylinder: its axial stress lowers the
  *    hole's concentration from 3 to 2.5 (Kirsch solution for a 2:1 biaxial field).
  */
@@ -53,6 +55,18 @@ export function bowieTwoCracks(s: number): number {
   return 0.5 * (3 - s) * (1 + 1.243 * (1 - s) ** 3);
 }
 
+/**
+ * Bowie's one crack at a hole, quartic fit in λ = R/(R + a):
+ * F₁ = 0.707 − 0.18λ + 6.55λ² − 10.54λ³ + 6.85λ⁴ (from memory; see the module comment).
+ */
+export function bowieOneCrack(s: number): number {
+  const l = 1 - s;
+  const fit = 0.707 + l * (-0.18 + l * (6.55 + l * (-10.54 + l * 6.85)));
+  // Beyond a = 3R the fit dips up to 2 % below the table; the long-crack limit (a centre crack of
+  // half-length R + a/2, √((2 − s)/(2s))) lies above the table there, so the larger is taken.
+  return s >= 0.75 ? Math.max(fit, Math.sqrt((2 - s) / (2 * s))) : fit;
+}
+
 /** The geometry factor Y at crack size a (mm). */
 export function geometryFactor(a_mm: number, shape: CrackShape): number {
   const W = shape.width_mm;
@@ -67,9 +81,8 @@ export function geometryFactor(a_mm: number, shape: CrackShape): number {
     case "hole-through": {
       const R = shape.holeRadius_mm ?? 0;
       const s = a_mm / (R + a_mm);
-      const single = shape.cracksAtHole === 1 ? Math.sqrt((2 - s) / 2) : 1;
       const width = W === undefined ? 1 : secantCorrection(R + a_mm, W);
-      return bowieTwoCracks(s) * single * width;
+      return (shape.cracksAtHole === 1 ? bowieOneCrack(s) : bowieTwoCracks(s)) * width;
     }
   }
 }
@@ -91,13 +104,16 @@ export function describeFactor(shape: CrackShape): { equation: string; source: s
           }
         : { equation: "Y = 1.1215", source: `${TPI}: edge crack in a half-plane` };
     case "hole-through": {
-      const single = shape.cracksAtHole === 1 ? "·√((2 − s)/2)" : "";
       const width = hasWidth ? "·√sec(π(R + a)/W)" : "";
       return {
-        equation: `Y = 0.5(3 − s)[1 + 1.243(1 − s)³]${single}${width}, s = a/(R + a)`,
+        equation:
+          shape.cracksAtHole === 1
+            ? `Y = 0.707 − 0.18λ + 6.55λ² − 10.54λ³ + 6.85λ⁴${width}, λ = R/(R + a)`
+            : `Y = 0.5(3 − s)[1 + 1.243(1 − s)³]${width}, s = a/(R + a)`,
         source:
-          `${TPI}: Bowie's cracks at a hole, handbook fit for two cracks (from memory)` +
-          (shape.cracksAtHole === 1 ? "; one crack scaled by the ratio of the long-crack limits" : "") +
+          (shape.cracksAtHole === 1
+            ? "Bowie's one crack at a hole: quartic fit of the table (Broek, Elementary Engineering Fracture Mechanics; from memory)"
+            : `${TPI}: Bowie's two cracks at a hole, handbook fit (from memory)`) +
           (hasWidth ? "; secant width correction on R + a" : "") +
           "; uniaxial hoop field (conservative under the cylinder's axial stress)",
       };
@@ -146,6 +162,53 @@ export function accurateLimit_mm(shape: CrackShape): number {
   }
 }
 
+/** The orientation of a through-crack in the shell: along the axis (opened by the hoop stress) or around it (by the axial stress). */
+export type CrackOrientation = "axial" | "circumferential";
+
+export interface BulgingFactor {
+  /** The coefficient k in M = √(1 + k·c²/(R·t)). */
+  k: number;
+  /** Largest c²/(R·t) for which the fit is quoted. */
+  range: number;
+  source: string;
+}
+
+/**
+ * Bulging factors for a through-crack of half-length c in a pressurized shell of radius R and
+ * wall t, M = √(1 + k·c²/(R·t)) (short forms of Folias's shallow-shell solutions, from memory):
+ *  - axial crack in a cylinder, k = 1.61 (Folias, Int. J. Fracture Mech. 1 (1965) 104; the
+ *    form BS 7910 and R6 use for M_T; quoted to c²/(R·t) = 50, where it errs high, i.e. safe);
+ *  - circumferential crack in a cylinder, k = 0.32 (Folias / Erdogan & Ratwani, quoted to
+ *    c²/(R·t) ≈ 10);
+ *  - any crack in a sphere, k = 1.93 (Folias, the spherical shell; quoted to c/√(R·t) ≈ 3,
+ *    c²/(R·t) ≈ 10).
+ */
+export function bulgingFactorFor(form: "cylinder" | "sphere", orientation: CrackOrientation): BulgingFactor {
+  if (form === "sphere")
+    return {
+      k: 1.93,
+      range: 10,
+      source: "Folias, through-crack in a pressurized spherical shell: M = √(1 + 1.93·c²/(R·t)) (short form, from memory)",
+    };
+  if (orientation === "circumferential")
+    return {
+      k: 0.32,
+      range: 10,
+      source: "Folias; Erdogan & Ratwani: circumferential through-crack in a cylinder, M = √(1 + 0.32·c²/(R·t)) (short form, from memory)",
+    };
+  return {
+    k: 1.61,
+    range: 50,
+    source:
+      "Folias, Int. J. Fracture Mech. 1 (1965) 104: axial through-crack in a pressurized cylinder, M = √(1 + 1.61·c²/(R·t)) (short form as in BS 7910 and R6, from memory)",
+  };
+}
+
+/** M = √(1 + k·c²/(R·t)). */
+export function bulgingFactor(halfLength_mm: number, shellRadius_mm: number, thickness_mm: number, k: number): number {
+  return Math.sqrt(1 + (k * halfLength_mm * halfLength_mm) / (shellRadius_mm * thickness_mm));
+}
+
 /**
  * Folias's bulging factor for an axial through-crack in a pressurized cylinder,
  * M = √(1 + 1.61·c²/(R·t)), c the crack half-length, R the shell radius, t the wall
@@ -153,5 +216,5 @@ export function accurateLimit_mm(shape: CrackShape): number {
  * It reads higher than later fits for long cracks, which errs on the safe side.
  */
 export function foliasFactor(halfLength_mm: number, shellRadius_mm: number, thickness_mm: number): number {
-  return Math.sqrt(1 + (1.61 * halfLength_mm * halfLength_mm) / (shellRadius_mm * thickness_mm));
+  return bulgingFactor(halfLength_mm, shellRadius_mm, thickness_mm, 1.61);
 }

@@ -86,7 +86,42 @@ export function resolveCheck(parsed: ParsedCheck): { ok: true; value: ResolvedCh
     ) {
       errors.push({ path: "crack.holeRadius_mm", message: "a crack from a hole needs the hole radius (here or as cutout.radius_mm)" });
     }
+    const c = parsed.crack;
+    const cut = parsed.cutout;
+    if (c.openingDistance_mm !== undefined) {
+      if (c.holeRadius_mm === undefined)
+        errors.push({
+          path: "crack.holeRadius_mm",
+          message: "a crack from a fastener hole near the opening needs the fastener hole's radius",
+        });
+      if (
+        cut.kind !== "elliptical-hole" &&
+        cut.kind !== "rounded-rectangle" &&
+        !(cut.kind === "circular-hole" && cut.radius_mm !== undefined)
+      )
+        errors.push({
+          path: "crack.openingDistance_mm",
+          message:
+            "the stress along the crack's path is known for an elliptical opening or a circular one with its radius; give one as the cutout",
+        });
+    } else if (
+      c.geometry === "hole-through" &&
+      cut.kind === "circular-hole" &&
+      cut.radius_mm !== undefined &&
+      c.holeRadius_mm !== undefined &&
+      Math.abs(c.holeRadius_mm - cut.radius_mm) > 1e-9 * cut.radius_mm
+    ) {
+      errors.push({
+        path: "crack.holeRadius_mm",
+        message: `the crack's hole radius (${c.holeRadius_mm} mm) differs from the opening's (${cut.radius_mm} mm): a crack at the opening must use the radius the fatigue check uses; for a crack at a fastener hole near the opening, give crack.openingDistance_mm`,
+      });
+    }
   }
+  if (parsed.fleet && parsed.fleet.logStdDev === undefined && !parsed.evidence)
+    errors.push({
+      path: "fleet.logStdDev",
+      message: "the fleet view needs the scatter of lives: give test evidence, or the log10 standard deviation of life here",
+    });
   if (merged.yield_MPa !== undefined && merged.ultimate_MPa !== undefined && merged.yield_MPa > merged.ultimate_MPa) {
     errors.push({
       path: "material.yield_MPa",

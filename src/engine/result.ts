@@ -1,5 +1,6 @@
 import type { MeanStressCriterion } from "../schema/check.ts";
 import type { EvidenceResult } from "./evidence.ts";
+import type { FleetResult } from "./fleet.ts";
 import type { Section } from "./sections.ts";
 import type { OpeningPictureResult } from "./openings/concentration.ts";
 import type { Step } from "./step.ts";
@@ -25,7 +26,7 @@ export interface CriterionRow {
 export type Verdict = "pass" | "fail" | "refer";
 
 export interface VerdictRow {
-  id: "static" | "fatigue" | "crack" | "evidence" | "leak-before-break" | "external-pressure" | "opening" | (string & {});
+  id: "static" | "fatigue" | "crack" | "evidence" | "leak-before-break" | "external-pressure" | "opening" | "fleet" | (string & {});
   title: string;
   /** "refer": this row cannot be judged here and needs an analysis beyond this screening. */
   status: "pass" | "fail" | "info" | "refer";
@@ -113,18 +114,50 @@ export interface CheckResult {
   };
   crack?: {
     geometry: string;
+    /** The orientations asked for: "axial", "circumferential" or "both". */
+    orientation: "axial" | "circumferential" | "both";
+    /** The orientation with the shorter life; critical_mm, cycles and curve are its. */
+    governingOrientation: "axial" | "circumferential";
     initial_mm: number;
+    detectable_mm: number | null;
     critical_mm: number;
+    /** "toughness" | "collapse" | "interaction" (failure assessment diagram) | "link-up" (the crack reaches an opening). */
     criticalBy: string;
     /** null when the pressure does not cycle (no growth). */
     cycles: number | null;
+    /** The repeat interval when a detectable size is given, else the threshold. */
     inspectionInterval_cycles: number | null;
+    /** Growth from the initial flaw to critical over the inspection factor (shorter orientation). */
+    threshold_cycles: number | null;
+    /** Growth from the detectable size to critical over the factor; null without a detectable size, 0 when it is already critical. */
+    repeatInterval_cycles: number | null;
+    minimumInterval_cycles: number | null;
+    leakBeforeBreakDecides: boolean;
     /** With a history or blocks: the same in passes of the spectrum. */
     passes?: number | null;
     inspectionInterval_passes?: number | null;
+    threshold_passes?: number | null;
+    repeatInterval_passes?: number | null;
     curve: { a_mm: number; n_cycles: number }[];
+    /** A crack growing toward an opening: the same crack grown as if the stress along its path were uniform. */
+    uniformCurve?: { a_mm: number; n_cycles: number }[];
+    uniformCycles?: number | null;
+    uniformCritical_mm?: number;
+    orientations: {
+      orientation: "axial" | "circumferential";
+      stressMax_MPa: number;
+      range_MPa: number;
+      critical_mm: number;
+      criticalBy: string;
+      fad: { Lr: number; Kr: number; LrMax: number; lefm_mm: number; collapse_mm: number };
+      cycles: number | null;
+      threshold_cycles: number | null;
+      repeatInterval_cycles: number | null;
+      curve: { a_mm: number; n_cycles: number }[];
+    }[];
     leakBeforeBreak: { leakBeforeBreak: boolean; throughWallHalfLength_mm: number; criticalHalfLength_mm: number } | null;
   };
+  fleet?: FleetResult;
   /** `designLife_cycles`: the design life the lives are compared with, in cycles (passes × cycles per pass for a spectrum). */
   evidence?: Omit<EvidenceResult, "steps" | "warnings"> & { designLife_cycles: number };
   materialFit?: {

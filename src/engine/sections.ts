@@ -4,7 +4,7 @@ import type { Step } from "./step.ts";
  * @module engine/sections
  * The sections of the calculation, in the order the sheet prints them and a checker redoes
  * them: load, membrane stresses, static strength, the opening, the notch, the curve, fatigue,
- * crack growth, test evidence, the solution. The engine decides which section each step belongs
+ * crack growth, test evidence, the fleet view, the solution. The engine decides which section each step belongs
  * to, so no face keeps its own list; a step that is worked early (the Marin factors of the
  * fatigue curve, the coupon fit) still prints under its own heading, after the membrane stresses.
  */
@@ -18,6 +18,7 @@ export const SECTIONS = [
   "Fatigue life",
   "Crack growth",
   "Test evidence",
+  "Fleet view",
   "Solution",
 ] as const;
 
@@ -58,6 +59,7 @@ const HEADING_OF: Record<string, SectionHeading> = {
   damage: "Fatigue life",
   crack: "Crack growth",
   evidence: "Test evidence",
+  fleet: "Fleet view",
   solve: "Solution",
 };
 

@@ -51,40 +51,7 @@ export function verdictTable(r: CheckResult): {
           : `allowable ${fmt(f.allowableLife_cycles ?? 0)} ${unit} against a design life of ${fmt(f.designLife_cycles)} ${unit} (damage ${fmt(f.damage ?? Infinity, 3)})`,
     margin: f.life_cycles === null ? null : f.damage !== null && f.damage > 0 ? 1 / f.damage - 1 : -1,
   });
-  if (r.crack) {
-    const c = r.crack;
-    // With a spectrum the design life counts passes, so the interval is compared in passes.
-    const interval = c.inspectionInterval_passes !== undefined ? c.inspectionInterval_passes : c.inspectionInterval_cycles;
-    const within =
-      c.inspectionInterval_passes !== undefined
-        ? `${fmt(c.inspectionInterval_passes ?? 0)} passes`
-        : `${fmt(c.inspectionInterval_cycles ?? 0)} cycles`;
-    const covers = interval === null || interval >= f.designLife_cycles;
-    rows.push({
-      id: "crack",
-      title: "Crack growth (Paris law)",
-      status: covers ? "pass" : "info",
-      detail:
-        c.cycles === null
-          ? "the pressure does not cycle, so the crack does not grow"
-          : covers
-            ? `the crack needs ${fmt(c.cycles)} cycles to reach ${fmt(c.critical_mm)} mm: the interval of ${within} covers the design life`
-            : `the crack reaches its critical size of ${fmt(c.critical_mm)} mm (${c.criticalBy}) in ${fmt(c.cycles)} cycles: inspect at least every ${within}`,
-      margin: null,
-    });
-    if (c.leakBeforeBreak) {
-      const l = c.leakBeforeBreak;
-      rows.push({
-        id: "leak-before-break",
-        title: "Leak before break (through-wall crack of length 2t)",
-        status: "info",
-        detail: l.leakBeforeBreak
-          ? `yes: a through-wall crack of half-length ${fmt(l.throughWallHalfLength_mm)} mm is below the critical half-length ${fmt(l.criticalHalfLength_mm)} mm, so the shell should leak before it breaks`
-          : `no: a through-wall crack of half-length ${fmt(l.throughWallHalfLength_mm)} mm exceeds the critical half-length ${fmt(l.criticalHalfLength_mm)} mm, so the shell may break without warning`,
-        margin: l.criticalHalfLength_mm / l.throughWallHalfLength_mm - 1,
-      });
-    }
-  }
+  if (r.crack) rows.push(...crackRows(r));
   if (r.evidence) {
     const ev = r.evidence;
     rows.push({
@@ -96,6 +63,16 @@ export function verdictTable(r: CheckResult): {
           ? `no bound: ${ev.n} test life without an assumed scatter cannot bound a fleet's life`
           : `lower bound ${fmt(ev.lowerBound_cycles)} cycles against a design life of ${fmt(ev.designLife_cycles)} cycles${f.lifeCountedIn === "passes" ? ` (${fmt(f.designLife_cycles)} passes)` : ""}`,
       margin: ev.lowerBound_cycles === null ? null : ev.lowerBound_cycles / ev.designLife_cycles - 1,
+    });
+  }
+  if (r.fleet) {
+    const fl = r.fleet;
+    rows.push({
+      id: "fleet",
+      title: `Fleet of ${fmt(fl.size)} (${fl.basis === "test evidence" ? "from the test evidence" : "from the computed life, assumed scatter"})`,
+      status: "info",
+      detail: `the weakest of ${fmt(fl.size)} is expected to fail at about ${fmt(fl.firstFailure_cycles)} cycles; the chance that one fails before the design life of ${fmt(f.designLife_cycles)} cycles is ${fmt(fl.probabilityAnyFailsBeforeDesignLife, 2)}; 95 % of items exceed ${fmt(fl.percentile5_cycles)} cycles`,
+      margin: null,
     });
   }
   const n = r.notch;
@@ -136,4 +113,71 @@ export function decide(rows: VerdictRow[]): { rows: VerdictRow[]; verdict: Verdi
   const verdict: Verdict = failing.length ? "fail" : referring.length ? "refer" : "pass";
   const text = `${gov.title}: ${gov.detail}`;
   return { rows, verdict, governs: text, governing: { rowId: gov.id, text } };
+}
+
+/**
+ * The crack rows. The crack check passes when the threshold covers the design life, or when an
+ * inspection programme is possible: a repeat interval from the detectable size, no shorter than the
+ * user's minimum. It fails when the threshold falls short and no such interval exists. Leak before
+ * break decides when asked: a shell that leaks first passes without inspections.
+ */
+function crackRows(r: CheckResult): VerdictRow[] {
+  const c = r.crack!;
+  const f = r.fatigue;
+  const rows: VerdictRow[] = [];
+  const inPasses = c.threshold_passes !== undefined;
+  const unit = inPasses ? "passes" : "cycles";
+  const threshold = inPasses ? (c.threshold_passes ?? null) : c.threshold_cycles;
+  const repeat = inPasses ? (c.repeatInterval_passes ?? null) : c.repeatInterval_cycles;
+  const minimum = c.minimumInterval_cycles;
+  const repeatCycles = c.repeatInterval_cycles;
+  const life = f.designLife_cycles;
+  const lbb = c.leakBeforeBreak;
+  const leakDecides = c.leakBeforeBreakDecides && lbb !== null;
+  const which = c.orientation === "both" ? ` (${c.governingOrientation} crack governs)` : "";
+  const critical = `critical ${fmt(c.critical_mm)} mm, set by ${c.criticalBy}`;
+  let status: VerdictRow["status"];
+  let detail: string;
+  let margin: number | null = null;
+  if (c.cycles === null || threshold === null) {
+    status = "pass";
+    detail = `the pressure does not cycle, so the crack does not grow (${critical})`;
+  } else if (threshold >= life) {
+    status = "pass";
+    detail = `the threshold of ${fmt(threshold)} ${unit} covers the design life of ${fmt(life)} ${unit}: no inspection needed within it (${critical})`;
+    margin = threshold / life - 1;
+  } else if (leakDecides && lbb.leakBeforeBreak) {
+    status = "pass";
+    detail = `the threshold of ${fmt(threshold)} ${unit} is short of the design life, but the shell leaks before it breaks, which decides as asked (${critical})`;
+  } else if (repeat === null) {
+    status = "fail";
+    detail = `the threshold of ${fmt(threshold)} ${unit} is short of the design life of ${fmt(life)} ${unit}, and without a detectable crack size no repeat inspection interval can be set (${critical})`;
+    margin = threshold / life - 1;
+  } else if (repeat <= 0) {
+    status = "fail";
+    detail = `the threshold of ${fmt(threshold)} ${unit} is short of the design life, and the detectable size ${fmt(c.detectable_mm ?? 0)} mm is already critical: no inspection can find the crack in time (${critical})`;
+    margin = threshold / life - 1;
+  } else if (minimum !== null && repeatCycles !== null && repeatCycles < minimum) {
+    status = "fail";
+    detail = `the threshold of ${fmt(threshold)} ${unit} is short of the design life, and the repeat interval of ${fmt(repeatCycles)} cycles is shorter than the practical minimum of ${fmt(minimum)} cycles (${critical})`;
+    margin = repeatCycles / minimum - 1;
+  } else {
+    status = "pass";
+    detail = `inspect from ${fmt(threshold)} ${unit} and then every ${fmt(repeat)} ${unit} (detectable ${fmt(c.detectable_mm ?? 0)} mm, ${critical})`;
+    margin = minimum !== null && repeatCycles !== null ? repeatCycles / minimum - 1 : null;
+  }
+  rows.push({ id: "crack", title: `Damage tolerance: crack growth and inspections${which}`, status, detail, margin });
+  if (lbb) {
+    const words = lbb.leakBeforeBreak
+      ? `yes: a through-wall crack of half-length ${fmt(lbb.throughWallHalfLength_mm)} mm is below the critical half-length ${fmt(lbb.criticalHalfLength_mm)} mm, so the shell should leak before it breaks`
+      : `no: a through-wall crack of half-length ${fmt(lbb.throughWallHalfLength_mm)} mm exceeds the critical half-length ${fmt(lbb.criticalHalfLength_mm)} mm, so the shell may break without warning`;
+    rows.push({
+      id: "leak-before-break",
+      title: `Leak before break (through-wall crack of length 2t)${c.leakBeforeBreakDecides ? ", asked to decide" : ""}`,
+      status: c.leakBeforeBreakDecides ? (lbb.leakBeforeBreak ? "pass" : "fail") : "info",
+      detail: words,
+      margin: lbb.criticalHalfLength_mm / lbb.throughWallHalfLength_mm - 1,
+    });
+  }
+  return rows;
 }

@@ -18,12 +18,21 @@ export interface CrackGrowthData {
   /** null where no interval applies: no inspection marks are drawn. */
   inspectionInterval_cycles: number | null;
   initial_mm: number;
+  /** The first inspection, from the initial flaw; with it the marks fall at the threshold and then every repeat interval. */
+  threshold_cycles?: number | null;
+  repeatInterval_cycles?: number | null;
+  /** The size an inspection finds: a dotted line. */
+  detectable_mm?: number | null;
+  /** The same crack grown as if the stress along its path were uniform (a crack running into a gradient). */
+  comparison?: { curve: { a_mm: number; n_cycles: number }[]; label: string } | null;
 }
 
 const GROWTH: SeriesStyle = { color: "#000", dash: DASH.solid, width: 2.6 };
 const CRITICAL: SeriesStyle = { color: "#D55E00", dash: DASH.dashDot, width: 2.2 };
 const INSPECTION: SeriesStyle = { color: "#0072B2", dash: DASH.short, width: 1.3, marker: "diamond", filled: true };
 const INITIAL: SeriesStyle = { color: "#000", dash: "", width: 1, marker: "square", filled: false };
+const COMPARISON: SeriesStyle = { color: "#777", dash: DASH.long, width: 2 };
+const DETECTABLE: SeriesStyle = { color: "#007A5A", dash: DASH.dot, width: 2 };
 /** Beyond this many inspections the marks stop being read one by one; numbering them would only clutter. */
 const MAX_NUMBERED = 12;
 const MAX_MARKS = 200;
@@ -41,19 +50,40 @@ export function crackGrowthPlot(data: CrackGrowthData, opts?: PlotOptions): stri
   const interval =
     isFiniteNumber(data.inspectionInterval_cycles) && data.inspectionInterval_cycles > 0 ? data.inspectionInterval_cycles : NaN;
 
+  const comparison: Point[] = (data.comparison?.curve ?? [])
+    .filter((r) => r && isFiniteNumber(r.n_cycles) && r.n_cycles >= 0 && isFiniteNumber(r.a_mm) && r.a_mm >= 0)
+    .map((r): Point => [r.n_cycles, len(r.a_mm)])
+    .sort((a, b) => a[0] - b[0]);
+  const detectable = len(data.detectable_mm);
+  const threshold = isFiniteNumber(data.threshold_cycles) && data.threshold_cycles > 0 ? data.threshold_cycles : NaN;
+  const repeat = isFiniteNumber(data.repeatInterval_cycles) && data.repeatInterval_cycles > 0 ? data.repeatInterval_cycles : NaN;
   const nEnd = curve.length ? curve[curve.length - 1][0] : NaN;
   const xMax = niceTop(Math.max(...[nEnd, interval].filter(isFiniteNumber), 0) * 1.04);
   const yMax = niceTop(Math.max(...[critical, initial, ...curve.map((p) => p[1])].filter(isFiniteNumber), 0) * 1.1);
   const inspections: number[] = [];
   // Inspections after the crack is critical find nothing to stop: marks run up to the end of the curve.
   const lastUseful = isFiniteNumber(nEnd) ? nEnd : xMax;
-  if (isFiniteNumber(interval))
+  if (isFiniteNumber(threshold)) {
+    inspections.push(threshold);
+    if (isFiniteNumber(repeat))
+      for (let k = 1; threshold + k * repeat <= lastUseful * (1 + 1e-9) && k <= MAX_MARKS; k++) inspections.push(threshold + k * repeat);
+  } else if (isFiniteNumber(interval))
     for (let k = 1; k * interval <= lastUseful * (1 + 1e-9) && k <= MAX_MARKS; k++) inspections.push(k * interval);
 
   const legend: LegendEntry[] = [];
   if (curve.length > 1) legend.push({ label: `crack size a (${lu})`, style: GROWTH });
   if (isFiniteNumber(critical)) legend.push({ label: `critical size a_{c} = ${formatValue(critical)} ${lu}`, style: CRITICAL });
-  if (inspections.length) legend.push({ label: `inspection every ${formatValue(interval)} cycles`, style: INSPECTION });
+  if (comparison.length > 1 && data.comparison) legend.push({ label: data.comparison.label, style: COMPARISON });
+  if (inspections.length)
+    legend.push({
+      label: isFiniteNumber(threshold)
+        ? isFiniteNumber(repeat)
+          ? `inspections from ${formatValue(threshold)}, then every ${formatValue(repeat)} cycles`
+          : `first inspection at ${formatValue(threshold)} cycles`
+        : `inspection every ${formatValue(interval)} cycles`,
+      style: INSPECTION,
+    });
+  if (isFiniteNumber(detectable)) legend.push({ label: `detectable size ${formatValue(detectable)} ${lu}`, style: DETECTABLE });
   if (isFiniteNumber(initial)) legend.push({ label: `initial size a_{0} = ${formatValue(initial)} ${lu}`, style: INITIAL, kind: "marker" });
 
   const heading = opts?.title ?? "Crack growth";
@@ -86,6 +116,21 @@ export function crackGrowthPlot(data: CrackGrowthData, opts?: PlotOptions): stri
     );
     content.push(horizontalLineLabel(frame, y, `a_{c} ${formatValue(critical)} ${lu}`, "left"));
   }
+  if (isFiniteNumber(detectable)) {
+    const y = frame.y(detectable);
+    content.push(
+      polyline(
+        [
+          [frame.area.left, y],
+          [frame.area.right, y],
+        ],
+        DETECTABLE,
+        "detectable-size",
+        ` data-value="${detectable}"`,
+      ),
+    );
+  }
+  for (const piece of frame.trace(comparison)) content.push(polyline(piece, COMPARISON, "comparison-curve"));
   for (const piece of frame.trace(curve)) content.push(polyline(piece, GROWTH, "growth-curve"));
   const start = frame.at(0, initial);
   if (start) content.push(marker("square", start[0], start[1], 11, INITIAL, "initial-size"));

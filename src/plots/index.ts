@@ -8,3 +8,4 @@ export { lifeThicknessPlot, type LifeThicknessData } from "./lifeThickness.ts";
 export { crackGrowthPlot, type CrackGrowthData } from "./crackGrowth.ts";
 export { spectrumPlot, type SpectrumData } from "./spectrum.ts";
 export { edgeStressPlot, openingPicture, type OpeningPictureData } from "./opening.ts";
+export { fleetPlot, type FleetPlotData } from "./fleet.ts";

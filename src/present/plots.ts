@@ -8,6 +8,7 @@ import type { CheckResult } from "../engine/index.ts";
 import {
   crackGrowthPlot,
   edgeStressPlot,
+  fleetPlot,
   haighDiagram,
   lifeThicknessPlot,
   openingPicture,
@@ -26,7 +27,7 @@ export interface WorkedAt {
 }
 
 export interface Figure {
-  id: "haigh" | "sn" | "thickness" | "crack" | "spectrum" | "opening" | "edge-stress";
+  id: "haigh" | "sn" | "thickness" | "crack" | "spectrum" | "opening" | "edge-stress" | "fleet";
   caption: string;
   /** SVG from src/plots, which escapes every text it draws. */
   svg: string;
@@ -106,13 +107,36 @@ export function plotInputs(worked: WorkedAt, r: CheckResult, units: Units, face:
   if (r.crack) {
     figures.push({
       id: "crack",
-      caption: "Crack size against pressure cycles (Paris law), with the critical size and the inspections.",
+      caption: r.crack.uniformCurve
+        ? "Crack size against pressure cycles (Paris law) for the crack growing from the fastener hole toward the opening, beside the same crack in a uniform field: the rising stress along its path makes it accelerate. With the critical size, the detectable size and the inspections (threshold, then every repeat interval)."
+        : "Crack size against pressure cycles (Paris law), with the critical size, the detectable size and the inspections (threshold, then every repeat interval).",
       svg: crackGrowthPlot(
         {
           curve: r.crack.curve,
           critical_mm: r.crack.critical_mm,
           inspectionInterval_cycles: r.crack.inspectionInterval_cycles,
           initial_mm: r.crack.initial_mm,
+          threshold_cycles: r.crack.threshold_cycles,
+          repeatInterval_cycles: r.crack.repeatInterval_cycles,
+          detectable_mm: r.crack.detectable_mm,
+          comparison: r.crack.uniformCurve ? { curve: r.crack.uniformCurve, label: "same crack, uniform stress (hole alone)" } : null,
+        },
+        opts,
+      ),
+    });
+  }
+  if (r.fleet) {
+    figures.push({
+      id: "fleet",
+      caption: `Fleet view: the life of one item and of the first of ${r.fleet.size} to fail, with the test lives, the design life, the 5th percentile and the expected first failure. ${r.fleet.statement}`,
+      svg: fleetPlot(
+        {
+          density: r.fleet.density,
+          testLives_cycles: r.fleet.testLives_cycles,
+          designLife_cycles: r.fleet.designLife_cycles,
+          percentile5_cycles: r.fleet.percentile5_cycles,
+          firstFailure_cycles: r.fleet.firstFailure_cycles,
+          size: r.fleet.size,
         },
         opts,
       ),

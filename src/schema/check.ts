@@ -372,26 +372,83 @@ export const fatigueSchema = z
     }
   });
 
-export const crackSchema = z.strictObject({
-  geometry: z.enum(["center-through", "edge-through", "hole-through"], {
-    error: 'crack geometry must be "center-through", "edge-through" or "hole-through"',
-  }),
-  initial_mm: positive("the initial crack size", 1e4, FLOORS.length),
-  width_mm: positive("the panel width", 1e5, FLOORS.length).optional(),
-  holeRadius_mm: positive("the hole radius", 1e4, FLOORS.length).optional(),
-  cracksAtHole: z
-    .union([z.literal(1), z.literal(2)], { error: "cracksAtHole must be 1 or 2" })
-    .default(2)
-    .describe("2 (default) is conservative; the one-crack factor is interpolated"),
-  inspectionFactor: num("the inspection factor")
-    .min(1, { error: "the inspection factor must be at least 1" })
-    .max(100, { error: "the inspection factor must be at most 100" })
-    .default(2),
-  bulging: z.boolean({ error: "bulging must be true or false" }).default(false),
-  walkerGamma: num("the crack-growth Walker exponent")
-    .gt(0, { error: "the crack-growth Walker exponent must be above 0" })
-    .max(1, { error: "the crack-growth Walker exponent must be at most 1" })
-    .optional(),
+/** Inspection methods with a typical detectable crack size (typical values: verify against a qualified procedure). */
+export const INSPECTION_METHODS = ["bolt-hole-eddy-current", "surface-eddy-current", "detailed-visual", "general-visual"] as const;
+export const CRACK_ORIENTATIONS = ["axial", "circumferential", "both"] as const;
+
+export const crackSchema = z
+  .strictObject({
+    geometry: z.enum(["center-through", "edge-through", "hole-through"], {
+      error: 'crack geometry must be "center-through", "edge-through" or "hole-through"',
+    }),
+    initial_mm: positive("the initial crack size", 1e4, FLOORS.length).describe(
+      "The flaw assumed at the start of service: sets the inspection threshold",
+    ),
+    detectable_mm: positive("the detectable crack size", 1e4, FLOORS.length)
+      .optional()
+      .describe("The crack an inspection finds reliably: sets the repeat interval"),
+    detectableBy: z
+      .enum(INSPECTION_METHODS, { error: `detectableBy must be one of ${INSPECTION_METHODS.join(", ")}` })
+      .optional()
+      .describe("Take the detectable size as the typical value of an inspection method (typical: verify against a qualified procedure)"),
+    width_mm: positive("the panel width", 1e5, FLOORS.length).optional(),
+    holeRadius_mm: positive("the hole radius", 1e4, FLOORS.length).optional(),
+    cracksAtHole: z
+      .union([z.literal(1), z.literal(2)], { error: "cracksAtHole must be 1 or 2" })
+      .default(2)
+      .describe("2 (default) is conservative"),
+    orientation: z
+      .enum(CRACK_ORIENTATIONS, { error: 'crack orientation must be "axial", "circumferential" or "both"' })
+      .optional()
+      .describe('Default "both" when an axial extra stress is given, "axial" otherwise'),
+    openingDistance_mm: positive("the distance from the fastener hole to the opening", 1e4, FLOORS.length)
+      .optional()
+      .describe(
+        "Centre of the fastener hole to the opening's edge, on the axial line through the opening's highest stress; the crack grows toward the opening",
+      ),
+    inspectionFactor: num("the inspection factor")
+      .min(1, { error: "the inspection factor must be at least 1" })
+      .max(100, { error: "the inspection factor must be at most 100" })
+      .default(2),
+    minimumInterval_cycles: positive("the shortest practical inspection interval", 1e12, FLOORS.cycles)
+      .optional()
+      .describe("A repeat interval shorter than this fails the crack check"),
+    leakBeforeBreak: z
+      .enum(["inform", "decide"], { error: 'leakBeforeBreak must be "inform" or "decide"' })
+      .default("inform")
+      .describe('"decide": a vessel that leaks before it breaks passes the crack check without inspections'),
+    bulging: z.boolean({ error: "bulging must be true or false" }).default(true).describe("Off is unconservative and warns"),
+    walkerGamma: num("the crack-growth Walker exponent")
+      .gt(0, { error: "the crack-growth Walker exponent must be above 0" })
+      .max(1, { error: "the crack-growth Walker exponent must be at most 1" })
+      .optional(),
+  })
+  .superRefine((c, ctx) => {
+    if (c.detectable_mm !== undefined && c.detectableBy !== undefined)
+      ctx.addIssue({ code: "custom", path: ["detectableBy"], message: "give either detectable_mm or detectableBy, not both" });
+    if (c.openingDistance_mm !== undefined && c.geometry !== "hole-through")
+      ctx.addIssue({
+        code: "custom",
+        path: ["openingDistance_mm"],
+        message: 'a crack growing toward an opening starts at a fastener hole: choose the "hole-through" geometry',
+      });
+    if (c.openingDistance_mm !== undefined && c.holeRadius_mm !== undefined && c.openingDistance_mm <= c.holeRadius_mm)
+      ctx.addIssue({
+        code: "custom",
+        path: ["openingDistance_mm"],
+        message: "the fastener hole's centre must lie farther from the opening than its radius, or the hole cuts into the opening",
+      });
+  });
+
+export const fleetSchema = z.strictObject({
+  size: z
+    .number({ error: "the fleet size must be a number" })
+    .int({ error: "the fleet size must be a whole number" })
+    .min(1, { error: "the fleet size must be at least 1" })
+    .max(1e7, { error: "the fleet size must be at most 10 000 000" }),
+  logStdDev: positive("the fleet's log standard deviation of life", 5)
+    .optional()
+    .describe("Scatter of log10 life; needed only without test evidence"),
 });
 
 export const evidenceSchema = z.strictObject({
@@ -439,6 +496,7 @@ export const checkSchema = z.strictObject({
     .optional(),
   crack: crackSchema.optional(),
   evidence: evidenceSchema.optional(),
+  fleet: fleetSchema.optional(),
   solve: z
     .strictObject({
       for: z.enum(["thickness", "pressure"], { error: 'solve for "thickness" or "pressure"' }),

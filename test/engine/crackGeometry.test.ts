@@ -2,6 +2,7 @@ import { describe, expect, it } from "vitest";
 import fc from "fast-check";
 import {
   EDGE_HALF_PLANE,
+  bowieOneCrack,
   bowieTwoCracks,
   foliasFactor,
   geometryFactor,
@@ -81,11 +82,13 @@ describe("through-cracks at a hole", () => {
     // s → 0: an edge crack at the hole's concentration, 3 × 1.1215 = 3.3645; s → 1: a centre crack of half-length R + a.
     expect(bowieTwoCracks(0)).toBeCloseTo(3 * 1.1215, 4);
     expect(bowieTwoCracks(1)).toBe(1);
-    // One crack: same short-crack limit; long-crack limit √(1/2), i.e. a centre crack of half-length R + a/2.
-    expect(geometryFactor(1e-9, hole(5, 1))).toBeCloseTo(3 * 1.1215, 4);
+    // One crack (the quartic fit of the table): short-crack limit 3.39 in the table (3 × 1.1215 = 3.36 exactly), long-crack
+    // limit √(1/2) = 0.7071, a centre crack of half-length R + a/2; the fit holds both within 1 %.
+    expect(Math.abs(geometryFactor(1e-9, hole(5, 1)) / 3.39 - 1)).toBeLessThan(0.01);
     const long = 1e9;
-    expect(geometryFactor(long, hole(5, 1)) * Math.sqrt(long)).toBeCloseTo(Math.sqrt(long / 2 + 5), 3);
-    expect(geometryFactor(long, hole(5, 2)) * Math.sqrt(long)).toBeCloseTo(Math.sqrt(long + 5), 3);
+    expect(Math.abs(geometryFactor(long, hole(5, 1)) / Math.SQRT1_2 - 1)).toBeLessThan(0.001);
+    const twoLong = 1e9;
+    expect(geometryFactor(twoLong, hole(5, 2)) * Math.sqrt(twoLong)).toBeCloseTo(Math.sqrt(twoLong + 5), 3);
   });
 
   it("matches Bowie's two-crack values in the middle range", () => {
@@ -98,6 +101,34 @@ describe("through-cracks at a hole", () => {
     ]) {
       expect(Math.abs(geometryFactor(ratio * 4, hole(4, 2)) / F - 1)).toBeLessThan(0.01);
     }
+  });
+
+  it("follows Bowie's one-crack table across the whole range", () => {
+    // Bowie (1956) one crack at a hole, uniaxial tension, F against a/R (as tabulated in Broek, Elementary
+    // Engineering Fracture Mechanics, and Rooke & Cartwright; from memory).
+    const table: [number, number][] = [
+      [0.1, 2.73],
+      [0.2, 2.3],
+      [0.3, 2.04],
+      [0.4, 1.86],
+      [0.5, 1.73],
+      [0.6, 1.64],
+      [0.8, 1.47],
+      [1, 1.37],
+      [1.5, 1.18],
+      [2, 1.06],
+      [3, 0.94],
+      [5, 0.81],
+      [10, 0.75],
+    ];
+    for (const [ratio, F] of table) {
+      const Y = geometryFactor(ratio * 4, hole(4, 1));
+      expect(Math.abs(Y / F - 1)).toBeLessThan(0.035); // within 3.5 % everywhere …
+      expect(Y / F - 1).toBeGreaterThan(-0.01); // … and never more than 1 % below the table
+      if (ratio <= 3) expect(Math.abs(Y / F - 1)).toBeLessThan(0.01); // the fit itself, up to a = 3R
+    }
+    // The mid-range, where the former interpolation between the limits read 9 % low: a/R = 1 gives 1.37, not 1.25.
+    expect(bowieOneCrack(0.5)).toBeCloseTo(1.365, 3);
   });
 
   it("applies the secant correction on R + a in a strip", () => {

@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { crackGrowthPlot, type CrackGrowthData } from "../../src/plots/crackGrowth.ts";
+import { formatValue } from "../../src/plots/format.ts";
 import { assertNoArtefacts, assertWellFormed, attr, axisMap, axisRead, elements, pathPoints, tickLabels, visibleText } from "./svgTools.ts";
 
 // An invented a–N curve from 1 mm to a critical 14 mm in 52 000 cycles.
@@ -91,5 +92,33 @@ describe("crack growth", () => {
       expect(s).toContain("&lt;b&gt;crack&lt;/b&gt;");
     }
     expect(visibleText(crackGrowthPlot(bad[0]))).toContain("no growth curve to plot");
+  });
+});
+
+describe("crack growth with an inspection programme and a gradient", () => {
+  // The same invented curve; inspections from a threshold of 20 000 cycles, then every 12 000; a uniform-field
+  // comparison that grows at a third of the rate.
+  const svg = crackGrowthPlot({
+    ...base,
+    threshold_cycles: 20000,
+    repeatInterval_cycles: 12000,
+    detectable_mm: 2.5,
+    comparison: { curve: base.curve.map((p) => ({ n_cycles: 3 * p.n_cycles, a_mm: p.a_mm })), label: "same crack, uniform stress" },
+  });
+
+  it("marks the threshold and then every repeat interval", () => {
+    assertWellFormed(svg);
+    expect(elements(svg, 'class="inspection"').map((l) => attr(l, "data-value"))).toEqual([20000, 32000, 44000]);
+    expect(visibleText(svg)).toContain(`inspections from ${formatValue(20000)}, then every ${formatValue(12000)} cycles`);
+  });
+
+  it("draws the detectable size and the uniform-field comparison", () => {
+    const [line] = elements(svg, 'class="detectable-size"');
+    expect(pathPoints(line)[0][1]).toBeCloseTo(axisMap(svg, "y", "linear")(2.5), 1);
+    const rx = axisRead(svg, "x", "linear");
+    const ry = axisRead(svg, "y", "linear");
+    const pts = elements(svg, 'class="comparison-curve"').flatMap(pathPoints);
+    expect(pts.length).toBeGreaterThan(5);
+    for (const [px, py] of pts) expect(ry(py)).toBeCloseTo(sizeAt(rx(px) / 3), 0);
   });
 });

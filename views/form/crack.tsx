@@ -1,3 +1,5 @@
+import { INSPECTION_METHODS } from "../../src/schema/check.ts";
+import { TYPICAL_DETECTABLE_MM } from "../../src/materials/inspection.ts";
 import { NumberInput, Select, Toggle } from "./controls.tsx";
 import type { FormState } from "./state.ts";
 
@@ -42,6 +44,61 @@ export function CrackSection({ s }: { s: FormState }) {
               ]}
             />
           </div>
+          <div class="when-hole">
+            <NumberInput
+              s={s}
+              name="crack.openingDistance"
+              label="Fastener hole to the opening's edge"
+              hint="Optional: centre of the hole to the opening's edge, on its line of highest stress; the crack grows toward the opening."
+            />
+          </div>
+          <Select
+            s={s}
+            name="crack.orientation"
+            label="Orientation"
+            fallback=""
+            options={[
+              { value: "", label: "Default (both with an axial extra stress)" },
+              { value: "axial", label: "Along the axis (hoop stress opens it)" },
+              { value: "circumferential", label: "Around the shell (axial stress opens it)" },
+              { value: "both", label: "Both; the shorter life governs" },
+            ]}
+          />
+          <NumberInput
+            s={s}
+            name="crack.detectable"
+            label="Detectable size"
+            hint="The size an inspection finds reliably: sets the repeat interval."
+          />
+          <Select
+            s={s}
+            name="crack.detectableBy"
+            label="…or a typical size by method"
+            fallback=""
+            options={[
+              { value: "", label: "None chosen" },
+              ...INSPECTION_METHODS.map((m) => ({
+                value: m,
+                label: `${TYPICAL_DETECTABLE_MM[m].label}: ${TYPICAL_DETECTABLE_MM[m].size_mm} mm (typical, verify against a qualified procedure)`,
+              })),
+            ]}
+          />
+          <NumberInput
+            s={s}
+            name="crack.minimumInterval"
+            label="Shortest practical interval (cycles)"
+            hint="Optional: a shorter repeat interval fails the check."
+          />
+          <Select
+            s={s}
+            name="crack.leakBeforeBreak"
+            label="Leak before break"
+            fallback="inform"
+            options={[
+              { value: "inform", label: "Inform only" },
+              { value: "decide", label: "Decides (vessels): a leak first passes without inspections" },
+            ]}
+          />
           <NumberInput
             s={s}
             name="crack.inspectionFactor"
@@ -52,7 +109,7 @@ export function CrackSection({ s }: { s: FormState }) {
         </div>
         <label class="check">
           <input type="checkbox" name="crack.bulging" value="on" checked={Boolean(s.values["crack.bulging"])} />
-          Allow for bulging of a pressurized crack
+          Allow for bulging of a pressurized crack (clearing it is unconservative)
         </label>
       </div>
     </fieldset>

@@ -37,6 +37,20 @@ export function EvidenceSection({ s }: { s: FormState }) {
           />
         </div>
       </div>
+      <div class="grid">
+        <NumberInput
+          s={s}
+          name="fleet.size"
+          label="Items in service (fleet)"
+          hint="Optional: the fleet view of the weakest of that many."
+        />
+        <NumberInput
+          s={s}
+          name="fleet.logStdDev"
+          label="Fleet: standard deviation of log₁₀ life"
+          hint="Needed only without test evidence (the computed life is then the median)."
+        />
+      </div>
     </fieldset>
   );
 }

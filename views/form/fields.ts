@@ -50,6 +50,11 @@ export const NUMBER_FIELDS = {
   "crack.width": { path: "crack.width_mm", quantity: "length" },
   "crack.holeRadius": { path: "crack.holeRadius_mm", quantity: "length" },
   "crack.inspectionFactor": { path: "crack.inspectionFactor", quantity: "plain" },
+  "crack.detectable": { path: "crack.detectable_mm", quantity: "length" },
+  "crack.openingDistance": { path: "crack.openingDistance_mm", quantity: "length" },
+  "crack.minimumInterval": { path: "crack.minimumInterval_cycles", quantity: "plain" },
+  "fleet.size": { path: "fleet.size", quantity: "plain" },
+  "fleet.logStdDev": { path: "fleet.logStdDev", quantity: "plain" },
   "evidence.reliability": { path: "evidence.reliability", quantity: "plain" },
   "evidence.confidence": { path: "evidence.confidence", quantity: "plain" },
   "evidence.logStdDev": { path: "evidence.assumedLogStdDev", quantity: "plain" },
@@ -114,6 +119,9 @@ export const CHOICE_FIELDS = [
   "fatigue.surface",
   "crack.geometry",
   "crack.cracksAtHole",
+  "crack.detectableBy",
+  "crack.orientation",
+  "crack.leakBeforeBreak",
 ] as const;
 
 /** Every error slot the form shows for these block rows: a recalculation refreshes each, so an error put right disappears. */

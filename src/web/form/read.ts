@@ -61,6 +61,9 @@ export function readForm(v: FormValues, units: Units): ReadForm {
   const yieldFactor = number("static.yieldFactor");
   if (yieldFactor !== undefined) doc.static = { yieldFactor };
   if (v["crack.on"]) doc.crack = readCrack(v, r);
+  const fleetSize = number("fleet.size");
+  if (fleetSize !== undefined || number("fleet.logStdDev") !== undefined)
+    doc.fleet = { size: fleetSize, logStdDev: number("fleet.logStdDev") };
   if (v["evidence.on"]) {
     bind("evidence.lives", "evidence.lives_cycles");
     doc.evidence = {
@@ -218,7 +221,14 @@ function readCrack(v: FormValues, r: Readers): Obj {
     holeRadius_mm: geometry === "hole-through" ? r.number("crack.holeRadius") : undefined,
     cracksAtHole: geometry === "hole-through" && atHole !== undefined ? (parseNumber(atHole) ?? atHole) : undefined,
     inspectionFactor: r.number("crack.inspectionFactor"),
-    bulging: v["crack.bulging"] ? true : undefined,
+    detectable_mm: r.number("crack.detectable"),
+    detectableBy: r.pick("crack.detectableBy", "crack.detectableBy") || undefined,
+    orientation: r.pick("crack.orientation", "crack.orientation") || undefined,
+    openingDistance_mm: geometry === "hole-through" ? r.number("crack.openingDistance") : undefined,
+    minimumInterval_cycles: r.number("crack.minimumInterval"),
+    leakBeforeBreak: r.pick("crack.leakBeforeBreak", "crack.leakBeforeBreak") || undefined,
+    // Bulging is on unless the box is cleared (off is unconservative).
+    bulging: v["crack.bulging"] ? undefined : false,
   };
 }
 

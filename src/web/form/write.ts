@@ -100,9 +100,14 @@ export function writeForm(doc: unknown, units: Units): FormValues {
     v["crack.on"] = "on";
     choose("crack.geometry", "crack.geometry");
     choose("crack.cracksAtHole", "crack.cracksAtHole");
-    if (at("crack.bulging") === true) v["crack.bulging"] = "on";
+    if (at("crack.bulging") !== false) v["crack.bulging"] = "on";
+    choose("crack.detectableBy", "crack.detectableBy");
+    choose("crack.orientation", "crack.orientation");
+    choose("crack.leakBeforeBreak", "crack.leakBeforeBreak");
     for (const name of Object.keys(NUMBER_FIELDS) as NumberFieldName[]) if (name.startsWith("crack.")) putNumber(name);
   }
+  putNumber("fleet.size");
+  putNumber("fleet.logStdDev");
   if (at("evidence") !== undefined) {
     v["evidence.on"] = "on";
     v["evidence.lives"] = listText(at("evidence.lives_cycles"), "plain", units);

@@ -1,0 +1,86 @@
+/**
+ * The stress along the path of a crack that grows from a fastener hole toward an opening.
+ *
+ * An opening's field along a path is given as influence coefficients, as its boundary points are
+ * (see concentration.ts): the stress opening an axial crack (the hoop-direction stress) at a point
+ * of the path is σ = hoopCoeff·σ_hoop + axialCoeff·σ_axial. Any solver of an opening's field can
+ * supply such a function; until one does, the elliptical and circular openings get Inglis's and
+ * Kirsch's closed forms here.
+ *
+ * Inglis's elliptical hole, semi-axes A along the axis (x) and B around the hoop (y), in remote
+ * stresses σx∞ (axial) and σy∞ (hoop), on the x-axis beyond the vertex (x ≥ A): Muskhelishvili's
+ * potentials with the mapping z = R(ζ + m/ζ), R = (A + B)/2, m = (A − B)/(A + B), for a remote
+ * tension p at angle α (c = e^{2iα}):
+ *   φ(ζ) = (pR/4)·[ζ + (2c − m)/ζ],
+ *   ψ(ζ) = −(pR/2)·[c·ζ + ((1 − mc + m²)ζ² − c)/(ζ(ζ² − m))]
+ * (Muskhelishvili, Some Basic Problems of the Mathematical Theory of Elasticity, §82; from
+ * memory). σx + σy = 4 Re Φ, σy − σx + 2iτ = 2[z̄Φ′(z) + Ψ(z)], Φ = φ′/ω′, Ψ = ψ′/ω′. On the axis
+ * every quantity is real. At the vertex σy = (1 + 2A/B)·σy∞ − σx∞ (Inglis 1913); with A = B
+ * (m = 0) the potentials are Kirsch's.
+ */
+import type { PathField } from "./crack.ts";
+import { discretize, type Outline } from "./openings/geometry.ts";
+import { buildOperator, solve, stressAt } from "./openings/solver.ts";
+
+/** σy on the x-axis at x ≥ A for a unit remote tension along y (c = −1) or along x (c = +1). */
+function inglisAxis(x_mm: number, A_mm: number, B_mm: number, c: 1 | -1): number {
+  const R = (A_mm + B_mm) / 2;
+  const m = (A_mm - B_mm) / (A_mm + B_mm);
+  const X = Math.max(x_mm, A_mm) / R;
+  const zeta = (X + Math.sqrt(Math.max(X * X - 4 * m, 0))) / 2;
+  const z2 = zeta * zeta;
+  const z3 = z2 * zeta;
+  const w1 = R * (1 - m / z2); // ω′
+  const w2 = (2 * R * m) / z3; // ω″
+  const f1 = (R / 4) * (1 - (2 * c - m) / z2); // φ′
+  const f2 = (R / 4) * ((2 * (2 * c - m)) / z3); // φ″
+  const k = 1 - m * c + m * m;
+  const N = k * z2 - c;
+  const D = z3 - m * zeta;
+  const dQ = (2 * k * zeta * D - N * (3 * z2 - m)) / (D * D);
+  const p1 = -(R / 2) * (c + dQ); // ψ′
+  const Phi = f1 / w1;
+  const dPhi = (f2 * w1 - f1 * w2) / (w1 * w1) / w1; // Φ′(z)
+  const Psi = p1 / w1;
+  const x = R * (zeta + m / zeta);
+  return 2 * Phi + x * dPhi + Psi;
+}
+
+/**
+ * The hoop-direction stress on the axial line beyond an elliptical opening's vertex, at distance s
+ * from its edge, as coefficients of the remote hoop and axial stresses.
+ */
+export function ellipseAxisField(halfAxisAlongAxial_mm: number, halfAxisAlongHoop_mm: number): (s_mm: number) => PathField {
+  const A = halfAxisAlongAxial_mm;
+  const B = halfAxisAlongHoop_mm;
+  return (s) => ({ hoopCoeff: inglisAxis(A + Math.max(s, 0), A, B, -1), axialCoeff: inglisAxis(A + Math.max(s, 0), A, B, 1) });
+}
+
+export const INGLIS_SOURCE =
+  "Inglis (1913) elliptical hole, stress along the axis by Muskhelishvili's potentials (§82, from memory); Kirsch (1898) for a circle";
+
+/**
+ * The field along a straight path out from an opening of any smooth outline, by the plane-elasticity
+ * solver of openings/ (x along the axis, y around the hoop): two unit solutions, remote hoop stress
+ * and remote axial stress, read at each point of the path as the stress normal to it. This is how an
+ * opening the closed forms do not cover plugs into the crack's path.
+ */
+export function solvedPathField(
+  outline: Outline,
+  start: [number, number],
+  direction: [number, number] = [1, 0],
+): (s_mm: number) => PathField {
+  const op = buildOperator(discretize([outline]));
+  const hoop = solve(op, { sxx: 0, syy: 1 });
+  const axial = solve(op, { sxx: 1, syy: 0 });
+  const len = Math.hypot(direction[0], direction[1]);
+  const [dx, dy] = [direction[0] / len, direction[1] / len];
+  // Normal to the path: n = (−dy, dx); σnn = n·σ·n.
+  const [nx, ny] = [-dy, dx];
+  const normal = (q: { sxx: number; syy: number; sxy: number }) => nx * nx * q.sxx + ny * ny * q.syy + 2 * nx * ny * q.sxy;
+  return (s) => {
+    const px = start[0] + dx * Math.max(s, 0);
+    const py = start[1] + dy * Math.max(s, 0);
+    return { hoopCoeff: normal(stressAt(hoop, px, py)), axialCoeff: normal(stressAt(axial, px, py)) };
+  };
+}

@@ -1,0 +1,245 @@
+/**
+ * The damage-tolerance assessment of a check: the crack grown in each orientation that applies,
+ * the governing one (the shorter life), and the inspection programme (threshold from the initial
+ * flaw, repeat interval from the detectable size).
+ *
+ * Orientations: a crack along the axis is opened by the hoop stress, a crack around the shell by
+ * the axial stress (membrane axial plus any axial extra: bending, end loads). Both are grown where
+ * the axial stress is not negligible; by default both when an axial extra stress is given.
+ *
+ * Spectrum loading: the Paris damage-equivalent range Δσ_eq = (Σ nᵢ·Δσᵢ^m / Σ nᵢ)^(1/m) grows the
+ * crack as the spectrum does, cycle for cycle, when the factors vary slowly (no load interaction;
+ * Schijve, Fatigue of Structures and Materials, from memory). The compressive part of each cycle
+ * is left out, as for a single cycle.
+ */
+import { TYPICAL_DETECTABLE_MM, TYPICAL_DETECTABLE_SOURCE } from "../materials/inspection.ts";
+import type { ResolvedCheck } from "./input.ts";
+import { crackGrowth, type CrackGradient, type CrackResult } from "./crack.ts";
+import type { CrackOrientation } from "./crackGeometry.ts";
+import { ellipseAxisField, INGLIS_SOURCE } from "./crackPath.ts";
+import { discretize } from "./openings/geometry.ts";
+import { outlineOf } from "./openings/index.ts";
+import { buildOperator, solve, stressAt } from "./openings/solver.ts";
+import type { Evaluation } from "./evaluate.ts";
+import type { Load } from "./load.ts";
+import type { CheckResult } from "./result.ts";
+import { fmt, step, type Step } from "./step.ts";
+
+export interface DamageTolerance {
+  crack: NonNullable<CheckResult["crack"]>;
+  steps: Step[];
+  warnings: string[];
+}
+
+/** Equivalent range and peak of the stress opening the crack, per orientation; spectrum-aware. */
+function drive(load: Load, e: Evaluation, orientation: CrackOrientation, m: number): { max: number; min: number; step?: Step } {
+  const peak = orientation === "axial" ? e.hoopMax : e.axialMax;
+  const valley = orientation === "axial" ? e.hoopMin : e.axialMin;
+  if (!load.isSpectrum) return { max: peak, min: valley };
+  // Stress per unit pressure in this orientation; the axial extra is taken in proportion to the pressure.
+  const perPressure = orientation === "axial" ? e.unit.hoop : e.hoopMax > 0 ? (e.axialMax / e.hoopMax) * e.unit.hoop : e.unit.axial;
+  let sum = 0;
+  let n = 0;
+  for (const c of load.cycles) {
+    const hi = Math.max(perPressure * (c.mean + c.range / 2), 0);
+    const lo = Math.max(perPressure * (c.mean - c.range / 2), 0);
+    sum += c.count * Math.max(hi - lo, 0) ** m;
+    n += c.count;
+  }
+  const range = (sum / n) ** (1 / m);
+  const name = orientation === "axial" ? "hoop" : "axial";
+  return {
+    max: peak,
+    min: peak - range,
+    step: step(
+      orientation === "axial" ? "crack-equivalent-range" : "crack-circ-equivalent-range",
+      `Damage-equivalent nominal ${name} range of the spectrum`,
+      "Δσ_eq = (Σ nᵢ·Δσᵢ^m / Σ nᵢ)^(1/m), compressive parts left out",
+      `Δσ_eq = (Σ over ${load.cycles.length} cycle groups / ${fmt(n)})^(1/${fmt(m)})`,
+      range,
+      "MPa",
+      "Paris law without load interaction; Schijve, Fatigue of Structures and Materials (from memory); compressive part of each cycle left out (crack closed; ASTM E647 convention, common practice)",
+    ),
+  };
+}
+
+/** The field along the path toward the opening, as a multiplier of the nominal hoop stress at peak. */
+function openingGradient(input: ResolvedCheck, e: Evaluation, holeRadius_mm: number, distance_mm: number): CrackGradient {
+  const cut = input.cutout;
+  const [A, B] =
+    cut.kind === "elliptical-hole"
+      ? [cut.halfAxisAlongAxial_mm, cut.halfAxisAlongHoop_mm]
+      : cut.kind === "circular-hole" && cut.radius_mm !== undefined
+        ? [cut.radius_mm, cut.radius_mm]
+        : [NaN, NaN];
+  let field = ellipseAxisField(A, B);
+  let source = INGLIS_SOURCE;
+  if (cut.kind === "rounded-rectangle") {
+    // The plane-elasticity solver of openings/ (x around the hoop, y along the axis there), read on the axial line
+    // beyond the end of the opening's axial half-length.
+    const op = buildOperator(discretize([outlineOf(cut)]));
+    const hoop = solve(op, { sxx: 1, syy: 0 });
+    const axial = solve(op, { sxx: 0, syy: 1 });
+    const end = cut.halfLengthAlongAxial_mm;
+    field = (s) => ({ hoopCoeff: stressAt(hoop, 0, end + Math.max(s, 0)).sxx, axialCoeff: stressAt(axial, 0, end + Math.max(s, 0)).sxx });
+    source =
+      "the opening's field by the plane-elasticity solver (Sherman–Lauricella integral equation), on the axial line beyond the opening";
+  }
+  const lambda = e.hoopMax > 0 ? e.axialMax / e.hoopMax : 0;
+  const ligament = distance_mm - holeRadius_mm;
+  return {
+    field: (x) => {
+      const f = field(ligament - x);
+      return f.hoopCoeff + lambda * f.axialCoeff;
+    },
+    ligament_mm: ligament,
+    source: `${source}, with the biaxial ratio λ = ${fmt(lambda)}; the fastener hole's Kirsch field taken in the local stress (the hole small against the opening)`,
+  };
+}
+
+/** Grow the crack of the check in each orientation that applies and set out the inspection programme. */
+export function damageTolerance(input: ResolvedCheck, e: Evaluation, load: Load): DamageTolerance {
+  const c = input.crack!;
+  const mat = input.material;
+  const steps: Step[] = [];
+  const warnings: string[] = [];
+  const requested = c.orientation ?? (input.axialExtra ? "both" : "axial");
+  const orientations: CrackOrientation[] = requested === "both" ? ["axial", "circumferential"] : [requested];
+  const fastener = c.openingDistance_mm !== undefined;
+  const holeRadius = c.holeRadius_mm ?? (input.cutout.kind === "circular-hole" ? input.cutout.radius_mm : undefined);
+
+  let detectable = c.detectable_mm;
+  if (c.detectableBy) {
+    const t = TYPICAL_DETECTABLE_MM[c.detectableBy];
+    detectable = t.size_mm;
+    steps.push(
+      step(
+        "crack-detectable",
+        `Detectable crack size: typical for ${t.label}`,
+        "a_det (chosen inspection method)",
+        `a_det = ${fmt(t.size_mm)} mm`,
+        t.size_mm,
+        "mm",
+        TYPICAL_DETECTABLE_SOURCE,
+      ),
+    );
+    warnings.push(
+      `The detectable crack size (${fmt(t.size_mm)} mm) is a typical value for ${t.label}: verify it against a qualified inspection procedure.`,
+    );
+  }
+
+  const results: CrackResult[] = [];
+  for (const o of orientations) {
+    const d = drive(load, e, o, mat.parisM!);
+    if (d.step) steps.push(d.step);
+    const gradient = fastener && o === "axial" ? openingGradient(input, e, holeRadius!, c.openingDistance_mm!) : undefined;
+    results.push(
+      crackGrowth({
+        geometry: c.geometry,
+        initial_mm: c.initial_mm,
+        detectable_mm: detectable,
+        width_mm: c.width_mm,
+        holeRadius_mm: holeRadius,
+        cracksAtHole: c.cracksAtHole,
+        orientation: o,
+        bulging: c.bulging,
+        form: input.shell.form,
+        shellRadius_mm: e.radii.mean_mm,
+        thickness_mm: e.thickness_mm,
+        stressMax_MPa: d.max,
+        stressMin_MPa: d.min,
+        yield_MPa: mat.yield_MPa,
+        ultimate_MPa: mat.ultimate_MPa,
+        parisC: mat.parisC!,
+        parisM: mat.parisM!,
+        toughness_MPaSqrtM: mat.toughness_MPaSqrtM!,
+        walkerGamma: c.walkerGamma,
+        inspectionFactor: c.inspectionFactor,
+        gradient,
+        leakCheck: o === "axial",
+      }),
+    );
+    if (fastener && o === "circumferential")
+      warnings.push(
+        "The circumferential crack from the fastener hole grows away from the opening's line of highest stress; it is grown in the uniform axial field (the opening's field along its path is not modelled).",
+      );
+  }
+  for (const r of results) {
+    steps.push(...r.steps);
+    warnings.push(...r.warnings);
+  }
+  // The shorter life governs; with no growth, the smaller critical size.
+  const life = (r: CrackResult) => r.cycles ?? Infinity;
+  const gov = results.reduce((a, b) => (life(b) < life(a) || (life(b) === life(a) && b.critical_mm < a.critical_mm) ? b : a));
+  const minOf = (xs: (number | null)[]) => {
+    const v = xs.filter((x): x is number => x !== null);
+    return v.length ? Math.min(...v) : null;
+  };
+  const threshold = minOf(results.map((r) => r.threshold_cycles));
+  const repeat = minOf(results.map((r) => r.repeatInterval_cycles));
+  if (results.length > 1) {
+    const other = results.find((r) => r !== gov)!;
+    steps.push(
+      step(
+        "crack-governs",
+        `Governing orientation: the ${gov.orientation} crack (the shorter life)`,
+        "N = min(N_axial, N_circumferential); threshold and repeat interval the shorter of each",
+        `${gov.orientation}: ${gov.cycles === null ? "no growth" : fmt(gov.cycles)} cycles; ${other.orientation}: ${other.cycles === null ? "no growth" : fmt(other.cycles)} cycles`,
+        gov.cycles,
+        "cycles",
+        "Damage-tolerance practice: every credible crack orientation is assessed and the shortest life governs (common practice)",
+      ),
+    );
+  }
+  const lbb = results.find((r) => r.orientation === "axial")?.leakBeforeBreak ?? null;
+  const interval = detectable !== undefined ? repeat : threshold;
+  const crack: NonNullable<CheckResult["crack"]> = {
+    geometry: c.geometry,
+    orientation: requested,
+    governingOrientation: gov.orientation,
+    initial_mm: c.initial_mm,
+    detectable_mm: detectable ?? null,
+    critical_mm: gov.critical_mm,
+    criticalBy: gov.criticalBy,
+    cycles: gov.cycles,
+    inspectionInterval_cycles: interval,
+    threshold_cycles: threshold,
+    repeatInterval_cycles: detectable !== undefined ? repeat : null,
+    minimumInterval_cycles: c.minimumInterval_cycles ?? null,
+    leakBeforeBreakDecides: c.leakBeforeBreak === "decide",
+    curve: gov.curve,
+    ...(gov.uniform
+      ? { uniformCurve: gov.uniform.curve, uniformCycles: gov.uniform.cycles, uniformCritical_mm: gov.uniform.critical_mm }
+      : {}),
+    orientations: results.map((r) => ({
+      orientation: r.orientation,
+      stressMax_MPa: r.stressMax_MPa,
+      range_MPa: r.range_MPa,
+      critical_mm: r.critical_mm,
+      criticalBy: r.criticalBy,
+      fad: r.fad,
+      cycles: r.cycles,
+      threshold_cycles: r.threshold_cycles,
+      repeatInterval_cycles: r.repeatInterval_cycles,
+      curve: r.curve,
+    })),
+    leakBeforeBreak: lbb,
+  };
+  if (load.isSpectrum) {
+    const perPass = load.cycles.reduce((s, x) => s + x.count, 0);
+    const passes = (x: number | null) => (x === null ? null : x / perPass);
+    crack.passes = passes(gov.cycles);
+    crack.inspectionInterval_passes = passes(interval);
+    crack.threshold_passes = passes(threshold);
+    crack.repeatInterval_passes = passes(crack.repeatInterval_cycles);
+    if (c.walkerGamma !== undefined)
+      warnings.push(
+        "with a spectrum the crack grows under the damage-equivalent range from the peak down; the R-ratio effect is applied to that one equivalent cycle only",
+      );
+  }
+  if (c.leakBeforeBreak === "decide" && input.shell.form === "cylinder" && input.pressure.fromAltitude)
+    warnings.push(
+      "Leak before break was asked to decide for a cabin: a cabin's leak is not a warning a crew can rely on; use it for vessels.",
+    );
+  return { crack, steps, warnings };
+}
