@@ -20,6 +20,7 @@
  */
 import type { PathField } from "./crack.ts";
 import { discretize, type Outline } from "./openings/geometry.ts";
+import { outlineOf } from "./openings/index.ts";
 import { buildOperator, solve, stressAt } from "./openings/solver.ts";
 
 /** σy on the x-axis at x ≥ A for a unit remote tension along y (c = −1) or along x (c = +1). */
@@ -83,4 +84,85 @@ export function solvedPathField(
     const py = start[1] + dy * Math.max(s, 0);
     return { hoopCoeff: normal(stressAt(hoop, px, py)), axialCoeff: normal(stressAt(axial, px, py)) };
   };
+}
+
+/** Nodes of the table of an opening's field along a crack's path (Chebyshev, first kind). */
+export const PATH_NODES = 16;
+
+/**
+ * The field along a path of length L, tabulated once at Chebyshev nodes of the first kind on
+ * [0, L] and read between them by barycentric Lagrange interpolation (Berrut & Trefethen, SIAM
+ * Review 46 (2004) 501). An opening's field along a path in the material is analytic, so the
+ * interpolant converges geometrically with the number of nodes; the nodes stay clear of the ends,
+ * so the field is never read on the opening's edge itself. Beyond [0, L] the field is read directly.
+ *
+ * This is what makes a crack growing into an opening's field affordable: the stress intensity
+ * reads the field at every Gauss point of its Green's-function integral, at every crack size the
+ * growth integral and the failure assessment visit, while the opening is solved once and its
+ * field read at the nodes once.
+ */
+export function tabulatePathField(field: (s_mm: number) => PathField, length_mm: number, nodes = PATH_NODES): (s_mm: number) => PathField {
+  const s: number[] = [];
+  const w: number[] = [];
+  const hoop: number[] = [];
+  const axial: number[] = [];
+  for (let j = 0; j < nodes; j++) {
+    const theta = ((2 * j + 1) * Math.PI) / (2 * nodes);
+    s.push((length_mm * (1 - Math.cos(theta))) / 2);
+    w.push((j % 2 === 0 ? 1 : -1) * Math.sin(theta));
+    const f = field(s[j]);
+    hoop.push(f.hoopCoeff);
+    axial.push(f.axialCoeff);
+  }
+  return (x) => {
+    if (!(x >= 0 && x <= length_mm)) return field(x);
+    let num = 0;
+    let numA = 0;
+    let den = 0;
+    for (let j = 0; j < nodes; j++) {
+      const d = x - s[j];
+      if (d === 0) return { hoopCoeff: hoop[j], axialCoeff: axial[j] };
+      const q = w[j] / d;
+      num += q * hoop[j];
+      numA += q * axial[j];
+      den += q;
+    }
+    return { hoopCoeff: num / den, axialCoeff: numA / den };
+  };
+}
+
+export interface RoundedRectangle {
+  halfWidthAlongHoop_mm: number;
+  halfLengthAlongAxial_mm: number;
+  cornerRadius_mm: number;
+}
+
+/** Tables of solved openings' fields along a path, by geometry: the solution depends on the shape only, not on the load. */
+const solvedAxisCache = new Map<string, (s_mm: number) => PathField>();
+
+/**
+ * The hoop-direction stress on the axial line beyond the end of a rounded-rectangular opening, at
+ * distance s from its edge (0 ≤ s ≤ length), as coefficients of the remote hoop and axial stresses:
+ * the plane-elasticity solver of openings/ (Sherman–Lauricella integral equation; x around the
+ * hoop, y along the axis) solved once per geometry for a unit hoop and a unit axial stress, and
+ * read at the nodes of the table once (superposition: the field is linear in the remote stresses).
+ */
+export function roundedRectangleAxisField(cut: RoundedRectangle, length_mm: number): (s_mm: number) => PathField {
+  const key = JSON.stringify([cut.halfWidthAlongHoop_mm, cut.halfLengthAlongAxial_mm, cut.cornerRadius_mm, length_mm]);
+  const known = solvedAxisCache.get(key);
+  if (known) return known;
+  const { halfWidthAlongHoop_mm, halfLengthAlongAxial_mm, cornerRadius_mm } = cut;
+  const outline = outlineOf({ kind: "rounded-rectangle", halfWidthAlongHoop_mm, halfLengthAlongAxial_mm, cornerRadius_mm });
+  const op = buildOperator(discretize([outline]));
+  const hoop = solve(op, { sxx: 1, syy: 0 });
+  const axial = solve(op, { sxx: 0, syy: 1 });
+  const end = cut.halfLengthAlongAxial_mm;
+  const direct = (s: number): PathField => ({
+    hoopCoeff: stressAt(hoop, 0, end + Math.max(s, 0)).sxx,
+    axialCoeff: stressAt(axial, 0, end + Math.max(s, 0)).sxx,
+  });
+  const table = tabulatePathField(direct, length_mm);
+  if (solvedAxisCache.size > 32) solvedAxisCache.clear();
+  solvedAxisCache.set(key, table);
+  return table;
 }

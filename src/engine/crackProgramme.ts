@@ -16,10 +16,7 @@ import { TYPICAL_DETECTABLE_MM, TYPICAL_DETECTABLE_SOURCE } from "../materials/i
 import type { ResolvedCheck } from "./input.ts";
 import { crackGrowth, type CrackGradient, type CrackResult } from "./crack.ts";
 import type { CrackOrientation } from "./crackGeometry.ts";
-import { ellipseAxisField, INGLIS_SOURCE } from "./crackPath.ts";
-import { discretize } from "./openings/geometry.ts";
-import { outlineOf } from "./openings/index.ts";
-import { buildOperator, solve, stressAt } from "./openings/solver.ts";
+import { ellipseAxisField, INGLIS_SOURCE, roundedRectangleAxisField } from "./crackPath.ts";
 import type { Evaluation } from "./evaluate.ts";
 import type { Load } from "./load.ts";
 import type { CheckResult } from "./result.ts";
@@ -72,21 +69,16 @@ function openingGradient(input: ResolvedCheck, e: Evaluation, holeRadius_mm: num
       : cut.kind === "circular-hole" && cut.radius_mm !== undefined
         ? [cut.radius_mm, cut.radius_mm]
         : [NaN, NaN];
+  const ligament = distance_mm - holeRadius_mm;
   let field = ellipseAxisField(A, B);
   let source = INGLIS_SOURCE;
-  if (cut.kind === "rounded-rectangle") {
-    // The plane-elasticity solver of openings/ (x around the hoop, y along the axis there), read on the axial line
-    // beyond the end of the opening's axial half-length.
-    const op = buildOperator(discretize([outlineOf(cut)]));
-    const hoop = solve(op, { sxx: 1, syy: 0 });
-    const axial = solve(op, { sxx: 0, syy: 1 });
-    const end = cut.halfLengthAlongAxial_mm;
-    field = (s) => ({ hoopCoeff: stressAt(hoop, 0, end + Math.max(s, 0)).sxx, axialCoeff: stressAt(axial, 0, end + Math.max(s, 0)).sxx });
+  if (cut.kind === "rounded-rectangle" && ligament > 0) {
+    // (A hole reaching the opening is refused by the crack model.) Solved once per geometry, read along the path at the nodes of a table once.
+    field = roundedRectangleAxisField(cut, Math.max(ligament, 0));
     source =
-      "the opening's field by the plane-elasticity solver (Sherman–Lauricella integral equation), on the axial line beyond the opening";
+      "the opening's field by the plane-elasticity solver (Sherman–Lauricella integral equation), on the axial line beyond the opening, tabulated at Chebyshev nodes along the path";
   }
   const lambda = e.hoopMax > 0 ? e.axialMax / e.hoopMax : 0;
-  const ligament = distance_mm - holeRadius_mm;
   return {
     field: (x) => {
       const f = field(ligament - x);

@@ -1,8 +1,10 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
 import { crackGrowth, type CrackInput } from "../../src/engine/crack.ts";
-import { ellipseAxisField, solvedPathField } from "../../src/engine/crackPath.ts";
-import { ellipse } from "../../src/engine/openings/geometry.ts";
+import { ellipseAxisField, roundedRectangleAxisField, solvedPathField, tabulatePathField } from "../../src/engine/crackPath.ts";
+import { discretize, ellipse } from "../../src/engine/openings/geometry.ts";
+import { outlineOf } from "../../src/engine/openings/index.ts";
+import { buildOperator, solve, stressAt } from "../../src/engine/openings/solver.ts";
 import { edgeCrackFactor, effectiveStress, kirschUniaxial } from "../../src/engine/weightFunction.ts";
 
 describe("edge-crack Green's function", () => {
@@ -123,5 +125,34 @@ describe("an opening's field from the plane-elasticity solver", () => {
       expect(Math.abs(b.hoopCoeff / a.hoopCoeff - 1)).toBeLessThan(1e-6);
       expect(Math.abs(b.axialCoeff - a.axialCoeff)).toBeLessThan(1e-6);
     }
+  });
+});
+
+describe("the field along the path, tabulated once", () => {
+  it("reads Inglis's closed form between its nodes to 1e-9", () => {
+    // Reference: the closed form itself (Muskhelishvili's potentials on the axis), read at points off the table's nodes.
+    const closed = ellipseAxisField(140, 190);
+    const table = tabulatePathField(closed, 9.6);
+    for (const s of [0.013, 0.7, 2.5, 4.8, 7.77, 9.59]) {
+      expect(Math.abs(table(s).hoopCoeff - closed(s).hoopCoeff)).toBeLessThan(1e-9);
+      expect(Math.abs(table(s).axialCoeff - closed(s).axialCoeff)).toBeLessThan(1e-9);
+    }
+    // Beyond its length the table reads the field itself.
+    expect(table(30).hoopCoeff).toBe(closed(30).hoopCoeff);
+  });
+
+  it("gives a rounded-rectangular opening's solved field as the solver reads it directly", () => {
+    // Independent reading: the integral-equation solution evaluated point by point along the same line.
+    const cut = { halfWidthAlongHoop_mm: 115, halfLengthAlongAxial_mm: 160, cornerRadius_mm: 55 };
+    const op = buildOperator(discretize([outlineOf({ kind: "rounded-rectangle", ...cut })]));
+    const hoop = solve(op, { sxx: 1, syy: 0 });
+    const axial = solve(op, { sxx: 0, syy: 1 });
+    const table = roundedRectangleAxisField(cut, 9.6);
+    for (const s of [0.3, 3.1, 6.2, 9.4]) {
+      expect(Math.abs(table(s).hoopCoeff - stressAt(hoop, 0, 160 + s).sxx)).toBeLessThan(1e-7);
+      expect(Math.abs(table(s).axialCoeff - stressAt(axial, 0, 160 + s).sxx)).toBeLessThan(1e-7);
+    }
+    // The same geometry is solved once: a second request returns the same table.
+    expect(roundedRectangleAxisField(cut, 9.6)).toBe(table);
   });
 });
