@@ -5,8 +5,16 @@ import { DEMOS } from "../../src/demo/index.ts";
 import { checkDocument } from "../../src/engine/index.ts";
 
 const root = new URL("../..", import.meta.url).pathname;
+// 44 whole result documents (steps, a–N curves of each crack orientation, the fleet's density) run past
+// spawnSync's default 1 MiB of output, which would kill the child; allow what a batch really writes.
 const cli = (args: string[], input?: string) =>
-  spawnSync(process.execPath, ["--import", "tsx", "src/cli.ts", ...args], { cwd: root, input, encoding: "utf8", timeout: 90_000 });
+  spawnSync(process.execPath, ["--import", "tsx", "src/cli.ts", ...args], {
+    cwd: root,
+    input,
+    encoding: "utf8",
+    timeout: 90_000,
+    maxBuffer: 64 * 1024 * 1024,
+  });
 const example = JSON.parse(readFileSync(new URL("../fixtures/format-example.json", import.meta.url), "utf8"));
 
 describe("batch", () => {
