@@ -17,8 +17,10 @@ function isLoopbackHost(h: string): boolean {
  */
 const host = process.env.HOST ?? "127.0.0.1";
 const port = Number(process.env.PORT ?? 8080);
-const store = openStore();
-const seeded = seedDemos(store);
+const store = await openStore();
+const recordsPlace =
+  store.backend === "postgres" ? "the PostgreSQL database of DATABASE_URL" : (process.env.HOOPWISE_DB ?? "data/hoopwise.db");
+const seeded = await seedDemos(store);
 // Filled once the port is known (PORT=0 lets the system choose); read by every request.
 const allowedHosts: string[] = [];
 const app = wholeApp(store, { allowedHosts });
@@ -27,7 +29,8 @@ const leftovers = await removeLeftoverProfiles();
 
 const server = serve({ fetch: app.fetch, hostname: host, port }, (info) => {
   allowedHosts.push(...servedHosts(host, info.port));
-  if (seeded) console.log(`Saved ${seeded} demo checks (unsigned) in ${process.env.HOOPWISE_DB ?? "data/hoopwise.db"}`);
+  if (seeded) console.log(`Saved ${seeded} demo checks (unsigned) in ${recordsPlace}`);
+  console.log(`Records: ${recordsPlace}`);
   if (leftovers) console.log(`Removed ${leftovers} browser profile${leftovers === 1 ? "" : "s"} left by a server that was killed`);
   if (isLoopbackHost(host)) {
     console.log(`Hoopwise is serving on http://${host.includes(":") ? `[${host}]` : host}:${info.port}/`);
@@ -41,12 +44,17 @@ const server = serve({ fetch: app.fetch, hostname: host, port }, (info) => {
       'The records carry passphrases and session cookies: put TLS in front (a reverse proxy such as Caddy or nginx, see the README, "Deployment behind TLS"), and add its public name to HOOPWISE_ALLOWED_HOSTS.',
     );
   }
-  if (store.countUsers() === 0) {
+  void noOneYet(info.port);
+});
+
+/** Says how to register the first person while no one is. */
+async function noOneYet(port: number) {
+  if ((await store.countUsers()) === 0) {
     console.log(
-      `No one is registered yet: open http://127.0.0.1:${info.port}/setup on this machine, or run: npm run -s cli -- user add NAME --role admin`,
+      `No one is registered yet: open http://127.0.0.1:${port}/setup on this machine, or run: npm run -s cli -- user add NAME --role admin`,
     );
   }
-});
+}
 
 let closing = false;
 function shutdown(signal: string) {
@@ -58,7 +66,7 @@ function shutdown(signal: string) {
   server.close(async () => {
     await closeSharedPool().catch(() => undefined);
     await closeSharedWorkPool().catch(() => undefined);
-    store.close();
+    await store.close().catch(() => undefined);
     process.exit(0);
   });
 }

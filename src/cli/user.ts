@@ -1,11 +1,10 @@
 import {
-  defaultDbPath,
   openStore,
   RecordConflictError,
   RecordError,
   USER_ROLES,
   type ScryptCost,
-  type SqliteStore,
+  type OpenedStore,
   type UserRole,
 } from "../store/index.ts";
 import { personNameField, safeParseFields, zodFieldErrors } from "../store/fields.ts";
@@ -21,7 +20,7 @@ export interface UserIo {
 }
 
 export interface UserCommandOptions {
-  /** The database file; `HOOPWISE_DB` or the default otherwise. */
+  /** The SQLite database file; otherwise DATABASE_URL's PostgreSQL when set, else `HOOPWISE_DB` or the default file. */
   dbPath?: string;
   passphraseCost?: ScryptCost;
 }
@@ -64,16 +63,17 @@ export async function userAddCommand(args: string[], io: UserIo, options: UserCo
   if (!parsedName.success) return fail(EXIT.usage, `name ${zodFieldErrors(parsedName.error)[0].message}`);
   const name = parsedName.data;
 
-  let store: SqliteStore;
+  let store: OpenedStore;
   try {
-    store = openStore({ path: options.dbPath ?? defaultDbPath(), passphraseCost: options.passphraseCost });
+    store = await openStore({ path: options.dbPath, passphraseCost: options.passphraseCost });
   } catch (err) {
     return fail(EXIT.refused, `cannot open the records database: ${(err as Error).message}`);
   }
   try {
     // Say so before asking for a passphrase that could not be used.
-    assertNameFree(store.db, name);
-    if (store.countUsers() === 0 && role !== "admin") return fail(EXIT.usage, "the first person must be an admin: use --role admin");
+    await assertNameFree(store.sql, name);
+    if ((await store.countUsers()) === 0 && role !== "admin")
+      return fail(EXIT.usage, "the first person must be an admin: use --role admin");
     const passphrase = io.isTTY ? await promptTwice(io, name) : await readPiped(io.stdin);
     const user = await store.addUser({ name, role: role as UserRole, passphrase }, "database-owner", "cli");
     io.stdout.write(`added ${user.role} "${user.name}" (user id ${user.id})\n`);
@@ -84,7 +84,7 @@ export async function userAddCommand(args: string[], io: UserIo, options: UserCo
     if (err instanceof RecordError || err instanceof InputMistake) return fail(EXIT.usage, err.message);
     return fail(EXIT.refused, (err as Error).message);
   } finally {
-    store.close();
+    await store.close();
   }
 }
 

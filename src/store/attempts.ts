@@ -1,4 +1,4 @@
-import type { Db } from "./db.ts";
+import type { Q, Sql } from "./sql.ts";
 import { SlowDownError } from "./errors.ts";
 
 /**
@@ -37,42 +37,39 @@ interface Row {
 
 /**
  * Count one attempt for both subjects, or refuse with the wait left when either must still wait.
- * Runs in its own IMMEDIATE transaction, so two attempts can never both see the same count.
+ * Runs in its own write transaction, so two attempts can never both see the same count.
  */
-export function countAttempt(db: Db, s: Subjects, nowMs: number): void {
-  db.transaction(() => {
-    const get = db.prepare("SELECT failures, last_at FROM attempts WHERE subject = ?");
+export async function countAttempt(sql: Sql, s: Subjects, nowMs: number): Promise<void> {
+  await sql.write(async (q) => {
     let wait = 0;
     for (const [subject, cap] of [
       [s.account, ACCOUNT_CAP_S],
       [s.source, SOURCE_CAP_S],
     ] as const) {
-      const row = get.get(subject) as Row | undefined;
+      const row = await q.get<Row>("SELECT failures, last_at FROM attempts WHERE subject = ?", subject);
       if (row) wait = Math.max(wait, row.last_at + delaySeconds(row.failures, cap) * 1000 - nowMs);
     }
     if (wait > 0) throw new SlowDownError(Math.ceil(wait / 1000));
-    const bump = db.prepare(
-      `INSERT INTO attempts (subject, failures, last_at) VALUES (?, 1, ?)
-       ON CONFLICT (subject) DO UPDATE SET failures = failures + 1, last_at = excluded.last_at`,
-    );
-    bump.run(s.account, nowMs);
-    bump.run(s.source, nowMs);
-  }).immediate();
+    const bump = `INSERT INTO attempts (subject, failures, last_at) VALUES (?, 1, ?)
+       ON CONFLICT (subject) DO UPDATE SET failures = attempts.failures + 1, last_at = excluded.last_at`;
+    await q.run(bump, s.account, nowMs);
+    await q.run(bump, s.source, nowMs);
+  });
 }
 
 /** The attempt was right: the account starts afresh, and the source is not charged for it. */
-export function attemptSucceeded(db: Db, s: Subjects): void {
-  db.transaction(() => {
-    db.prepare("DELETE FROM attempts WHERE subject = ?").run(s.account);
-    db.prepare("UPDATE attempts SET failures = max(failures - 1, 0) WHERE subject = ?").run(s.source);
-  }).immediate();
+export async function attemptSucceeded(sql: Sql, s: Subjects): Promise<void> {
+  await sql.write(async (q) => {
+    await q.run("DELETE FROM attempts WHERE subject = ?", s.account);
+    await q.run("UPDATE attempts SET failures = CASE WHEN failures > 0 THEN failures - 1 ELSE 0 END WHERE subject = ?", s.source);
+  });
 }
 
 /** An admin lifts the wait on an account. Returns whether there was one. */
-export function clearAccount(db: Db, nameKey: string): boolean {
-  return db.prepare("DELETE FROM attempts WHERE subject = ?").run(`account:${nameKey}`).changes > 0;
+export async function clearAccount(q: Q, nameKey: string): Promise<boolean> {
+  return (await q.run("DELETE FROM attempts WHERE subject = ?", `account:${nameKey}`)).changes > 0;
 }
 
-export function failuresOf(db: Db, subject: string): number {
-  return (db.prepare("SELECT failures FROM attempts WHERE subject = ?").get(subject) as Row | undefined)?.failures ?? 0;
+export async function failuresOf(q: Q, subject: string): Promise<number> {
+  return (await q.get<Row>("SELECT failures FROM attempts WHERE subject = ?", subject))?.failures ?? 0;
 }

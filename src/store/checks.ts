@@ -3,7 +3,7 @@ import { z } from "zod";
 import { fingerprint } from "../engine/fingerprint.ts";
 import { canonicalJson } from "../schema/canonical.ts";
 import type { FieldError } from "../engine/errors.ts";
-import type { Db } from "./db.ts";
+import type { Q } from "./sql.ts";
 import { isoNow, validInput, type StoreContext } from "./context.ts";
 import { InvalidRecordError, RecordConflictError, RecordNotFoundError } from "./errors.ts";
 import { appendEvent } from "./events.ts";
@@ -55,7 +55,7 @@ const newRevisionFields = z.strictObject({ input: z.unknown(), savedBy: personNa
  * what the sheet prints. A number the records cannot keep (taken, malformed, or two different
  * ones in one request) is refused, never replaced by another.
  */
-export function createCheck(ctx: StoreContext, args: NewCheck, by?: Actor | null): CreatedCheck {
+export async function createCheck(ctx: StoreContext, args: NewCheck, by?: Actor | null): Promise<CreatedCheck> {
   const { fields, input } = validate(ctx, newCheckFields, args);
   const id = randomUUID();
   const title = fields.title ?? fieldOf(input, "title", titleField) ?? "Untitled check";
@@ -72,21 +72,19 @@ export function createCheck(ctx: StoreContext, args: NewCheck, by?: Actor | null
   const fp = fingerprint(input, ctx.engineVersion);
   const at = isoNow(ctx);
 
-  ctx.db
-    .transaction(() => {
-      assertCalcNumberFree(ctx.db, calcNumber, fromInput ? "input.calcNumber" : "calcNumber");
-      ctx.db.prepare("INSERT INTO checks (id, title, calc_number, created_at) VALUES (?, ?, ?, ?)").run(id, title, calcNumber, at);
-      insertRevision(ctx.db, id, {
-        number: 1,
-        canonical,
-        fingerprint: fp,
-        engineVersion: ctx.engineVersion,
-        savedAt: at,
-        savedBy,
-      });
-      appendEvent(ctx.db, id, { at, kind: "saved", revision: 1, actor: savedBy, detail: { fingerprint: fp } });
-    })
-    .immediate();
+  await ctx.sql.write(async (q) => {
+    await assertCalcNumberFree(q, calcNumber, fromInput ? "input.calcNumber" : "calcNumber");
+    await q.run("INSERT INTO checks (id, title, calc_number, created_at) VALUES (?, ?, ?, ?)", id, title, calcNumber, at);
+    await insertRevision(q, id, {
+      number: 1,
+      canonical,
+      fingerprint: fp,
+      engineVersion: ctx.engineVersion,
+      savedAt: at,
+      savedBy,
+    });
+    await appendEvent(q, id, { at, kind: "saved", revision: 1, actor: savedBy, detail: { fingerprint: fp } });
+  });
   return { id, title, calcNumber, revision: 1, fingerprint: fp };
 }
 
@@ -94,8 +92,8 @@ export function createCheck(ctx: StoreContext, args: NewCheck, by?: Actor | null
  * Save a changed input as the check's next revision, which supersedes the one
  * before. An input identical to the latest revision's saves nothing.
  */
-export function addRevision(ctx: StoreContext, checkId: string, args: NewRevision, by?: Actor | null): SavedRevision {
-  const check = requireCheck(ctx.db, checkId);
+export async function addRevision(ctx: StoreContext, checkId: string, args: NewRevision, by?: Actor | null): Promise<SavedRevision> {
+  const check = await requireCheck(ctx.sql, checkId);
   const { fields, input } = validate(ctx, newRevisionFields, args);
   const inputNumber = inputCalcNumber(input);
   if (inputNumber !== undefined && inputNumber !== check.calcNumber) {
@@ -111,19 +109,17 @@ export function addRevision(ctx: StoreContext, checkId: string, args: NewRevisio
   const at = isoNow(ctx);
   const savedBy = by ? by.name : (fields.savedBy ?? null);
 
-  // IMMEDIATE takes the write lock before reading the latest number, so two
+  // The write transaction holds the writers' lock before reading the latest number, so two
   // writers (threads or processes) can never both claim the same next number.
-  return ctx.db
-    .transaction((): SavedRevision => {
-      const latest = latestRevision(ctx.db, checkId);
-      if (latest.fingerprint === fp) return { revision: latest.number, fingerprint: fp, unchanged: true };
-      const number = latest.number + 1;
-      insertRevision(ctx.db, checkId, { number, canonical, fingerprint: fp, engineVersion: ctx.engineVersion, savedAt: at, savedBy });
-      appendEvent(ctx.db, checkId, { at, kind: "saved", revision: number, actor: savedBy, detail: { fingerprint: fp } });
-      appendEvent(ctx.db, checkId, { at, kind: "superseded", revision: latest.number, actor: savedBy, detail: { by: number } });
-      return { revision: number, fingerprint: fp, unchanged: false };
-    })
-    .immediate();
+  return ctx.sql.write(async (q): Promise<SavedRevision> => {
+    const latest = await latestRevision(q, checkId);
+    if (latest.fingerprint === fp) return { revision: latest.number, fingerprint: fp, unchanged: true };
+    const number = latest.number + 1;
+    await insertRevision(q, checkId, { number, canonical, fingerprint: fp, engineVersion: ctx.engineVersion, savedAt: at, savedBy });
+    await appendEvent(q, checkId, { at, kind: "saved", revision: number, actor: savedBy, detail: { fingerprint: fp } });
+    await appendEvent(q, checkId, { at, kind: "superseded", revision: latest.number, actor: savedBy, detail: { by: number } });
+    return { revision: number, fingerprint: fp, unchanged: false };
+  });
 }
 
 export interface CheckRow {
@@ -133,18 +129,20 @@ export interface CheckRow {
   createdAt: string;
 }
 
-export function requireCheck(db: Db, checkId: string): CheckRow {
-  const row = db.prepare("SELECT id, title, calc_number AS calcNumber, created_at AS createdAt FROM checks WHERE id = ?").get(checkId) as
-    | CheckRow
-    | undefined;
+export async function requireCheck(q: Q, checkId: string): Promise<CheckRow> {
+  const row = await q.get<CheckRow>(
+    `SELECT id, title, calc_number AS "calcNumber", created_at AS "createdAt" FROM checks WHERE id = ?`,
+    checkId,
+  );
   if (!row) throw new RecordNotFoundError([{ path: "id", message: `no saved check has the id "${checkId}"` }]);
   return row;
 }
 
-export function latestRevision(db: Db, checkId: string): { number: number; fingerprint: string } {
-  const row = db.prepare("SELECT number, fingerprint FROM revisions WHERE check_id = ? ORDER BY number DESC LIMIT 1").get(checkId) as
-    | { number: number; fingerprint: string }
-    | undefined;
+export async function latestRevision(q: Q, checkId: string): Promise<{ number: number; fingerprint: string }> {
+  const row = await q.get<{ number: number; fingerprint: string }>(
+    "SELECT number, fingerprint FROM revisions WHERE check_id = ? ORDER BY number DESC LIMIT 1",
+    checkId,
+  );
   // A check is created together with its revision 1 and revisions cannot be deleted.
   if (!row) throw new Error(`check ${checkId} has no revisions: the database is inconsistent`);
   return row;
@@ -161,15 +159,23 @@ export interface RevisionRow {
   importedUnsigned?: boolean;
 }
 
-export function insertRevision(db: Db, checkId: string, r: RevisionRow): void {
-  db.prepare(
+export async function insertRevision(q: Q, checkId: string, r: RevisionRow): Promise<void> {
+  await q.run(
     "INSERT INTO revisions (check_id, number, input_json, fingerprint, engine_version, saved_at, saved_by, imported_unsigned) VALUES (?, ?, ?, ?, ?, ?, ?, ?)",
-  ).run(checkId, r.number, r.canonical, r.fingerprint, r.engineVersion, r.savedAt, r.savedBy, r.importedUnsigned ? 1 : 0);
+    checkId,
+    r.number,
+    r.canonical,
+    r.fingerprint,
+    r.engineVersion,
+    r.savedAt,
+    r.savedBy,
+    r.importedUnsigned ? 1 : 0,
+  );
 }
 
 /** Calculation numbers are unique: a sheet's number must name one check. `path` is where the number came from. */
-export function assertCalcNumberFree(db: Db, calcNumber: string, path: string): void {
-  const other = db.prepare("SELECT id FROM checks WHERE calc_number = ?").get(calcNumber) as { id: string } | undefined;
+export async function assertCalcNumberFree(q: Q, calcNumber: string, path: string): Promise<void> {
+  const other = await q.get<{ id: string }>("SELECT id FROM checks WHERE calc_number = ?", calcNumber);
   if (other) {
     throw new RecordConflictError([
       {

@@ -1,9 +1,9 @@
 import type { FieldError } from "../engine/errors.ts";
-import type { Db } from "./db.ts";
 import { InvalidRecordError } from "./errors.ts";
 import { joinPath } from "./fields.ts";
 import type { SigningKeys } from "./keys.ts";
 import type { ScryptCost } from "./passphrase.ts";
+import type { Sql } from "./sql.ts";
 
 /**
  * Checks a check input and gives back its normalized value (defaults filled in).
@@ -14,7 +14,7 @@ export type Validator = (json: unknown) => { ok: true; value: unknown } | { ok: 
 
 /** What the store's functions work with: the database, a clock, the check validator and the engine version fingerprints are bound to. */
 export interface StoreContext {
-  db: Db;
+  sql: Sql;
   now: () => Date;
   validate: Validator;
   engineVersion: string;

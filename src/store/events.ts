@@ -1,4 +1,4 @@
-import type { Db } from "./db.ts";
+import type { Q } from "./sql.ts";
 
 /**
  * The per-check event log. Rows are only ever inserted: the database's
@@ -17,8 +17,9 @@ export interface EventRecord {
   detail: Record<string, unknown> | null;
 }
 
-export function appendEvent(db: Db, checkId: string, e: EventRecord): void {
-  db.prepare("INSERT INTO events (check_id, at, kind, revision, actor, detail) VALUES (?, ?, ?, ?, ?, ?)").run(
+export async function appendEvent(q: Q, checkId: string, e: EventRecord): Promise<void> {
+  await q.run(
+    "INSERT INTO events (check_id, at, kind, revision, actor, detail) VALUES (?, ?, ?, ?, ?, ?)",
     checkId,
     e.at,
     e.kind,
@@ -37,7 +38,7 @@ interface EventRow {
 }
 
 /** The check's events, oldest first. */
-export function listEvents(db: Db, checkId: string): EventRecord[] {
-  const rows = db.prepare("SELECT at, kind, revision, actor, detail FROM events WHERE check_id = ? ORDER BY id").all(checkId) as EventRow[];
+export async function listEvents(q: Q, checkId: string): Promise<EventRecord[]> {
+  const rows = await q.all<EventRow>("SELECT at, kind, revision, actor, detail FROM events WHERE check_id = ? ORDER BY id", checkId);
   return rows.map((r) => ({ ...r, detail: r.detail === null ? null : (JSON.parse(r.detail) as Record<string, unknown>) }));
 }

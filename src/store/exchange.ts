@@ -100,8 +100,8 @@ export interface ImportedCheck {
 }
 
 /** The check as a signed exchange document. Reading for an export writes nothing. */
-export function exportCheck(ctx: StoreContext, checkId: string): ExchangeDocument {
-  const check = getCheck(ctx, checkId);
+export async function exportCheck(ctx: StoreContext, checkId: string): Promise<ExchangeDocument> {
+  const check = await getCheck(ctx, checkId);
   const body: Omit<ExchangeDocument, "signature"> = {
     format: EXCHANGE_FORMAT,
     exportedAt: isoNow(ctx),
@@ -139,16 +139,37 @@ export function exportCheck(ctx: StoreContext, checkId: string): ExchangeDocumen
 }
 
 /**
- * Bring an exported check into this database after checking the caps, every fingerprint, the
- * input of each revision, the signatures and the sign-off rules. Nothing is written unless all
- * of it holds.
+ * An exchange document checked for everything that needs no database: the caps, the fields,
+ * the numbering, every fingerprint and the input of each revision (validated and normalized),
+ * and the canonical text the file's signature covers. Pure and CPU-bound, so a large import can
+ * be worked out of the request thread; the result is plain data.
  */
-export function importCheck(ctx: StoreContext, document: unknown, by: Actor): ImportedCheck {
+export interface PreparedImport {
+  doc: ExchangeDocument;
+  /** The canonical JSON of each revision's input, in order, as it will be stored. */
+  canonical: string[];
+  /** The canonical JSON of the document without its signature: what the file's signature signs. */
+  signedBody: string;
+}
+
+export function prepareImport(ctx: Pick<StoreContext, "validate">, document: unknown): PreparedImport {
   refuseOverCaps(document);
   const doc = parseFields(exchangeDoc, document);
   const errors = checkContent(ctx, doc);
   if (errors.length) throw new InvalidRecordError(errors);
-  const trust = judgeTrust(ctx, doc, document);
+  const { signature: _s, ...body } = document as Record<string, unknown>;
+  return { doc, canonical: doc.revisions.map((r) => canonicalJson(r.input)), signedBody: canonicalJson(body) };
+}
+
+/**
+ * Bring an exported check into this database after checking the caps, every fingerprint, the
+ * input of each revision, the signatures and the sign-off rules. Nothing is written unless all
+ * of it holds: the rows go in one write transaction. `prepared` is prepareImport's answer when
+ * it was worked elsewhere (a worker thread); otherwise it is worked here.
+ */
+export async function importCheck(ctx: StoreContext, document: unknown, by: Actor, prepared?: PreparedImport): Promise<ImportedCheck> {
+  const { doc, canonical, signedBody } = prepared ?? prepareImport(ctx, document);
+  const trust = await judgeTrust(ctx, doc, signedBody);
   if (trust.ok) {
     const ruleErrors = doc.revisions.flatMap((r, i) => signoffErrors(r.signoffs, `revisions.${i}`));
     if (ruleErrors.length) throw new InvalidRecordError(ruleErrors);
@@ -156,59 +177,59 @@ export function importCheck(ctx: StoreContext, document: unknown, by: Actor): Im
 
   const at = isoNow(ctx);
   const { check } = doc;
-  ctx.db
-    .transaction(() => {
-      if (ctx.db.prepare("SELECT 1 FROM checks WHERE id = ?").get(check.id)) {
-        throw new RecordConflictError([{ path: "check.id", message: `check ${check.id} is already in these records` }]);
-      }
-      assertCalcNumberFree(ctx.db, check.calcNumber, "check.calcNumber");
-      ctx.db
-        .prepare("INSERT INTO checks (id, title, calc_number, created_at) VALUES (?, ?, ?, ?)")
-        .run(check.id, check.title, check.calcNumber, check.createdAt);
-      const addSignoff = ctx.db.prepare(
-        `INSERT INTO signoffs (check_id, revision, role, name, name_key, signer_id, signed_at, user_id, key_fingerprint, signature)
-         VALUES (?, ?, ?, ?, ?, NULL, ?, ?, ?, ?)`,
-      );
-      for (const r of doc.revisions) {
-        insertRevision(ctx.db, check.id, {
-          number: r.number,
-          canonical: canonicalJson(r.input),
-          fingerprint: r.fingerprint,
-          engineVersion: r.engineVersion,
-          savedAt: r.savedAt,
-          savedBy: r.savedBy,
-          importedUnsigned: !trust.ok,
-        });
-        if (trust.ok) {
-          for (const s of r.signoffs)
-            addSignoff.run(
-              check.id,
-              r.number,
-              s.role,
-              s.name,
-              identityOf(s.keyFingerprint, s.userId),
-              s.signedAt,
-              s.userId,
-              s.keyFingerprint,
-              s.signature,
-            );
-        }
-      }
-      for (const e of doc.events) appendEvent(ctx.db, check.id, e);
-      appendEvent(ctx.db, check.id, {
-        at,
-        kind: "imported",
-        revision: doc.revisions.length,
-        actor: by.name,
-        detail: {
-          exportedAt: doc.exportedAt,
-          keyFingerprint: trust.fingerprint,
-          signed: trust.ok,
-          ...(trust.ok ? {} : { unsignedBecause: trust.why }),
-        },
+  await ctx.sql.write(async (q) => {
+    if (await q.get("SELECT 1 AS found FROM checks WHERE id = ?", check.id)) {
+      throw new RecordConflictError([{ path: "check.id", message: `check ${check.id} is already in these records` }]);
+    }
+    await assertCalcNumberFree(q, check.calcNumber, "check.calcNumber");
+    await q.run(
+      "INSERT INTO checks (id, title, calc_number, created_at) VALUES (?, ?, ?, ?)",
+      check.id,
+      check.title,
+      check.calcNumber,
+      check.createdAt,
+    );
+    for (const [i, r] of doc.revisions.entries()) {
+      await insertRevision(q, check.id, {
+        number: r.number,
+        canonical: canonical[i],
+        fingerprint: r.fingerprint,
+        engineVersion: r.engineVersion,
+        savedAt: r.savedAt,
+        savedBy: r.savedBy,
+        importedUnsigned: !trust.ok,
       });
-    })
-    .immediate();
+      if (!trust.ok) continue;
+      for (const s of r.signoffs) {
+        await q.run(
+          `INSERT INTO signoffs (check_id, revision, role, name, name_key, signer_id, signed_at, user_id, key_fingerprint, signature)
+           VALUES (?, ?, ?, ?, ?, NULL, ?, ?, ?, ?)`,
+          check.id,
+          r.number,
+          s.role,
+          s.name,
+          identityOf(s.keyFingerprint, s.userId),
+          s.signedAt,
+          s.userId,
+          s.keyFingerprint,
+          s.signature,
+        );
+      }
+    }
+    for (const e of doc.events) await appendEvent(q, check.id, e);
+    await appendEvent(q, check.id, {
+      at,
+      kind: "imported",
+      revision: doc.revisions.length,
+      actor: by.name,
+      detail: {
+        exportedAt: doc.exportedAt,
+        keyFingerprint: trust.fingerprint,
+        signed: trust.ok,
+        ...(trust.ok ? {} : { unsignedBecause: trust.why }),
+      },
+    });
+  });
   return {
     id: check.id,
     title: check.title,
@@ -239,7 +260,7 @@ function refuseOverCaps(document: unknown): void {
 }
 
 /** What must hold whether or not the file is trusted: numbering, fingerprints, valid inputs, events. */
-function checkContent(ctx: StoreContext, doc: ExchangeDocument): FieldError[] {
+function checkContent(ctx: Pick<StoreContext, "validate">, doc: ExchangeDocument): FieldError[] {
   const errors: FieldError[] = [];
   doc.revisions.forEach((r, i) => {
     const at = `revisions.${i}`;
@@ -268,16 +289,15 @@ function checkContent(ctx: StoreContext, doc: ExchangeDocument): FieldError[] {
 type Trust = { ok: true; fingerprint: string } | { ok: false; fingerprint: string | null; why: string };
 
 /** Whether the document and all its sign-offs are signed by a key these records trust. */
-function judgeTrust(ctx: StoreContext, doc: ExchangeDocument, raw: unknown): Trust {
+async function judgeTrust(ctx: StoreContext, doc: ExchangeDocument, signedBody: string): Promise<Trust> {
   const key = readPublicKey(doc.signature.publicKeyPem);
   if (!key) return { ok: false, fingerprint: null, why: "the file's public key cannot be read" };
   // The fingerprint is worked out from the key itself, never taken from the file's word.
   const fp = keyFingerprint(key);
-  const trusted = keyForFingerprint(ctx, fp);
+  const trusted = await keyForFingerprint(ctx, ctx.sql, fp);
   if (!trusted)
     return { ok: false, fingerprint: fp, why: `the file is signed with key ${fp}, which no admin of these records has marked trusted` };
-  const { signature: _s, ...body } = raw as Record<string, unknown>;
-  if (!signatureValid(trusted, canonicalJson(body), doc.signature.value)) {
+  if (!signatureValid(trusted, signedBody, doc.signature.value)) {
     return { ok: false, fingerprint: fp, why: "the file's signature does not match its contents: it was changed after it was exported" };
   }
   for (const [i, r] of doc.revisions.entries()) {
@@ -291,7 +311,7 @@ function judgeTrust(ctx: StoreContext, doc: ExchangeDocument, raw: unknown): Tru
         name: s.name,
         signedAt: s.signedAt,
       };
-      const signer = s.keyFingerprint ? keyForFingerprint(ctx, s.keyFingerprint) : undefined;
+      const signer = s.keyFingerprint ? await keyForFingerprint(ctx, ctx.sql, s.keyFingerprint) : undefined;
       if (!signer || !s.signature || s.userId === null || !signatureValid(signer, signoffMessage(facts), s.signature)) {
         return { ok: false, fingerprint: fp, why: `the ${s.role} sign-off of revision ${i + 1} has no valid signature from a trusted key` };
       }

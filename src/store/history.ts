@@ -4,9 +4,10 @@ import { latestRevision, requireCheck } from "./checks.ts";
 import { RecordNotFoundError } from "./errors.ts";
 import { listEvents, type EventRecord } from "./events.ts";
 import { signoffRows, type SignOffRecord } from "./signoffs.ts";
+import type { Q } from "./sql.ts";
 import { revisionState, type RevisionState } from "./state.ts";
 
-type ReadCtx = Pick<StoreContext, "db" | "keys">;
+type ReadCtx = Pick<StoreContext, "sql" | "keys">;
 
 /** A saved check as the list shows it. */
 export interface CheckSummary {
@@ -61,59 +62,55 @@ export interface SheetRevision {
 }
 
 /** Every saved check, the most recently saved first. */
-export function listChecks(ctx: ReadCtx): CheckSummary[] {
-  return ctx.db.transaction(() => {
-    const rows = ctx.db
-      .prepare(
-        `SELECT c.id, c.title, c.calc_number AS calcNumber, c.created_at AS createdAt, r.saved_at AS updatedAt
-           FROM checks c
-           JOIN revisions r ON r.check_id = c.id
-            AND r.number = (SELECT max(number) FROM revisions WHERE check_id = c.id)
-          ORDER BY r.saved_at DESC, c.calc_number`,
-      )
-      .all() as { id: string; title: string; calcNumber: string; createdAt: string; updatedAt: string }[];
-    return rows.map((row) => {
-      const latest = latestRevision(ctx.db, row.id).number;
-      const rev = readRevision(ctx, row.id, latest, latest);
-      return {
+export function listChecks(ctx: ReadCtx): Promise<CheckSummary[]> {
+  return ctx.sql.read(async (q) => {
+    const rows = await q.all<{ id: string; title: string; calcNumber: string; createdAt: string; updatedAt: string; latest: number }>(
+      `SELECT c.id, c.title, c.calc_number AS "calcNumber", c.created_at AS "createdAt", r.saved_at AS "updatedAt", r.number AS latest
+         FROM checks c
+         JOIN revisions r ON r.check_id = c.id
+          AND r.number = (SELECT max(number) FROM revisions WHERE check_id = c.id)
+        ORDER BY r.saved_at DESC, c.calc_number`,
+    );
+    const out: CheckSummary[] = [];
+    for (const row of rows) {
+      const rev = await readRevision(ctx, q, row.id, row.latest, row.latest);
+      out.push({
         id: row.id,
         title: row.title,
         calcNumber: row.calcNumber,
-        latestRevision: latest,
+        latestRevision: row.latest,
         state: rev.state,
         updatedAt: row.updatedAt,
         intact: rev.intact,
-      };
-    });
-  })();
+      });
+    }
+    return out;
+  });
 }
 
-export function getCheck(ctx: ReadCtx, checkId: string): CheckRecord {
+export function getCheck(ctx: ReadCtx, checkId: string): Promise<CheckRecord> {
   // One read transaction: every query sees the same snapshot even while another process saves.
-  return ctx.db.transaction(() => {
-    const check = requireCheck(ctx.db, checkId);
-    const latest = latestRevision(ctx.db, checkId).number;
-    const numbers = ctx.db.prepare("SELECT number FROM revisions WHERE check_id = ? ORDER BY number").pluck().all(checkId) as number[];
-    return {
-      ...check,
-      latestRevision: latest,
-      revisions: numbers.map((n) => readRevision(ctx, checkId, n, latest)),
-      events: listEvents(ctx.db, checkId),
-    };
-  })();
+  return ctx.sql.read(async (q) => {
+    const check = await requireCheck(q, checkId);
+    const latest = (await latestRevision(q, checkId)).number;
+    const numbers = await q.all<{ number: number }>("SELECT number FROM revisions WHERE check_id = ? ORDER BY number", checkId);
+    const revisions: RevisionRecord[] = [];
+    for (const { number } of numbers) revisions.push(await readRevision(ctx, q, checkId, number, latest));
+    return { ...check, latestRevision: latest, revisions, events: await listEvents(q, checkId) };
+  });
 }
 
 /** One revision with its sign-offs, for the sheet route. */
-export function getSheetRevision(ctx: ReadCtx, checkId: string, number: number): SheetRevision {
-  return ctx.db.transaction(() => {
-    const check = requireCheck(ctx.db, checkId);
-    const latest = latestRevision(ctx.db, checkId).number;
+export function getSheetRevision(ctx: ReadCtx, checkId: string, number: number): Promise<SheetRevision> {
+  return ctx.sql.read(async (q) => {
+    const check = await requireCheck(q, checkId);
+    const latest = (await latestRevision(q, checkId)).number;
     return {
       check: { id: check.id, title: check.title, calcNumber: check.calcNumber },
       latestRevision: latest,
-      revision: readRevision(ctx, checkId, number, latest),
+      revision: await readRevision(ctx, q, checkId, number, latest),
     };
-  })();
+  });
 }
 
 interface StoredRevision {
@@ -126,14 +123,14 @@ interface StoredRevision {
   importedUnsigned: number;
 }
 
-function readRevision(ctx: ReadCtx, checkId: string, number: number, latest: number): RevisionRecord {
-  const row = ctx.db
-    .prepare(
-      `SELECT number, input_json AS inputJson, fingerprint, engine_version AS engineVersion, saved_at AS savedAt,
-              saved_by AS savedBy, imported_unsigned AS importedUnsigned
-         FROM revisions WHERE check_id = ? AND number = ?`,
-    )
-    .get(checkId, number) as StoredRevision | undefined;
+async function readRevision(ctx: ReadCtx, q: Q, checkId: string, number: number, latest: number): Promise<RevisionRecord> {
+  const row = await q.get<StoredRevision>(
+    `SELECT number, input_json AS "inputJson", fingerprint, engine_version AS "engineVersion", saved_at AS "savedAt",
+            saved_by AS "savedBy", imported_unsigned AS "importedUnsigned"
+       FROM revisions WHERE check_id = ? AND number = ?`,
+    checkId,
+    number,
+  );
   if (!row) throw new RecordNotFoundError([{ path: "revision", message: `check ${checkId} has no revision ${number}` }]);
   let input: unknown;
   let intact: boolean;
@@ -144,7 +141,7 @@ function readRevision(ctx: ReadCtx, checkId: string, number: number, latest: num
     input = null;
     intact = false;
   }
-  const signoffs = signoffRows(ctx, checkId, row.number, row.fingerprint).map(({ identity: _i, ...s }) => s);
+  const signoffs = (await signoffRows(ctx, q, checkId, row.number, row.fingerprint)).map(({ identity: _i, ...s }) => s);
   const counted = intact ? signoffs.filter((s) => s.valid).map((s) => s.role) : [];
   return {
     number: row.number,

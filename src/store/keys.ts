@@ -1,5 +1,6 @@
 import { createHash, createPrivateKey, createPublicKey, generateKeyPairSync, sign, verify, type KeyObject } from "node:crypto";
-import { chmodSync, existsSync, readFileSync, statSync, writeFileSync } from "node:fs";
+import { chmodSync, existsSync, mkdirSync, readFileSync, statSync, writeFileSync } from "node:fs";
+import { dirname } from "node:path";
 
 /**
  * The records' signing key: an Ed25519 key pair (RFC 8032) made through node:crypto on first
@@ -25,8 +26,13 @@ export function keyPathFor(dbPath: string): string {
 /** Load the key pair beside the database, creating it (owner-only) when there is none yet. */
 export function openSigningKeys(dbPath: string): SigningKeys {
   if (dbPath === ":memory:") return keysFrom(generateKeyPairSync("ed25519").privateKey);
-  const path = keyPathFor(dbPath);
+  return openKeyFile(keyPathFor(dbPath));
+}
+
+/** The key pair in a PKCS #8 PEM file, made (owner-only, in a folder made when missing) when there is none yet. */
+export function openKeyFile(path: string): SigningKeys {
   if (!existsSync(path)) {
+    mkdirSync(dirname(path), { recursive: true });
     const { privateKey } = generateKeyPairSync("ed25519");
     const pem = privateKey.export({ type: "pkcs8", format: "pem" }) as string;
     try {

@@ -1,4 +1,4 @@
-import type { Db } from "./db.ts";
+import type { Q } from "./sql.ts";
 
 /** The append-only log of what was done to people and keys, and refused sign-ins. */
 export const PEOPLE_EVENT_KINDS = [
@@ -23,8 +23,9 @@ export interface PeopleEvent {
   detail: Record<string, unknown> | null;
 }
 
-export function logPeopleEvent(db: Db, e: PeopleEvent): void {
-  db.prepare("INSERT INTO people_events (at, kind, user_id, actor_id, source, detail) VALUES (?, ?, ?, ?, ?, ?)").run(
+export async function logPeopleEvent(q: Q, e: PeopleEvent): Promise<void> {
+  await q.run(
+    "INSERT INTO people_events (at, kind, user_id, actor_id, source, detail) VALUES (?, ?, ?, ?, ?, ?)",
     e.at,
     e.kind,
     e.userId,
@@ -34,9 +35,10 @@ export function logPeopleEvent(db: Db, e: PeopleEvent): void {
   );
 }
 
-export function listPeopleEvents(db: Db, limit = 200): PeopleEvent[] {
-  const rows = db
-    .prepare("SELECT at, kind, user_id AS userId, actor_id AS actorId, source, detail FROM people_events ORDER BY id DESC LIMIT ?")
-    .all(limit) as (Omit<PeopleEvent, "detail"> & { detail: string | null })[];
+export async function listPeopleEvents(q: Q, limit = 200): Promise<PeopleEvent[]> {
+  const rows = await q.all<Omit<PeopleEvent, "detail"> & { detail: string | null }>(
+    `SELECT at, kind, user_id AS "userId", actor_id AS "actorId", source, detail FROM people_events ORDER BY id DESC LIMIT ?`,
+    limit,
+  );
   return rows.map((r) => ({ ...r, detail: r.detail === null ? null : (JSON.parse(r.detail) as Record<string, unknown>) }));
 }

@@ -29,33 +29,34 @@ export async function signIn(ctx: StoreContext, body: unknown, source: string): 
   const token = randomBytes(32).toString("base64url");
   const now = ctx.now();
   const expiresAt = new Date(now.getTime() + SESSION_HOURS * 3600_000).toISOString();
-  ctx.db
-    .transaction(() => {
-      // Expired sessions are swept here, on a write, so reading a page never writes.
-      ctx.db.prepare("DELETE FROM sessions WHERE expires_at <= ?").run(now.toISOString());
-      ctx.db
-        .prepare("INSERT INTO sessions (token_hash, user_id, created_at, expires_at) VALUES (?, ?, ?, ?)")
-        .run(tokenHash(token), user.id, isoNow(ctx), expiresAt);
-      logPeopleEvent(ctx.db, { at: isoNow(ctx), kind: "sign-in", userId: user.id, actorId: user.id, source, detail: null });
-    })
-    .immediate();
+  await ctx.sql.write(async (q) => {
+    // Expired sessions are swept here, on a write, so reading a page never writes.
+    await q.run("DELETE FROM sessions WHERE expires_at <= ?", now.toISOString());
+    await q.run(
+      "INSERT INTO sessions (token_hash, user_id, created_at, expires_at) VALUES (?, ?, ?, ?)",
+      tokenHash(token),
+      user.id,
+      isoNow(ctx),
+      expiresAt,
+    );
+    await logPeopleEvent(q, { at: isoNow(ctx), kind: "sign-in", userId: user.id, actorId: user.id, source, detail: null });
+  });
   return { token, user, expiresAt };
 }
 
 /** The enabled user a token belongs to, or undefined. Reads only. */
-export function userForToken(ctx: StoreContext, token: string): Actor | undefined {
+export async function userForToken(ctx: StoreContext, token: string): Promise<Actor | undefined> {
   if (!/^[A-Za-z0-9_-]{20,100}$/.test(token)) return undefined;
-  const row = ctx.db
-    .prepare(
-      `SELECT u.id, u.name, u.role FROM sessions s JOIN users u ON u.id = s.user_id
-        WHERE s.token_hash = ? AND s.expires_at > ? AND u.disabled = 0`,
-    )
-    .get(tokenHash(token), isoNow(ctx)) as Actor | undefined;
-  return row;
+  return ctx.sql.get<Actor>(
+    `SELECT u.id, u.name, u.role FROM sessions s JOIN users u ON u.id = s.user_id
+      WHERE s.token_hash = ? AND s.expires_at > ? AND u.disabled = 0`,
+    tokenHash(token),
+    isoNow(ctx),
+  );
 }
 
-export function signOut(ctx: StoreContext, token: string): void {
-  ctx.db.prepare("DELETE FROM sessions WHERE token_hash = ?").run(tokenHash(token));
+export async function signOut(ctx: StoreContext, token: string): Promise<void> {
+  await ctx.sql.run("DELETE FROM sessions WHERE token_hash = ?", tokenHash(token));
 }
 
 function tokenHash(token: string): string {

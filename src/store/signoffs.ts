@@ -1,7 +1,8 @@
+import type { KeyObject } from "node:crypto";
 import { z } from "zod";
 import type { FieldError } from "../engine/errors.ts";
 import { signoffMessage, type SignedFacts } from "../schema/signoff.ts";
-import type { Db } from "./db.ts";
+import type { Q } from "./sql.ts";
 import { isoNow, type StoreContext } from "./context.ts";
 import { latestRevision, requireCheck } from "./checks.ts";
 import { RecordNotFoundError, SignOffRefusedError } from "./errors.ts";
@@ -62,68 +63,74 @@ export async function signOff(
   source: string,
 ): Promise<SignedRevision> {
   const req = parseFields(signOffFields, request);
-  requireCheck(ctx.db, checkId);
-  requireRevision(ctx.db, checkId, req.revision);
+  await requireCheck(ctx.sql, checkId);
+  await requireRevision(ctx.sql, checkId, req.revision);
   await provePassphrase(ctx, by, req.passphrase, source);
   const signedAt = isoNow(ctx);
 
   // The rules are judged inside the write transaction, after the (slow) passphrase check, so a
   // revision saved meanwhile is seen.
-  return ctx.db
-    .transaction((): SignedRevision => {
-      const latest = latestRevision(ctx.db, checkId);
-      if (req.revision < latest.number) {
-        throw new SignOffRefusedError([
-          {
-            path: "revision",
-            message: `revision ${req.revision} is superseded by revision ${latest.number}; only the latest revision can be signed`,
-          },
-        ]);
-      }
-      const existing = signoffRows(ctx, checkId, req.revision, latest.fingerprint);
-      const identity = identityOf(ctx.keys.fingerprint, by.id);
-      const problem = signOffProblem(existing, req.role, identity);
-      if (problem) throw new SignOffRefusedError([problem]);
-      const facts: SignedFacts = {
-        checkId,
-        revision: req.revision,
-        fingerprint: latest.fingerprint,
-        role: req.role,
-        userId: by.id,
-        name: by.name,
-        signedAt,
-      };
-      const signature = ctx.keys.sign(signoffMessage(facts));
-      ctx.db
-        .prepare(
-          `INSERT INTO signoffs (check_id, revision, role, name, name_key, signer_id, signed_at, user_id, key_fingerprint, signature)
-           VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?)`,
-        )
-        .run(checkId, req.revision, req.role, by.name, identity, by.id, signedAt, by.id, ctx.keys.fingerprint, signature);
-      appendEvent(ctx.db, checkId, {
-        at: signedAt,
-        kind: "signed",
-        revision: req.revision,
-        actor: by.name,
-        detail: { role: req.role, userId: by.id },
-      });
-      const roles = [...existing.filter((s) => s.valid).map((s) => s.role), req.role];
-      return {
-        revision: req.revision,
-        signoff: {
-          role: req.role,
-          name: by.name,
-          userId: by.id,
-          signedAt,
-          imported: false,
-          signature,
-          keyFingerprint: ctx.keys.fingerprint,
-          valid: true,
+  return ctx.sql.write(async (q): Promise<SignedRevision> => {
+    const latest = await latestRevision(q, checkId);
+    if (req.revision < latest.number) {
+      throw new SignOffRefusedError([
+        {
+          path: "revision",
+          message: `revision ${req.revision} is superseded by revision ${latest.number}; only the latest revision can be signed`,
         },
-        state: revisionState(req.revision, latest.number, roles),
-      };
-    })
-    .immediate();
+      ]);
+    }
+    const existing = await signoffRows(ctx, q, checkId, req.revision, latest.fingerprint);
+    const identity = identityOf(ctx.keys.fingerprint, by.id);
+    const problem = signOffProblem(existing, req.role, identity);
+    if (problem) throw new SignOffRefusedError([problem]);
+    const facts: SignedFacts = {
+      checkId,
+      revision: req.revision,
+      fingerprint: latest.fingerprint,
+      role: req.role,
+      userId: by.id,
+      name: by.name,
+      signedAt,
+    };
+    const signature = ctx.keys.sign(signoffMessage(facts));
+    await q.run(
+      `INSERT INTO signoffs (check_id, revision, role, name, name_key, signer_id, signed_at, user_id, key_fingerprint, signature)
+         VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?)`,
+      checkId,
+      req.revision,
+      req.role,
+      by.name,
+      identity,
+      by.id,
+      signedAt,
+      by.id,
+      ctx.keys.fingerprint,
+      signature,
+    );
+    await appendEvent(q, checkId, {
+      at: signedAt,
+      kind: "signed",
+      revision: req.revision,
+      actor: by.name,
+      detail: { role: req.role, userId: by.id },
+    });
+    const roles = [...existing.filter((s) => s.valid).map((s) => s.role), req.role];
+    return {
+      revision: req.revision,
+      signoff: {
+        role: req.role,
+        name: by.name,
+        userId: by.id,
+        signedAt,
+        imported: false,
+        signature,
+        keyFingerprint: ctx.keys.fingerprint,
+        valid: true,
+      },
+      state: revisionState(req.revision, latest.number, roles),
+    };
+  });
 }
 
 /** Who a sign-off is by: a user id is only unique within the records (the key) that gave it. */
@@ -179,16 +186,26 @@ interface StoredSignoff {
  * stored now: a sign-off whose signature fails (a row or the revision's fingerprint edited in
  * the database file, or a key no longer trusted) is shown but does not count.
  */
-export function signoffRows(ctx: Pick<StoreContext, "db" | "keys">, checkId: string, revision: number, fingerprint: string): SignoffRow[] {
-  const rows = ctx.db
-    .prepare(
-      `SELECT role, name, user_id AS userId, signed_at AS signedAt, signer_id IS NOT NULL AS local, signature, key_fingerprint AS keyFingerprint
-         FROM signoffs WHERE check_id = ? AND revision = ?`,
-    )
-    .all(checkId, revision) as StoredSignoff[];
+export async function signoffRows(
+  ctx: Pick<StoreContext, "keys">,
+  q: Q,
+  checkId: string,
+  revision: number,
+  fingerprint: string,
+): Promise<SignoffRow[]> {
+  const rows = await q.all<StoredSignoff>(
+    `SELECT role, name, user_id AS "userId", signed_at AS "signedAt", CASE WHEN signer_id IS NULL THEN 0 ELSE 1 END AS local, signature,
+            key_fingerprint AS "keyFingerprint"
+       FROM signoffs WHERE check_id = ? AND revision = ?`,
+    checkId,
+    revision,
+  );
+  const keys = new Map<string, KeyObject | undefined>();
+  for (const r of rows)
+    if (r.keyFingerprint && !keys.has(r.keyFingerprint)) keys.set(r.keyFingerprint, await keyForFingerprint(ctx, q, r.keyFingerprint));
   return rows
     .map(({ local, ...r }) => {
-      const key = r.keyFingerprint ? keyForFingerprint(ctx, r.keyFingerprint) : undefined;
+      const key = r.keyFingerprint ? keys.get(r.keyFingerprint) : undefined;
       const valid =
         key !== undefined &&
         r.signature !== null &&
@@ -203,7 +220,7 @@ export function signoffRows(ctx: Pick<StoreContext, "db" | "keys">, checkId: str
     .sort((a, b) => ROLES.indexOf(a.role) - ROLES.indexOf(b.role));
 }
 
-function requireRevision(db: Db, checkId: string, revision: number): void {
-  const found = db.prepare("SELECT 1 FROM revisions WHERE check_id = ? AND number = ?").get(checkId, revision);
+async function requireRevision(q: Q, checkId: string, revision: number): Promise<void> {
+  const found = await q.get("SELECT 1 AS found FROM revisions WHERE check_id = ? AND number = ?", checkId, revision);
   if (!found) throw new RecordNotFoundError([{ path: "revision", message: `check ${checkId} has no revision ${revision}` }]);
 }

@@ -7,6 +7,7 @@ import { keyFingerprint, readPublicKey } from "./keys.ts";
 import { logPeopleEvent } from "./peopleLog.ts";
 import { requireAdmin, type Actor } from "./users.ts";
 import { isoNow } from "./context.ts";
+import type { Q } from "./sql.ts";
 
 /**
  * Keys whose signatures these records accept besides their own: another office's records key,
@@ -25,8 +26,8 @@ const trustFields = z.strictObject({
   label: titleField,
 });
 
-export function trustKey(ctx: StoreContext, body: unknown, by: Actor): TrustedKey {
-  requireAdmin(ctx.db, by, "trust a key");
+export async function trustKey(ctx: StoreContext, body: unknown, by: Actor): Promise<TrustedKey> {
+  await requireAdmin(ctx.sql, by, "trust a key");
   const f = parseFields(trustFields, body);
   const key = readPublicKey(f.publicKeyPem);
   if (!key)
@@ -39,40 +40,39 @@ export function trustKey(ctx: StoreContext, body: unknown, by: Actor): TrustedKe
   }
   const pem = key.export({ type: "spki", format: "pem" }) as string;
   const at = isoNow(ctx);
-  ctx.db
-    .transaction(() => {
-      if (ctx.db.prepare("SELECT 1 FROM trusted_keys WHERE fingerprint = ?").get(fingerprint)) {
-        throw new RecordConflictError([{ path: "publicKeyPem", message: `the key ${fingerprint} is already trusted` }]);
-      }
-      ctx.db
-        .prepare("INSERT INTO trusted_keys (fingerprint, public_key, label, trusted_by, trusted_at) VALUES (?, ?, ?, ?, ?)")
-        .run(fingerprint, pem, f.label, by.id, at);
-      logPeopleEvent(ctx.db, {
-        at,
-        kind: "key-trusted",
-        userId: null,
-        actorId: by.id,
-        source: null,
-        detail: { fingerprint, label: f.label },
-      });
-    })
-    .immediate();
+  await ctx.sql.write(async (q) => {
+    if (await q.get("SELECT 1 AS found FROM trusted_keys WHERE fingerprint = ?", fingerprint)) {
+      throw new RecordConflictError([{ path: "publicKeyPem", message: `the key ${fingerprint} is already trusted` }]);
+    }
+    await q.run(
+      "INSERT INTO trusted_keys (fingerprint, public_key, label, trusted_by, trusted_at) VALUES (?, ?, ?, ?, ?)",
+      fingerprint,
+      pem,
+      f.label,
+      by.id,
+      at,
+    );
+    await logPeopleEvent(q, {
+      at,
+      kind: "key-trusted",
+      userId: null,
+      actorId: by.id,
+      source: null,
+      detail: { fingerprint, label: f.label },
+    });
+  });
   return { fingerprint, publicKeyPem: pem, label: f.label, trustedBy: by.id, trustedAt: at };
 }
 
-export function listTrustedKeys(ctx: Pick<StoreContext, "db">): TrustedKey[] {
-  return ctx.db
-    .prepare(
-      "SELECT fingerprint, public_key AS publicKeyPem, label, trusted_by AS trustedBy, trusted_at AS trustedAt FROM trusted_keys ORDER BY trusted_at",
-    )
-    .all() as TrustedKey[];
+export function listTrustedKeys(q: Q): Promise<TrustedKey[]> {
+  return q.all<TrustedKey>(
+    `SELECT fingerprint, public_key AS "publicKeyPem", label, trusted_by AS "trustedBy", trusted_at AS "trustedAt" FROM trusted_keys ORDER BY trusted_at`,
+  );
 }
 
 /** The public key named by a fingerprint: these records' own, or a trusted one. */
-export function keyForFingerprint(ctx: Pick<StoreContext, "db" | "keys">, fingerprint: string): KeyObject | undefined {
+export async function keyForFingerprint(ctx: Pick<StoreContext, "keys">, q: Q, fingerprint: string): Promise<KeyObject | undefined> {
   if (fingerprint === ctx.keys.fingerprint) return ctx.keys.publicKey;
-  const row = ctx.db.prepare("SELECT public_key AS pem FROM trusted_keys WHERE fingerprint = ?").get(fingerprint) as
-    | { pem: string }
-    | undefined;
+  const row = await q.get<{ pem: string }>("SELECT public_key AS pem FROM trusted_keys WHERE fingerprint = ?", fingerprint);
   return row ? readPublicKey(row.pem) : undefined;
 }

@@ -1,5 +1,5 @@
 import { z } from "zod";
-import type { Db } from "./db.ts";
+import type { Q } from "./sql.ts";
 import { isoNow, type StoreContext } from "./context.ts";
 import { attemptSucceeded, clearAccount, countAttempt, subjectsFor } from "./attempts.ts";
 import {
@@ -62,105 +62,106 @@ export async function addUser(ctx: StoreContext, args: NewUser, adder: Adder, so
   const name = displayName(fields.name);
   const owner = adder === "database-owner";
   const by = owner ? null : adder;
-  if (owner && countUsers(ctx.db) === 0 && fields.role !== "admin") {
+  if (owner && (await countUsers(ctx.sql)) === 0 && fields.role !== "admin") {
     throw new InvalidRecordError([{ path: "role", message: 'the first person must be an admin ("admin"), who then adds the others' }]);
   }
-  if (!owner && by === null && countUsers(ctx.db) > 0) {
+  if (!owner && by === null && (await countUsers(ctx.sql)) > 0) {
     throw new NotSignedInError([{ path: "(session)", message: "sign in as an admin to add people" }]);
   }
-  if (by !== null) requireAdmin(ctx.db, by, "add people");
+  if (by !== null) await requireAdmin(ctx.sql, by, "add people");
   if (!owner && by === null && fields.role !== "admin") {
     throw new InvalidRecordError([{ path: "role", message: 'the first person must be an admin ("admin"), who then adds the others' }]);
   }
-  assertNameFree(ctx.db, name);
+  await assertNameFree(ctx.sql, name);
   const weak = weakPassphrase(fields.passphrase, [name]);
   if (weak) throw new InvalidRecordError([{ path: "passphrase", message: weak }]);
   const stored = await hashPassphrase(fields.passphrase, ctx.passphraseCost);
   const createdAt = isoNow(ctx);
-  const id = ctx.db
-    .transaction(() => {
-      // Judged again inside the write transaction: two registrations racing for one name.
-      assertNameFree(ctx.db, name);
-      if (!owner && by === null && countUsers(ctx.db) > 0) {
-        throw new NotSignedInError([{ path: "(session)", message: "sign in as an admin to add people" }]);
-      }
-      const r = ctx.db
-        .prepare(
-          `INSERT INTO users (name, name_key, role, salt, hash, scrypt_n, scrypt_r, scrypt_p, created_at)
-           VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?)`,
-        )
-        .run(name, nameKey(name), fields.role, stored.salt, stored.hash, stored.n, stored.r, stored.p, createdAt);
-      const newId = Number(r.lastInsertRowid);
-      logPeopleEvent(ctx.db, {
-        at: createdAt,
-        kind: "user-added",
-        userId: newId,
-        actorId: by?.id ?? null,
-        source,
-        detail: { role: fields.role },
-      });
-      return newId;
-    })
-    .immediate();
+  const id = await ctx.sql.write(async (q) => {
+    // Judged again inside the write transaction: two registrations racing for one name.
+    await assertNameFree(q, name);
+    if (!owner && by === null && (await countUsers(q)) > 0) {
+      throw new NotSignedInError([{ path: "(session)", message: "sign in as an admin to add people" }]);
+    }
+    const r = await q.get<{ id: number }>(
+      `INSERT INTO users (name, name_key, role, salt, hash, scrypt_n, scrypt_r, scrypt_p, created_at)
+       VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?) RETURNING id`,
+      name,
+      nameKey(name),
+      fields.role,
+      stored.salt,
+      stored.hash,
+      stored.n,
+      stored.r,
+      stored.p,
+      createdAt,
+    );
+    const newId = Number(r?.id);
+    await logPeopleEvent(q, {
+      at: createdAt,
+      kind: "user-added",
+      userId: newId,
+      actorId: by?.id ?? null,
+      source,
+      detail: { role: fields.role },
+    });
+    return newId;
+  });
   return { id, name, role: fields.role, disabled: false, createdAt };
 }
 
-export function countUsers(db: Db): number {
-  return (db.prepare("SELECT count(*) AS n FROM users").get() as { n: number }).n;
+export async function countUsers(q: Q): Promise<number> {
+  return (await q.get<{ n: number }>("SELECT count(*) AS n FROM users"))?.n ?? 0;
 }
 
-const USER_SELECT = "SELECT id, name, role, disabled, created_at AS createdAt FROM users";
+const USER_SELECT = `SELECT id, name, role, disabled, created_at AS "createdAt" FROM users`;
 type UserRow = Omit<UserRecord, "disabled"> & { disabled: number };
 const userOf = (r: UserRow): UserRecord => ({ ...r, disabled: r.disabled === 1 });
 
-export function listUsers(db: Db): UserRecord[] {
-  return (db.prepare(`${USER_SELECT} ORDER BY name_key`).all() as UserRow[]).map(userOf);
+export async function listUsers(q: Q): Promise<UserRecord[]> {
+  return (await q.all<UserRow>(`${USER_SELECT} ORDER BY name_key`)).map(userOf);
 }
 
-export function getUser(db: Db, id: number): UserRecord {
-  const row = db.prepare(`${USER_SELECT} WHERE id = ?`).get(id) as UserRow | undefined;
+export async function getUser(q: Q, id: number): Promise<UserRecord> {
+  // A user id is a 32-bit integer in both databases; anything beyond names no one.
+  const row = Number.isSafeInteger(id) && Math.abs(id) < 2 ** 31 ? await q.get<UserRow>(`${USER_SELECT} WHERE id = ?`, id) : undefined;
   if (!row) throw new RecordNotFoundError([{ path: "id", message: `no one has the user id ${id}` }]);
   return userOf(row);
 }
 
 /** Refuse unless `by` is an admin who is still enabled. */
-export function requireAdmin(db: Db, by: Actor, doing: string): void {
-  const row = db.prepare("SELECT role, disabled FROM users WHERE id = ?").get(by.id) as { role: string; disabled: number } | undefined;
+export async function requireAdmin(q: Q, by: Actor, doing: string): Promise<void> {
+  const row = await q.get<{ role: string; disabled: number }>("SELECT role, disabled FROM users WHERE id = ?", by.id);
   if (!row || row.disabled === 1) throw new NotSignedInError([{ path: "(session)", message: "this account is disabled; sign in again" }]);
   if (row.role !== "admin") throw new NotAllowedError([{ path: "(session)", message: `only an admin may ${doing}` }]);
 }
 
 /** Disable or enable a person. Disabling ends their sessions; their past sign-offs stay valid. */
-export function setDisabled(ctx: StoreContext, id: number, disabled: boolean, by: Actor): UserRecord {
-  requireAdmin(ctx.db, by, disabled ? "disable people" : "enable people");
+export async function setDisabled(ctx: StoreContext, id: number, disabled: boolean, by: Actor): Promise<UserRecord> {
+  await requireAdmin(ctx.sql, by, disabled ? "disable people" : "enable people");
   const at = isoNow(ctx);
-  ctx.db
-    .transaction(() => {
-      getUser(ctx.db, id);
-      if (disabled && id === by.id) {
-        throw new InvalidRecordError([{ path: "id", message: "an admin cannot disable their own account; ask another admin" }]);
-      }
-      if (disabled) {
-        const admins = ctx.db.prepare("SELECT count(*) AS n FROM users WHERE role = 'admin' AND disabled = 0 AND id != ?").get(id) as {
-          n: number;
-        };
-        const target = getUser(ctx.db, id);
-        if (target.role === "admin" && admins.n === 0)
-          throw new InvalidRecordError([{ path: "id", message: "the last enabled admin cannot be disabled" }]);
-      }
-      ctx.db.prepare("UPDATE users SET disabled = ? WHERE id = ?").run(disabled ? 1 : 0, id);
-      if (disabled) ctx.db.prepare("DELETE FROM sessions WHERE user_id = ?").run(id);
-      logPeopleEvent(ctx.db, {
-        at,
-        kind: disabled ? "user-disabled" : "user-enabled",
-        userId: id,
-        actorId: by.id,
-        source: null,
-        detail: null,
-      });
-    })
-    .immediate();
-  return getUser(ctx.db, id);
+  return ctx.sql.write(async (q) => {
+    const target = await getUser(q, id);
+    if (disabled && id === by.id) {
+      throw new InvalidRecordError([{ path: "id", message: "an admin cannot disable their own account; ask another admin" }]);
+    }
+    if (disabled) {
+      const admins = await q.get<{ n: number }>("SELECT count(*) AS n FROM users WHERE role = 'admin' AND disabled = 0 AND id != ?", id);
+      if (target.role === "admin" && (admins?.n ?? 0) === 0)
+        throw new InvalidRecordError([{ path: "id", message: "the last enabled admin cannot be disabled" }]);
+    }
+    await q.run("UPDATE users SET disabled = ? WHERE id = ?", disabled ? 1 : 0, id);
+    if (disabled) await q.run("DELETE FROM sessions WHERE user_id = ?", id);
+    await logPeopleEvent(q, {
+      at,
+      kind: disabled ? "user-disabled" : "user-enabled",
+      userId: id,
+      actorId: by.id,
+      source: null,
+      detail: null,
+    });
+    return getUser(q, id);
+  });
 }
 
 const resetFields = z.strictObject({ passphrase: passphraseField });
@@ -172,12 +173,12 @@ const changeFields = z.strictObject({ current: offeredPassphraseField, passphras
  */
 export async function setPassphrase(ctx: StoreContext, id: number, body: unknown, by: Actor, source: string): Promise<void> {
   const own = id === by.id;
-  const target = getUser(ctx.db, id);
+  const target = await getUser(ctx.sql, id);
   let fields: { passphrase: string; current?: string };
   if (own && by.role !== "admin") fields = parseFields(changeFields, body);
   else if (own) fields = parseFields(resetFields.extend({ current: offeredPassphraseField.optional() }), body);
   else {
-    requireAdmin(ctx.db, by, "reset another person's passphrase");
+    await requireAdmin(ctx.sql, by, "reset another person's passphrase");
     fields = parseFields(resetFields, body);
   }
   const weak = weakPassphrase(fields.passphrase, [target.name]);
@@ -185,42 +186,44 @@ export async function setPassphrase(ctx: StoreContext, id: number, body: unknown
   if (own && by.role !== "admin") await provePassphrase(ctx, by, fields.current ?? "", source, "current");
   const stored = await hashPassphrase(fields.passphrase, ctx.passphraseCost);
   const at = isoNow(ctx);
-  ctx.db
-    .transaction(() => {
-      ctx.db
-        .prepare("UPDATE users SET salt = ?, hash = ?, scrypt_n = ?, scrypt_r = ?, scrypt_p = ? WHERE id = ?")
-        .run(stored.salt, stored.hash, stored.n, stored.r, stored.p, id);
-      if (!own) ctx.db.prepare("DELETE FROM sessions WHERE user_id = ?").run(id);
-      logPeopleEvent(ctx.db, {
-        at,
-        kind: own ? "passphrase-changed" : "passphrase-reset",
-        userId: id,
-        actorId: by.id,
-        source,
-        detail: null,
-      });
-    })
-    .immediate();
+  await ctx.sql.write(async (q) => {
+    await q.run(
+      "UPDATE users SET salt = ?, hash = ?, scrypt_n = ?, scrypt_r = ?, scrypt_p = ? WHERE id = ?",
+      stored.salt,
+      stored.hash,
+      stored.n,
+      stored.r,
+      stored.p,
+      id,
+    );
+    if (!own) await q.run("DELETE FROM sessions WHERE user_id = ?", id);
+    await logPeopleEvent(q, {
+      at,
+      kind: own ? "passphrase-changed" : "passphrase-reset",
+      userId: id,
+      actorId: by.id,
+      source,
+      detail: null,
+    });
+  });
 }
 
 /** An admin lifts the guessing delay on an account; logged. */
-export function clearDelay(ctx: StoreContext, id: number, by: Actor): boolean {
-  requireAdmin(ctx.db, by, "clear a guessing delay");
-  const user = getUser(ctx.db, id);
-  return ctx.db
-    .transaction(() => {
-      const had = clearAccount(ctx.db, nameKey(user.name));
-      logPeopleEvent(ctx.db, {
-        at: isoNow(ctx),
-        kind: "delay-cleared",
-        userId: id,
-        actorId: by.id,
-        source: null,
-        detail: { hadDelay: had },
-      });
-      return had;
-    })
-    .immediate();
+export async function clearDelay(ctx: StoreContext, id: number, by: Actor): Promise<boolean> {
+  await requireAdmin(ctx.sql, by, "clear a guessing delay");
+  const user = await getUser(ctx.sql, id);
+  return ctx.sql.write(async (q) => {
+    const had = await clearAccount(q, nameKey(user.name));
+    await logPeopleEvent(q, {
+      at: isoNow(ctx),
+      kind: "delay-cleared",
+      userId: id,
+      actorId: by.id,
+      source: null,
+      detail: { hadDelay: had },
+    });
+    return had;
+  });
 }
 
 interface StoredUser extends PassphraseHash, Actor {
@@ -248,15 +251,15 @@ function decoyHash(cost: ScryptCost): Promise<PassphraseHash> {
 export async function authenticate(ctx: StoreContext, name: string, passphrase: string, source: string): Promise<Actor> {
   const key = nameKey(name);
   const subjects = subjectsFor(key, source);
-  countAttempt(ctx.db, subjects, ctx.now().getTime());
-  const row = ctx.db.prepare(`${STORED_SELECT} WHERE name_key = ?`).get(key) as StoredUser | undefined;
+  await countAttempt(ctx.sql, subjects, ctx.now().getTime());
+  const row = await ctx.sql.get<StoredUser>(`${STORED_SELECT} WHERE name_key = ?`, key);
   const against = row ?? (await decoyHash(ctx.passphraseCost ?? DEFAULT_SCRYPT_COST));
   const matches = await passphraseMatches(passphrase, against);
   if (!row || !matches || row.disabled === 1) {
-    logPeopleEvent(ctx.db, { at: isoNow(ctx), kind: "sign-in-refused", userId: null, actorId: null, source, detail: null });
+    await logPeopleEvent(ctx.sql, { at: isoNow(ctx), kind: "sign-in-refused", userId: null, actorId: null, source, detail: null });
     throw new NotSignedInError([{ path: "passphrase", message: "that name and passphrase do not match an enabled account" }]);
   }
-  attemptSucceeded(ctx.db, subjects);
+  await attemptSucceeded(ctx.sql, subjects);
   return { id: row.id, name: row.name, role: row.role };
 }
 
@@ -268,19 +271,19 @@ export async function provePassphrase(
   source: string,
   path = "passphrase",
 ): Promise<void> {
-  const row = ctx.db.prepare(`${STORED_SELECT} WHERE id = ?`).get(by.id) as StoredUser | undefined;
+  const row = await ctx.sql.get<StoredUser>(`${STORED_SELECT} WHERE id = ?`, by.id);
   if (!row || row.disabled === 1) throw new NotSignedInError([{ path: "(session)", message: "this account is disabled; sign in again" }]);
   const subjects = subjectsFor(nameKey(row.name), source);
-  countAttempt(ctx.db, subjects, ctx.now().getTime());
+  await countAttempt(ctx.sql, subjects, ctx.now().getTime());
   if (!(await passphraseMatches(passphrase, row))) {
     throw new WrongPassphraseError([{ path, message: `is not ${row.name}'s passphrase` }]);
   }
-  attemptSucceeded(ctx.db, subjects);
+  await attemptSucceeded(ctx.sql, subjects);
 }
 
 /** A RecordConflictError when someone is already registered under this name or one that looks the same. */
-export function assertNameFree(db: Db, name: string): void {
-  const taken = db.prepare("SELECT name FROM users WHERE name_key = ?").get(nameKey(name)) as { name: string } | undefined;
+export async function assertNameFree(q: Q, name: string): Promise<void> {
+  const taken = await q.get<{ name: string }>("SELECT name FROM users WHERE name_key = ?", nameKey(name));
   if (taken) {
     const same =
       taken.name === name

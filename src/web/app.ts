@@ -46,11 +46,11 @@ export function createApp(opts: AppOptions = {}): Hono {
   );
   app.use("*", refuseForeignHost(opts.allowedHosts));
   app.use("*", refuseCrossSite());
-  app.get("/healthz", (c) => {
+  app.get("/healthz", async (c) => {
     c.header("Cache-Control", "no-store");
     if (!opts.store) return c.json({ status: "ok" });
     try {
-      opts.store.probeWrite();
+      await opts.store.probeWrite();
       return c.json({ status: "ok", records: "writable" });
     } catch (err) {
       if (!isStorageFault(err)) console.error(err);

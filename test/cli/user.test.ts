@@ -43,12 +43,12 @@ describe("user add", () => {
     const io = pipedIo(`${PHRASE}\n`);
     expect(await userAddCommand(["Mira Solberg", "--role", "admin"], io, { dbPath, passphraseCost: FAST_SCRYPT })).toBe(0);
     expect(io.stdout.text).toBe('added admin "Mira Solberg" (user id 1)\n');
-    const store = openStore({ path: dbPath });
+    const store = await openStore({ path: dbPath });
     // The trailing newline is not part of the passphrase.
     await expect(store.signIn({ name: "Mira Solberg", passphrase: PHRASE }, "test")).resolves.toMatchObject({
       user: { name: "Mira Solberg", role: "admin" },
     });
-    store.close();
+    await store.close();
   });
 
   it("refuses an engineer as the first person, and a role that is not one, with exit code 2", async () => {

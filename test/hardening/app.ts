@@ -4,7 +4,7 @@ import { mkdtempSync, rmSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { Hono } from "hono";
-import { openStore, type SqliteStore } from "../../src/store/index.ts";
+import { openSqliteStore as openStore, type SqliteStore } from "../../src/store/index.ts";
 import { wholeApp as serve } from "../../src/web/whole.ts";
 
 export interface WholeApp {
@@ -63,7 +63,7 @@ export function wholeApp(): WholeApp {
     store,
     token,
     close() {
-      store.close();
+      void store.close();
       rmSync(dir, { recursive: true, force: true });
     },
   };

@@ -15,7 +15,7 @@ import { BASES, bodyOf, documentOf, hostileValue, plan } from "./hostile.ts";
 
 const whole = wholeApp();
 const { app } = whole;
-const saved = whole.store.createCheck({ input: { ...DEMOS[0].document, calcNumber: "FORM-FUZZ-1" } });
+const saved = await whole.store.createCheck({ input: { ...DEMOS[0].document, calcNumber: "FORM-FUZZ-1" } });
 afterAll(() => whole.close());
 
 const formOf = (doc: unknown) => postedForm(doc);

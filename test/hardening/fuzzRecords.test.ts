@@ -9,7 +9,7 @@ import { join } from "node:path";
 import fc from "fast-check";
 import { afterAll, describe, expect, it } from "vitest";
 import { DEMOS } from "../../src/demo/index.ts";
-import { openStore } from "../../src/store/index.ts";
+import { openSqliteStore as openStore } from "../../src/store/index.ts";
 import { createApp } from "../../src/web/app.ts";
 import { recordsApi } from "../../src/web/records/api.ts";
 import { bounded, expectErrorsDoc } from "./answers.ts";
@@ -19,19 +19,19 @@ const dir = mkdtempSync(join(tmpdir(), "hoopwise-fuzz-records-"));
 // A cheap passphrase hash: the routes' answers are under test here, not the hashing cost.
 const store = openStore({ path: join(dir, "records.db"), passphraseCost: { n: 2 ** 10, r: 8, p: 1 } });
 const app = createApp({ mounts: [recordsApi({ store })] });
-afterAll(() => {
-  store.close();
+afterAll(async () => {
+  await store.close();
   rmSync(dir, { recursive: true, force: true });
 });
 
 /** Invented signers, registered once so sign-offs can get past the name check. */
 const SIGNER = { name: "Ilse Marrow-Quint", passphrase: "amber lantern over the weir" };
-const seeded = store.createCheck({
+const seeded = await store.createCheck({
   input: { ...DEMOS[0].document, calcNumber: "FUZZ-SEED-1" },
   calcNumber: "FUZZ-SEED-1",
   savedBy: SIGNER.name,
 });
-const exported = store.exportCheck(seeded.id);
+const exported = await store.exportCheck(seeded.id);
 
 /** A text field as a client might send it: a fair value most of the time, anything at all otherwise. */
 const field = (fair: fc.Arbitrary<unknown>) =>
@@ -114,10 +114,10 @@ describe("records routes under 1 000 generated requests", () => {
     for (const s of [201, 404, 415, 422]) expect(statuses).toContain(s);
 
     expect(store.db.pragma("integrity_check", { simple: true })).toBe("ok");
-    const listed = new Set(store.listChecks().map((c) => c.id));
+    const listed = new Set((await store.listChecks()).map((c) => c.id));
     for (const [id, revisions] of saved) {
       expect(listed.has(id)).toBe(true);
-      const kept = new Map(store.getCheck(id).revisions.map((r) => [r.number, r.fingerprint]));
+      const kept = new Map((await store.getCheck(id)).revisions.map((r) => [r.number, r.fingerprint]));
       for (const [n, fp] of revisions) expect(kept.get(n)).toBe(fp);
     }
   });

@@ -80,9 +80,9 @@ function routeFamilies(id: string): [string, string, RequestInit, number][] {
 describe("in-process, every route family", () => {
   let whole: WholeApp;
   let id: string;
-  beforeAll(() => {
+  beforeAll(async () => {
     whole = wholeApp();
-    id = whole.store.createCheck({ input: { ...DEMOS[0].document, calcNumber: "HDR-1" } }).id;
+    id = (await whole.store.createCheck({ input: { ...DEMOS[0].document, calcNumber: "HDR-1" } })).id;
   });
   afterAll(() => whole.close());
 
@@ -124,7 +124,7 @@ describe("the server as started", () => {
   }, 90_000);
   afterAll(() => server?.dispose());
 
-  it("listens on 127.0.0.1 only when HOST is not set", () => {
+  it("listens on 127.0.0.1 only when HOST is not set", async () => {
     expect(server.base).toMatch(/^http:\/\/127\.0\.0\.1:\d+$/);
     const port = Number(new URL(server.base).port);
     const hexPort = port.toString(16).toUpperCase().padStart(4, "0");

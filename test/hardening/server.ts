@@ -7,7 +7,7 @@ import { mkdtempSync, rmSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { fileURLToPath } from "node:url";
-import { openStore } from "../../src/store/index.ts";
+import { openSqliteStore as openStore } from "../../src/store/index.ts";
 
 const ROOT = fileURLToPath(new URL("../..", import.meta.url));
 /** Start-up includes compiling the TypeScript; generous so a slow CI machine is not taken for a broken server. */
@@ -36,6 +36,8 @@ export async function startServer(extraEnv: Record<string, string> = {}): Promis
   const dbPath = join(dir, "records.db");
   const env: NodeJS.ProcessEnv = { ...process.env, PORT: "0", HOOPWISE_DB: dbPath, ...extraEnv };
   if (!("HOST" in extraEnv)) delete env.HOST;
+  // A developer's own DATABASE_URL must not turn the test server onto their records.
+  if (!("DATABASE_URL" in extraEnv)) delete env.DATABASE_URL;
   const child = spawn(process.execPath, ["--import", "tsx", "src/server.ts"], { cwd: ROOT, env });
   let output = "";
   child.stdout.setEncoding("utf8").on("data", (s: string) => (output += s));
@@ -79,7 +81,7 @@ export async function startServer(extraEnv: Record<string, string> = {}): Promis
       try {
         await store.addUser({ ...ADMIN, role: "admin" }, "database-owner", "test");
       } finally {
-        store.close();
+        await store.close();
       }
       const res = await fetch(`${base}/api/v1/session`, {
         method: "POST",

@@ -1,18 +1,16 @@
-import { describe, expect, it } from "vitest";
-import { openStore } from "../../src/store/index.ts";
-import { fakeValidate, sampleInput, tempDbPath } from "./helpers.ts";
+import { expect, it } from "vitest";
+import { fakeValidate, onEachBackend, sampleInput } from "./helpers.ts";
 import { startSaver } from "./processes.ts";
 
-describe("concurrent saves to one check", () => {
+onEachBackend("concurrent saves to one check", (b) => {
   it("give consecutive revision numbers with no gaps or duplicates across processes", async () => {
-    const path = tempDbPath();
-    const setup = openStore({ path, validate: fakeValidate });
-    const { id } = setup.createCheck({ input: sampleInput(), calcNumber: "HW-RACE" });
-    setup.close();
+    const place = await b.place();
+    const setup = await b.store({ place, validate: fakeValidate });
+    const { id } = await setup.createCheck({ input: sampleInput(), calcNumber: "HW-RACE" });
 
     const PROCESSES = 4;
     const EACH = 25;
-    const savers = Array.from({ length: PROCESSES }, (_, i) => startSaver(path, id, EACH, `writer-${i}`, true));
+    const savers = Array.from({ length: PROCESSES }, (_, i) => startSaver(place, id, EACH, `writer-${i}`, true));
     // Every child has opened the database before any starts writing, so the saves really overlap.
     await Promise.all(savers.map((s) => s.linesSeen(1)));
     for (const s of savers) s.child.stdin.end("go\n");
@@ -25,11 +23,9 @@ describe("concurrent saves to one check", () => {
     // Each process saw its own numbers rise: a later commit never got an earlier number.
     for (const s of savers) expect(s.committed).toEqual([...s.committed].sort((a, b) => a - b));
 
-    const store = openStore({ path, validate: fakeValidate });
-    const check = store.getCheck(id);
+    const check = await setup.getCheck(id);
     expect(check.revisions.map((r) => r.number)).toEqual([1, ...expected]);
     expect(check.revisions.filter((r) => r.state !== "superseded").map((r) => r.number)).toEqual([PROCESSES * EACH + 1]);
     expect(check.events.filter((e) => e.kind === "superseded")).toHaveLength(PROCESSES * EACH);
-    store.close();
   }, 60_000);
 });

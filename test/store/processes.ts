@@ -12,8 +12,18 @@ export interface Saver {
   exited: Promise<{ code: number | null; signal: NodeJS.Signals | null; stderr: string }>;
 }
 
-export function startSaver(dbPath: string, checkId: string, count: number, tag: string, wait = false): Saver {
-  const child = spawn(process.execPath, ["--import", "tsx", SAVE_LOOP, dbPath, checkId, String(count), tag, ...(wait ? ["--wait"] : [])]);
+/** `place`: the records as the store options that open them (an SQLite path, or a PostgreSQL URL and schema). */
+export function startSaver(place: object, checkId: string, count: number, tag: string, wait = false): Saver {
+  const child = spawn(process.execPath, [
+    "--import",
+    "tsx",
+    SAVE_LOOP,
+    JSON.stringify(place),
+    checkId,
+    String(count),
+    tag,
+    ...(wait ? ["--wait"] : []),
+  ]);
   const committed: number[] = [];
   let lines = 0;
   let partial = "";

@@ -68,7 +68,7 @@ describe("the server's edges", () => {
       from("10.0.0.7"),
     );
     expect(made.status).toBe(303);
-    expect(store.countUsers()).toBe(0);
+    expect(await store.countUsers()).toBe(0);
     await makeAdmin(store);
     expect((await setup("127.0.0.1")).status).toBe(303);
   });
@@ -85,7 +85,7 @@ describe("the server's edges", () => {
 
   it("answers a write to a read-only database with 503 in words, and loses nothing committed", async () => {
     const store = testStore();
-    const { id } = store.createCheck({ input: sampleInput() });
+    const { id } = await store.createCheck({ input: sampleInput() });
     const app = wholeApp(store);
     const session = await makeAdmin(store);
     store.db.pragma("query_only = ON");
@@ -97,15 +97,15 @@ describe("the server's edges", () => {
     expect(res.status).toBe(503);
     expect((await res.json()).errors[0].message).toMatch(/read-only|cannot be written|failing/);
     store.db.pragma("query_only = OFF");
-    expect(store.getCheck(id).revisions).toHaveLength(1);
+    expect((await store.getCheck(id)).revisions).toHaveLength(1);
   });
 
-  it("creates the database and the signing key readable by their owner only", () => {
+  it("creates the database and the signing key readable by their owner only", async () => {
     const path = tempDbPath();
     const store = testStore({ path });
     expect(statSync(path).mode & 0o777).toBe(0o600);
     expect(statSync(keyPathFor(path)).mode & 0o777).toBe(0o600);
-    store.close();
+    await store.close();
     // An older file left readable by others is tightened on the next open.
     chmodSync(keyPathFor(path), 0o644);
     chmodSync(path, 0o644);

@@ -34,7 +34,7 @@ let dir: string;
 
 beforeAll(async () => {
   dir = mkdtempSync(join(tmpdir(), "hoopwise-records-e2e-"));
-  store = openStore({ path: join(dir, "records.db"), passphraseCost: FAST_SCRYPT });
+  store = await openStore({ path: join(dir, "records.db"), passphraseCost: FAST_SCRYPT });
   const app = wholeApp(store);
   await new Promise<void>((resolve) => {
     server = serve({ fetch: app.fetch, hostname: "127.0.0.1", port: 0 }, () => resolve());

@@ -81,7 +81,7 @@ describe("the list of saved checks", () => {
     const s = await site(true);
     const { status, html } = await s.get("/records");
     expect(status).toBe(200);
-    for (const c of s.store.listChecks()) {
+    for (const c of await s.store.listChecks()) {
       const row = new RegExp(`<tr data-check="${c.id}">[\\s\\S]*?</tr>`).exec(html)?.[0] ?? "";
       expect(row).toContain(`href="/records/${c.id}"`);
       expect(row).toContain(c.calcNumber);
@@ -90,12 +90,7 @@ describe("the list of saved checks", () => {
       expect(row).toContain('data-state="draft"');
       expect(row).toContain(`/api/v1/checks/${c.id}/revisions/1/sheet`);
     }
-    expect(
-      s.store
-        .listChecks()
-        .map((c) => c.calcNumber)
-        .sort(),
-    ).toEqual(["AR500-SHELL-003", "L30-FUS-017"]);
+    expect((await s.store.listChecks()).map((c) => c.calcNumber).sort()).toEqual(["AR500-SHELL-003", "L30-FUS-017"]);
     expect(html).toContain("not a code-compliance certificate");
     expect(html).toContain("licensed or authorized engineer");
     expect(html).not.toMatch(/\sstyle="|<script(?![^>]*\ssrc=)/);
@@ -120,7 +115,7 @@ describe("saving from the checker", () => {
     expect(page1.html).toContain("Saved as revision 1");
     expect(page1.html).toContain("L30-FUS-017");
     expect(stateOf(page1.html, 1)).toBe("draft");
-    expect(s.store.getCheck(first.id).revisions[0].savedBy).toBe("Mira Castellanos-Ode");
+    expect((await s.store.getCheck(first.id)).revisions[0].savedBy).toBe("Mira Castellanos-Ode");
 
     // Opened from the records, the checker carries the check's id, so saving adds a revision to it.
     const open = await s.get(`/records/${first.id}/revisions/1/open`);
@@ -140,32 +135,31 @@ describe("saving from the checker", () => {
 
     const input = await s.get(`/records/${first.id}/revisions/2/input`);
     expect(input.status).toBe(200);
-    expect(JSON.parse(input.html)).toEqual(s.store.getCheck(first.id).revisions[1].input);
+    expect(JSON.parse(input.html)).toEqual((await s.store.getCheck(first.id)).revisions[1].input);
     expect((await s.get(`/records/${first.id}/revisions/x/input`)).status).toBe(404);
 
     const again = await saveCabin(s, { record: first.id, "shell.thickness": "1.2" });
     expect(again.location).toBe(`/records/${first.id}?unchanged=2`);
     expect((await s.get(again.location)).html).toContain("Nothing changed since revision 2");
-    expect(s.store.getCheck(first.id).revisions).toHaveLength(2);
+    expect((await s.store.getCheck(first.id)).revisions).toHaveLength(2);
   });
 
   it("asks before saving onto a calculation number already in the records, and saves the revision once confirmed", async () => {
     const s = await site(true);
-    const existing = s.store.listChecks().find((c) => c.calcNumber === "L30-FUS-017")!;
+    const existing = (await s.store.listChecks()).find((c) => c.calcNumber === "L30-FUS-017")!;
     const ask = await s.post("/records/save", cabinForm({ "shell.thickness": "1.1" }));
     expect(ask.status).toBe(409);
     expect(ask.html).toContain("Save as revision 2 of L30-FUS-017");
-    expect(s.store.getCheck(existing.id).revisions).toHaveLength(1);
+    expect((await s.store.getCheck(existing.id)).revisions).toHaveLength(1);
     const document = /name="document" value="([^"]*)"/
       .exec(ask.html)![1]
       .replace(/&quot;/g, '"')
       .replace(/&amp;/g, "&");
     const done = await s.post(`/records/${existing.id}/revisions`, { document });
     expect(done.location).toBe(`/records/${existing.id}?saved=2`);
-    expect((s.store.getCheck(existing.id).revisions[1].input as { shell: { thickness_mm: number } }).shell.thickness_mm).toBeCloseTo(
-      1.1,
-      12,
-    );
+    expect(
+      ((await s.store.getCheck(existing.id)).revisions[1].input as { shell: { thickness_mm: number } }).shell.thickness_mm,
+    ).toBeCloseTo(1.1, 12);
   });
 
   it("sends a check with mistakes back to the checker with the message beside the field, and saves nothing", async () => {
@@ -174,7 +168,7 @@ describe("saving from the checker", () => {
     expect(res.status).toBe(422);
     expect(res.html).toContain("Not saved: correct the marked fields first.");
     expect(textOf(res.html, "e-shell-thickness")).toBe("the wall thickness must be a number");
-    expect(s.store.listChecks()).toEqual([]);
+    expect(await s.store.listChecks()).toEqual([]);
   });
 
   it("answers a save onto a check that does not exist with the checker and the reason, and a 404 page for a confirmed one", async () => {
@@ -186,12 +180,12 @@ describe("saving from the checker", () => {
     const confirmed = await s.post("/records/gone-check/revisions", { document: JSON.stringify(cabin) });
     expect(confirmed.status).toBe(404);
     expect(confirmed.html).toContain("<h1>Not found</h1>");
-    expect(s.store.listChecks()).toEqual([]);
+    expect(await s.store.listChecks()).toEqual([]);
   });
 
   it("answers every records page without a session with 401 and the sign-in form, and no-store", async () => {
     const s = await site(true);
-    for (const path of ["/records", "/records/people", `/records/${s.store.listChecks()[0].id}`]) {
+    for (const path of ["/records", "/records/people", `/records/${(await s.store.listChecks())[0].id}`]) {
       const res = await s.as(null).get(path);
       expect(res.status, path).toBe(401);
       expect(res.html).toContain('id="signin"');
@@ -199,7 +193,7 @@ describe("saving from the checker", () => {
     }
     const save = await s.as(null).post("/records/save", cabinForm());
     expect(save.status).toBe(401);
-    expect(s.store.listChecks()).toHaveLength(2);
+    expect(await s.store.listChecks()).toHaveLength(2);
     // The checker itself stays open.
     expect((await s.as(null).get("/")).status).toBe(200);
   });
@@ -234,7 +228,7 @@ describe("people, and signing", () => {
       .as(TEO)
       .post("/records/people", { name: "Eli Other", role: "engineer", passphrase: dee.passphrase, again: dee.passphrase });
     expect(byEngineer.status).toBe(403);
-    expect(s.store.listUsers().map((p) => p.name)).toEqual([dee.name, MIRA.name, RUI.name, TEO.name]);
+    expect((await s.store.listUsers()).map((p) => p.name)).toEqual([dee.name, MIRA.name, RUI.name, TEO.name]);
     for (const secret of [...SECRETS, dee.passphrase, "password1234"]) for (const body of s.bodies) expect(body).not.toContain(secret);
   });
 

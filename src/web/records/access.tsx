@@ -24,8 +24,8 @@ export function accessPages({ store }: { store: Store }): Hono {
   const app = new Hono();
   for (const path of [SIGNIN_PATH, SIGNOUT_PATH, SETUP_PATH]) app.use(path, noStore);
 
-  app.get(SIGNIN_PATH, (c) => {
-    if (store.countUsers() === 0 && isLocalRequest(c)) return c.redirect(SETUP_PATH, 303);
+  app.get(SIGNIN_PATH, async (c) => {
+    if ((await store.countUsers()) === 0 && isLocalRequest(c)) return c.redirect(SETUP_PATH, 303);
     return signInPage(c, { next: c.req.query("next") }, NO_ERRORS, 200);
   });
 
@@ -42,22 +42,22 @@ export function accessPages({ store }: { store: Store }): Hono {
     }
   });
 
-  app.post(SIGNOUT_PATH, (c) => {
+  app.post(SIGNOUT_PATH, async (c) => {
     const token = tokenOf(c);
-    if (token) store.signOut(token);
+    if (token) await store.signOut(token);
     clearSessionCookie(c);
     return c.redirect(SIGNIN_PATH, 303);
   });
 
-  const setupOpen = (c: Context) => store.countUsers() === 0 && isLocalRequest(c);
+  const setupOpen = async (c: Context) => isLocalRequest(c) && (await store.countUsers()) === 0;
 
-  app.get(SETUP_PATH, (c) => {
-    if (!setupOpen(c)) return c.redirect(SIGNIN_PATH, 303);
+  app.get(SETUP_PATH, async (c) => {
+    if (!(await setupOpen(c))) return c.redirect(SIGNIN_PATH, 303);
     return page(c, "First run", <SetupView errors={NO_ERRORS} />);
   });
 
   app.post(SETUP_PATH, smallForm, async (c) => {
-    if (!setupOpen(c)) return c.redirect(SIGNIN_PATH, 303);
+    if (!(await setupOpen(c))) return c.redirect(SIGNIN_PATH, 303);
     const f = await postedFields(c);
     if ((f.passphrase ?? "") !== (f.again ?? "")) {
       const errors = formErrors(

@@ -48,19 +48,19 @@ export function recordsApi({ store }: RecordsDeps): Hono<RecordsEnv> {
   app.use("/api/v1/users/*", signedIn);
   app.use("/api/v1/keys/trusted", signedIn);
   app.get("/api/v1/session", signedIn, (c) => c.json({ user: c.get("user") }));
-  app.delete("/api/v1/session", signedIn, (c) => {
+  app.delete("/api/v1/session", signedIn, async (c) => {
     const token = tokenOf(c);
-    if (token) store.signOut(token);
+    if (token) await store.signOut(token);
     clearSessionCookie(c);
     return c.body(null, 204);
   });
 
-  app.get("/api/v1/checks", (c) => c.json({ checks: store.listChecks() }));
+  app.get("/api/v1/checks", async (c) => c.json({ checks: await store.listChecks() }));
 
   app.post("/api/v1/checks", tooLarge, async (c) => {
     const body = await readJson(c.req.raw);
     if (!body.ok) return c.json(body.body, body.status);
-    const created = store.createCheck(body.value as NewCheck, c.get("user"));
+    const created = await store.createCheck(body.value as NewCheck, c.get("user"));
     c.header("Location", `/api/v1/checks/${encodeURIComponent(created.id)}`);
     return c.json(created, 201);
   });
@@ -69,17 +69,17 @@ export function recordsApi({ store }: RecordsDeps): Hono<RecordsEnv> {
   app.post("/api/v1/checks/import", importLimit, async (c) => {
     const body = await readJson(c.req.raw);
     if (!body.ok) return c.json(body.body, body.status);
-    const imported = store.importCheck(body.value, c.get("user"));
+    const imported = await store.importCheck(body.value, c.get("user"));
     c.header("Location", `/api/v1/checks/${encodeURIComponent(imported.id)}`);
     return c.json(imported, 201);
   });
 
-  app.get("/api/v1/checks/:id", (c) => c.json(store.getCheck(c.req.param("id"))));
+  app.get("/api/v1/checks/:id", async (c) => c.json(await store.getCheck(c.req.param("id"))));
 
   app.post("/api/v1/checks/:id/revisions", tooLarge, async (c) => {
     const body = await readJson(c.req.raw);
     if (!body.ok) return c.json(body.body, body.status);
-    const saved = store.addRevision(c.req.param("id"), body.value as NewRevision, c.get("user"));
+    const saved = await store.addRevision(c.req.param("id"), body.value as NewRevision, c.get("user"));
     // An unchanged input creates nothing: 200 with the existing revision, and says so.
     return c.json(saved, saved.unchanged ? 200 : 201);
   });
@@ -90,14 +90,14 @@ export function recordsApi({ store }: RecordsDeps): Hono<RecordsEnv> {
     return c.json(await store.signOff(c.req.param("id"), body.value as SignOffRequest, c.get("user"), sourceOf(c)), 201);
   });
 
-  app.get("/api/v1/checks/:id/export", (c) => {
-    const doc = store.exportCheck(c.req.param("id"));
+  app.get("/api/v1/checks/:id/export", async (c) => {
+    const doc = await store.exportCheck(c.req.param("id"));
     const file = doc.check.calcNumber.replace(/[^A-Za-z0-9._-]+/g, "_");
     c.header("Content-Disposition", `attachment; filename="${file}.hoopwise.json"`);
     return c.json(doc);
   });
 
-  app.get("/api/v1/users", (c) => c.json({ users: store.listUsers() }));
+  app.get("/api/v1/users", async (c) => c.json({ users: await store.listUsers() }));
 
   app.post("/api/v1/users", tooLarge, async (c) => {
     const body = await readJson(c.req.raw);
@@ -105,9 +105,11 @@ export function recordsApi({ store }: RecordsDeps): Hono<RecordsEnv> {
     return c.json(await store.addUser(body.value as NewUser, c.get("user"), sourceOf(c)), 201);
   });
 
-  app.post("/api/v1/users/:id/disable", (c) => c.json(store.setDisabled(userId(c.req.param("id")), true, c.get("user"))));
-  app.post("/api/v1/users/:id/enable", (c) => c.json(store.setDisabled(userId(c.req.param("id")), false, c.get("user"))));
-  app.post("/api/v1/users/:id/clear-delay", (c) => c.json({ cleared: store.clearDelay(userId(c.req.param("id")), c.get("user")) }));
+  app.post("/api/v1/users/:id/disable", async (c) => c.json(await store.setDisabled(userId(c.req.param("id")), true, c.get("user"))));
+  app.post("/api/v1/users/:id/enable", async (c) => c.json(await store.setDisabled(userId(c.req.param("id")), false, c.get("user"))));
+  app.post("/api/v1/users/:id/clear-delay", async (c) =>
+    c.json({ cleared: await store.clearDelay(userId(c.req.param("id")), c.get("user")) }),
+  );
   app.post("/api/v1/users/:id/passphrase", tooLarge, async (c) => {
     const body = await readJson(c.req.raw);
     if (!body.ok) return c.json(body.body, body.status);
@@ -115,11 +117,11 @@ export function recordsApi({ store }: RecordsDeps): Hono<RecordsEnv> {
     return c.body(null, 204);
   });
 
-  app.get("/api/v1/keys/trusted", (c) => c.json({ trusted: store.listTrustedKeys() }));
+  app.get("/api/v1/keys/trusted", async (c) => c.json({ trusted: await store.listTrustedKeys() }));
   app.post("/api/v1/keys/trusted", tooLarge, async (c) => {
     const body = await readJson(c.req.raw);
     if (!body.ok) return c.json(body.body, body.status);
-    return c.json(store.trustKey(body.value, c.get("user")), 201);
+    return c.json(await store.trustKey(body.value, c.get("user")), 201);
   });
 
   return app;

@@ -18,7 +18,7 @@ export function tokenOf(c: Context): string | undefined {
   return bearer ?? getCookie(c, SESSION_COOKIE);
 }
 
-export function currentUser(c: Context, store: Store): Actor | undefined {
+export async function currentUser(c: Context, store: Store): Promise<Actor | undefined> {
   const token = tokenOf(c);
   return token ? store.userForToken(token) : undefined;
 }
@@ -79,7 +79,7 @@ export const noStore: MiddlewareHandler = async (c, next) => {
  */
 export function requireUser(store: Store, answer401?: (c: Context) => Response | Promise<Response>): MiddlewareHandler<RecordsEnv> {
   return async (c, next) => {
-    const user = currentUser(c, store);
+    const user = await currentUser(c, store);
     if (!user) {
       c.header("Cache-Control", "no-store");
       if (answer401) return answer401(c);

@@ -49,7 +49,7 @@ export function recordsPages({ store }: { store: Store }): Hono<RecordsEnv> {
   for (const path of ["/records", "/records/*"]) app.use(path, noStore, guard);
   app.route("/", saveRoutes({ store }));
 
-  app.get("/records", (c) => page(c, "Saved checks", <ChecksList checks={store.listChecks()} />));
+  app.get("/records", async (c) => page(c, "Saved checks", <ChecksList checks={await store.listChecks()} />));
 
   app.get(PEOPLE_PATH, (c) => {
     const done = c.req.query("done");
@@ -115,7 +115,7 @@ export function recordsPages({ store }: { store: Store }): Hono<RecordsEnv> {
   app.post(`${PEOPLE_PATH}/trusted-keys`, smallForm, async (c) => {
     const f = await postedFields(c);
     try {
-      const k = store.trustKey({ publicKeyPem: f.publicKeyPem ?? "", label: f.label ?? "" }, c.get("user"));
+      const k = await store.trustKey({ publicKeyPem: f.publicKeyPem ?? "", label: f.label ?? "" }, c.get("user"));
       return c.redirect(
         `${PEOPLE_PATH}?done=${encodeURIComponent(`The key ${k.fingerprint} (${k.label}) is now trusted for imports.`)}`,
         303,
@@ -137,21 +137,21 @@ export function recordsPages({ store }: { store: Store }): Hono<RecordsEnv> {
       await store.setPassphrase(id, { passphrase: f.passphrase ?? "" }, by, sourceOf(c));
       done = "The passphrase is reset; that person's sessions have ended.";
     } else if (action === "clear-delay") {
-      done = store.clearDelay(id, by) ? "The guessing delay is cleared." : "There was no guessing delay to clear.";
+      done = (await store.clearDelay(id, by)) ? "The guessing delay is cleared." : "There was no guessing delay to clear.";
     } else {
-      const u = store.setDisabled(id, action === "disable", by);
+      const u = await store.setDisabled(id, action === "disable", by);
       done = `${u.name} is ${u.disabled ? "disabled: their sessions have ended" : "enabled again"}.`;
     }
     return c.redirect(`${PEOPLE_PATH}?done=${encodeURIComponent(done)}`, 303);
   });
 
-  app.get("/records/:id", (c) => {
-    const check = store.getCheck(c.req.param("id"));
+  app.get("/records/:id", async (c) => {
+    const check = await store.getCheck(c.req.param("id"));
     return checkPage(c, check, { errors: NO_ERRORS }, 200, outcomeNotice(check, c.req.query()));
   });
 
   app.post("/records/:id/sign", smallForm, async (c) => {
-    const check = store.getCheck(c.req.param("id"));
+    const check = await store.getCheck(c.req.param("id"));
     const f = await postedFields(c);
     const form = { role: f.role };
     if (!f.passphrase) {
@@ -171,7 +171,7 @@ export function recordsPages({ store }: { store: Store }): Hono<RecordsEnv> {
       // Reload: a refusal for a superseded revision means someone saved meanwhile, and the page should show it.
       return checkPage(
         c,
-        store.getCheck(check.id),
+        await store.getCheck(check.id),
         { ...form, errors },
         statusOf(err),
         refused("Not signed: see the message beside the field."),
@@ -179,14 +179,14 @@ export function recordsPages({ store }: { store: Store }): Hono<RecordsEnv> {
     }
   });
 
-  app.get("/records/:id/compare", (c) => {
-    const check = store.getCheck(c.req.param("id"));
+  app.get("/records/:id/compare", async (c) => {
+    const check = await store.getCheck(c.req.param("id"));
     const comparison = compare(check, c.req.query("from"), c.req.query("to"));
     return page(c, `Compare · ${check.calcNumber}`, <CompareView {...comparison} />, comparison.errors.size ? 422 : 200);
   });
 
-  app.get("/records/:id/revisions/:n/open", (c) => {
-    const { check, revision } = savedRevision(c);
+  app.get("/records/:id/revisions/:n/open", async (c) => {
+    const { check, revision } = await savedRevision(c);
     const link = encodeCheck(revision.input);
     if (link.length > MAX_LINK_CHARS) {
       const text = (
@@ -195,20 +195,20 @@ export function recordsPages({ store }: { store: Store }): Hono<RecordsEnv> {
           then open that file in the checker.
         </>
       );
-      return checkPage(c, store.getCheck(check.id), { errors: NO_ERRORS }, 200, refused(text));
+      return checkPage(c, await store.getCheck(check.id), { errors: NO_ERRORS }, 200, refused(text));
     }
     return c.redirect(`/?c=${link}&record=${encodeURIComponent(check.id)}`, 303);
   });
 
   // One revision's input as a check file, the same document the checker downloads and opens.
-  app.get("/records/:id/revisions/:n/input", (c) => {
-    const { check, revision } = savedRevision(c);
+  app.get("/records/:id/revisions/:n/input", async (c) => {
+    const { check, revision } = await savedRevision(c);
     const file = `${check.calcNumber.replace(/[^A-Za-z0-9._-]+/g, "_")}-rev${revision.number}.json`;
     c.header("Content-Disposition", `attachment; filename="${file}"`);
     return c.body(`${JSON.stringify(revision.input, null, 2)}\n`, 200, { "Content-Type": "application/json; charset=utf-8" });
   });
 
-  function savedRevision(c: Context) {
+  async function savedRevision(c: Context) {
     const n = Number(c.req.param("n"));
     if (!Number.isInteger(n) || n < 1)
       throw new RecordNotFoundError([{ path: "revision", message: `there is no revision “${c.req.param("n")}”` }]);
@@ -223,7 +223,13 @@ export function recordsPages({ store }: { store: Store }): Hono<RecordsEnv> {
   async function peoplePage(c: Context<RecordsEnv>, forms: Partial<PeopleForms>, status: Status, notice?: Notice) {
     const all: PeopleForms = { add: { errors: NO_ERRORS }, own: { errors: NO_ERRORS }, trust: { errors: NO_ERRORS }, ...forms };
     const view = (
-      <PeopleView user={c.get("user")} users={store.listUsers()} forms={all} ownKey={store.publicKey()} trusted={store.listTrustedKeys()} />
+      <PeopleView
+        user={c.get("user")}
+        users={await store.listUsers()}
+        forms={all}
+        ownKey={store.publicKey()}
+        trusted={await store.listTrustedKeys()}
+      />
     );
     return page(c, "People", view, status, notice);
   }

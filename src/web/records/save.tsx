@@ -36,16 +36,17 @@ export function saveRoutes({ store }: { store: Store }): Hono<RecordsEnv> {
     const user = c.get("user");
     const record = blankToUndefined(posted.values.record);
     try {
-      if (record && posted.values.as !== "new") return savedAnswer(c, record, store.addRevision(record, { input: posted.document }, user));
+      if (record && posted.values.as !== "new")
+        return savedAnswer(c, record, await store.addRevision(record, { input: posted.document }, user));
       const calcNumber = typeof posted.document.calcNumber === "string" ? posted.document.calcNumber.trim() : "";
-      const existing = calcNumber ? store.listChecks().find((x) => x.calcNumber === calcNumber) : undefined;
+      const existing = calcNumber ? (await store.listChecks()).find((x) => x.calcNumber === calcNumber) : undefined;
       if (existing) {
         const link = encodeCheck(posted.document);
         const back = link.length <= MAX_LINK_CHARS ? `/?c=${link}` : undefined;
         const body = <ConfirmSave existing={existing} document={posted.document} back={back} />;
         return c.html(await pageHtml(<RecordsLayout title="Save as a new revision?" user={user} children={body} />), 409);
       }
-      const created = store.createCheck({ input: posted.document }, user);
+      const created = await store.createCheck({ input: posted.document }, user);
       return c.redirect(`${checkPath(created.id)}?saved=1`, 303);
     } catch (err) {
       if (!(err instanceof RecordError)) throw err;
@@ -65,7 +66,7 @@ export function saveRoutes({ store }: { store: Store }): Hono<RecordsEnv> {
       input = undefined;
     }
     // An unreadable document is passed on as missing: the store then says the check to save is required.
-    return savedAnswer(c, c.req.param("id"), store.addRevision(c.req.param("id"), { input }, c.get("user")));
+    return savedAnswer(c, c.req.param("id"), await store.addRevision(c.req.param("id"), { input }, c.get("user")));
   });
 
   return app;

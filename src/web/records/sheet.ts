@@ -22,7 +22,7 @@ export function revisionSheetApi({ store }: { store: Store }): Hono<RecordsEnv> 
     if (!Number.isInteger(n) || n < 1) return c.json(errorsDoc("revision", "the revision must be a whole number from 1"), 422);
     const paper = c.req.query("paper") ?? "A4";
     if (paper !== "A4" && paper !== "Letter") return c.json(errorsDoc("paper", `the paper must be A4 or Letter (got "${paper}")`), 422);
-    const { check, revision } = store.getSheetRevision(c.req.param("id"), n);
+    const { check, revision } = await store.getSheetRevision(c.req.param("id"), n);
     if (!revision.intact) {
       return c.json(
         errorsDoc(
