@@ -59,7 +59,7 @@ export function Front({ m }: { m: SheetModel }) {
           </div>
         ) : null}
       </div>
-      <p class="caution-short">{CAUTION_SHORT} Material values are typical: verify them against certified data. See section 6.</p>
+      <p class="caution-short">{CAUTION_SHORT} See section 6.</p>
     </header>
   );
 }

@@ -3,17 +3,7 @@ import { plotInputs } from "../src/present/plots.ts";
 import type { SheetModel } from "./model.ts";
 
 export function Plots({ m, num }: { m: SheetModel; num: number }) {
-  const { figures: figs, note } = plotInputs(
-    {
-      ultimate_MPa: m.material.ultimate_MPa,
-      yield_MPa: m.material.yield_MPa,
-      walkerGamma: m.document.fatigue.walkerGamma,
-      thickness_mm: m.document.shell.thickness_mm,
-    },
-    m.result,
-    m.units,
-    { title: "" },
-  );
+  const { figures: figs, note } = plotInputs(m.result, m.units, { title: "" });
   return (
     <section>
       <h2>

@@ -12,11 +12,32 @@ import { CRITERION_LABEL } from "./meanStress.ts";
 import type { CheckResult, CriterionRow } from "./result.ts";
 import { BELOW_LIMIT_SOURCE, enduranceLimitInUse, modifyingFactors, VALID_LIFE } from "./sn.ts";
 import { solveFor } from "./solvers.ts";
+import { trace } from "./openings/geometry.ts";
+import { outlineOf, type ShapeCutout } from "./openings/index.ts";
 import { normalQuantile } from "./special.ts";
 import { fmt, step, type Step } from "./step.ts";
 import { inSheetOrder } from "./sections.ts";
 import { EXTERNAL_PRESSURE_WORDS, VERDICT_WORDS, verdictTable } from "./verdict.ts";
 import { ENGINE_VERSION } from "./version.ts";
+
+/** The geometry and material values the check was worked at (the opening traced from the same outline the solver uses). */
+function workedAt(input: ResolvedCheck, t: number): CheckResult["workedAt"] {
+  const c = input.cutout;
+  const shaped = c.kind !== "none" && c.kind !== "given" && !(c.kind === "circular-hole" && c.radius_mm === undefined);
+  return {
+    form: input.shell.form,
+    thickness_mm: t,
+    ultimate_MPa: input.material.ultimate_MPa,
+    yield_MPa: input.material.yield_MPa,
+    walkerGamma: input.fatigue.walkerGamma,
+    outline: shaped ? trace(outlineOf(c as ShapeCutout)) : null,
+    fasteners: (c.kind !== "given" ? (c.fasteners ?? []) : []).map((f) => ({
+      hoop_mm: f.hoop_mm,
+      axial_mm: f.axial_mm,
+      radius_mm: f.radius_mm,
+    })),
+  };
+}
 
 /**
  * The whole check: load → material curve → membrane, static, notch, fatigue → optional solve,
@@ -124,6 +145,7 @@ export function runCheck(input: ResolvedCheck): CheckResult {
     verdictMeaning: "",
     governs: "",
     governing: { rowId: "static", text: "" },
+    workedAt: workedAt(input, t),
     load: { pressureMax_MPa: load.max_MPa, pressureMin_MPa: load.min_MPa, source: load.source },
     membrane: {
       theory: e.theory,

@@ -54,6 +54,18 @@ export interface CheckResult {
   governs: string;
   /** The same as a structure, so no face has to find the row by matching the sentence. */
   governing: { rowId: VerdictRow["id"]; text: string };
+  /** What the check was worked at, for the faces' plots and the picture of the shell: nothing a face must look up again. */
+  workedAt: {
+    form: "cylinder" | "sphere";
+    thickness_mm: number;
+    ultimate_MPa: number;
+    yield_MPa: number;
+    walkerGamma: number;
+    /** The opening's outline round its centre, [hoop_mm, axial_mm], to scale; null with no opening or only a given Kt. */
+    outline: [number, number][] | null;
+    /** Fastener holes, in the order given. */
+    fasteners: { hoop_mm: number; axial_mm: number; radius_mm: number }[];
+  };
   load: { pressureMax_MPa: number; pressureMin_MPa: number; source: "direct" | "altitude" | "history" | "blocks" };
   membrane: {
     theory: "thin" | "thick";

@@ -9,3 +9,4 @@ export { crackGrowthPlot, type CrackGrowthData } from "./crackGrowth.ts";
 export { spectrumPlot, type SpectrumData } from "./spectrum.ts";
 export { edgeStressPlot, openingPicture, type OpeningPictureData } from "./opening.ts";
 export { fleetPlot, type FleetPlotData } from "./fleet.ts";
+export { shellPicture, type ShellPictureData } from "./shell.ts";

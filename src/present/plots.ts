@@ -13,21 +13,14 @@ import {
   lifeThicknessPlot,
   openingPicture,
   type PlotOptions,
+  shellPicture,
   snCurve,
   spectrumPlot,
 } from "../plots/index.ts";
 import type { Units } from "../schema/units.ts";
 
-/** What the check was worked at, beyond the result: the material strengths, Walker's γ and the wall thickness. */
-export interface WorkedAt {
-  ultimate_MPa: number;
-  yield_MPa: number;
-  walkerGamma?: number;
-  thickness_mm: number;
-}
-
 export interface Figure {
-  id: "haigh" | "sn" | "thickness" | "crack" | "spectrum" | "opening" | "edge-stress" | "fleet";
+  id: "shell" | "haigh" | "sn" | "thickness" | "crack" | "spectrum" | "opening" | "edge-stress" | "fleet";
   caption: string;
   /** SVG from src/plots, which escapes every text it draws. */
   svg: string;
@@ -44,13 +37,34 @@ export function plotOptions(units: Units, title?: string): PlotOptions {
   return { ...(title !== undefined ? { title } : {}), units: { stress: units.stress, length: units.length } };
 }
 
-/** Every plot the result gives something to draw, with its caption. */
-export function plotInputs(worked: WorkedAt, r: CheckResult, units: Units, face: { title?: string } = {}): PlotSet {
+/** Every plot the result gives something to draw, with its caption: the shell to scale first, what a checker looks at first. */
+export function plotInputs(r: CheckResult, units: Units, face: { title?: string } = {}): PlotSet {
   const f = r.fatigue;
+  const worked = r.workedAt;
   const opts = plotOptions(units, face.title);
   const singleCycle = f.lifeCountedIn === "cycles";
   const basquin = f.curve === "basquin";
-  const figures: Figure[] = [];
+  const figures: Figure[] = [
+    {
+      id: "shell",
+      caption:
+        "The shell and its opening drawn to scale from the inputs: the section with the wall and the opening's width round the hoop, and the skin round the opening developed flat with its fastener holes and the crack sizes on the same scale.",
+      svg: shellPicture(
+        {
+          form: worked.form,
+          innerRadius_mm: r.membrane.innerRadius_mm,
+          outerRadius_mm: r.membrane.outerRadius_mm,
+          thickness_mm: worked.thickness_mm,
+          outline: worked.outline,
+          fasteners: worked.fasteners,
+          ...(r.crack
+            ? { crack: { initial_mm: r.crack.initial_mm, critical_mm: r.crack.critical_mm, detectable_mm: r.crack.detectable_mm } }
+            : {}),
+        },
+        opts,
+      ),
+    },
+  ];
   if (basquin && singleCycle && f.equivalentAmplitude_MPa !== null) {
     figures.push({
       id: "haigh",

@@ -49,19 +49,8 @@ function work(
   let outcome: Outcome = { errorCount: 0, general, canUsePressure: form.values["pressure.mode"] === "direct" };
   let link: string | undefined;
   if (run.ok) {
-    const parsed = parseCheck(document);
-    if (parsed.ok) {
-      link = encodeCheck(document);
-      outcome.view = {
-        result: run.result,
-        material: parsed.value.material,
-        walkerGamma: parsed.value.fatigue.walkerGamma,
-        units: form.units,
-        thickness_mm: parsed.value.shell.thickness_mm,
-        link,
-        solve,
-      };
-    }
+    link = encodeCheck(document);
+    outcome.view = { result: run.result, units: form.units, link, solve };
   } else {
     for (const e of run.errors) {
       const name = form.fieldFor(e.path);

@@ -4,11 +4,7 @@ import type { ResultView } from "./context.ts";
 
 /** Haigh, S-N, life against thickness, crack growth and spectrum: each where the check gives it something to draw (src/present/plots.ts). */
 export function Plots({ v }: { v: ResultView }) {
-  const { figures, note } = plotInputs(
-    { ultimate_MPa: v.material.ultimate_MPa, yield_MPa: v.material.yield_MPa, walkerGamma: v.walkerGamma, thickness_mm: v.thickness_mm },
-    v.result,
-    v.units,
-  );
+  const { figures, note } = plotInputs(v.result, v.units);
   return (
     <section class="block" aria-labelledby="h-plots">
       <h3 id="h-plots">Plots</h3>

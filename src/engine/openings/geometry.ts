@@ -410,3 +410,14 @@ export function discretize(outlines: Outline[], opts: DiscretizeOptions = {}): D
   }
   return d;
 }
+
+/** Points round an outline, `perPiece` per smooth piece, in its own order: what a picture of the opening draws to scale. */
+export function trace(outline: Outline, perPiece = 16): [number, number][] {
+  const pts: [number, number][] = [];
+  for (const piece of outline.pieces)
+    for (let k = 0; k < perPiece; k++) {
+      const p = piece(k / perPiece);
+      pts.push([p.x, p.y]);
+    }
+  return pts;
+}
