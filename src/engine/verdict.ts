@@ -39,17 +39,23 @@ export function verdictTable(r: CheckResult): {
   });
   const f = r.fatigue;
   const unit = f.lifeCountedIn;
+  // An unlimited life has no life reserve: its reserve is the corrected endurance limit over the equivalent amplitude.
+  const se = f.curveUsed.enduranceLimit_MPa;
+  const unlimitedReserve =
+    se !== null && f.equivalentAmplitude_MPa !== null && f.equivalentAmplitude_MPa > 0
+      ? (f.modifyingFactor * se) / f.equivalentAmplitude_MPa - 1
+      : null;
   rows.push({
     id: "fatigue",
     title: `Fatigue life (${f.curve === "welded" ? "welded detail category" : (f.criteria.find((c) => c.chosen)?.label ?? f.criterion)}, scatter factor ${fmt(f.scatterFactor)})`,
     status: f.pass ? "pass" : "fail",
     detail:
       f.life_cycles === null
-        ? `unlimited life against a design life of ${fmt(f.designLife_cycles)} ${unit}`
+        ? `unlimited life against a design life of ${fmt(f.designLife_cycles)} ${unit}${unlimitedReserve === null ? "" : `: the equivalent amplitude ${fmt(f.equivalentAmplitude_MPa ?? 0)} MPa is below the corrected endurance limit ${fmt(f.modifyingFactor * (f.curveUsed.enduranceLimit_MPa ?? 0))} MPa, and the reserve is on stress`}`
         : f.life_cycles === 0
           ? "no life: the mean stress is beyond the criterion's range"
           : `allowable ${fmt(f.allowableLife_cycles ?? 0)} ${unit} against a design life of ${fmt(f.designLife_cycles)} ${unit} (damage ${fmt(f.damage ?? Infinity, 3)})`,
-    margin: f.life_cycles === null ? null : f.damage !== null && f.damage > 0 ? 1 / f.damage - 1 : -1,
+    margin: f.life_cycles === null ? unlimitedReserve : f.damage !== null && f.damage > 0 ? 1 / f.damage - 1 : -1,
   });
   if (r.crack) rows.push(...crackRows(r));
   if (r.evidence) {
@@ -85,7 +91,8 @@ export function verdictTable(r: CheckResult): {
       detail: n.refer?.length
         ? n.refer.join("; ")
         : `curvature parameter β = ${fmt(c?.beta ?? 0, 3)} within the small-curvature range (β ≤ ${fmt(c?.limit ?? 0)})`,
-      margin: null,
+      // The reserve on the curvature range, limit ÷ β − 1 (negative when β is beyond it).
+      margin: c && c.beta > 0 ? c.limit / c.beta - 1 : null,
     });
   }
   if (r.load.pressureMin_MPa < 0) {
