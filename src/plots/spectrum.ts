@@ -1,6 +1,6 @@
 /**
  * The rainflow-counted load spectrum as a histogram: cycles counted in bins of stress
- * range (half cycles count ½). Counts go on a log axis when they span two decades or
+ * range (half cycles count ½). Counts go on a log axis when they span a decade or
  * more, as pressure spectra usually do (many small cycles, a few large ones).
  */
 import { scaleLinear } from "d3-scale";
@@ -43,7 +43,9 @@ export function spectrumPlot(data: SpectrumData, opts?: PlotOptions): string {
   const total = cycles.reduce((s, c) => s + c.count, 0);
   const maxCount = Math.max(0, ...counted.map((b) => b.count));
   const minCount = Math.min(...counted.map((b) => b.count));
-  const logCounts = counted.length > 0 && maxCount / minCount >= 100;
+  // From one decade of spread up, counts go on a log axis: a few large cycles, which do most of the damage,
+  // would otherwise be a sliver beside thousands of small ones.
+  const logCounts = counted.length > 0 && maxCount / minCount >= 10;
   const yDomain: [number, number] = logCounts
     ? decadeDomain([minCount, maxCount], [0.1, 10])
     : [

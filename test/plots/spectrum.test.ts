@@ -50,6 +50,22 @@ describe("load spectrum", () => {
     }
   });
 
+  it("shows a few large cycles beside many small ones: a log count axis from one decade of spread", () => {
+    // The receiver demo's pass: 20 000 load/unload cycles and 300 start-ups (invented demo, src/demo)
+    const s = spectrumPlot({
+      cycles: [
+        { range_MPa: 50, mean_MPa: 140, count: 20000 },
+        { range_MPa: 170, mean_MPa: 85, count: 300 },
+      ],
+    });
+    const y = axisMap(s, "y", "log");
+    const big = bars(s).find((b) => b.count === 300);
+    if (!big) throw new Error("no bar for the 300 start-ups");
+    // On a log axis the bar of 300 reaches log10(300)/log10(20000) ≈ 0.58 of the way up to the tallest.
+    expect(attr(big.tag, "y")).toBeCloseTo(y(300), 1);
+    expect(attr(big.tag, "height")).toBeGreaterThan(50);
+  });
+
   it("uses a linear count axis from zero when counts are of one order", () => {
     const s = spectrumPlot({
       cycles: [
