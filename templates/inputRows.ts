@@ -3,6 +3,7 @@ import { numberList, percent, sig } from "./format.ts";
 import { CRITERION_NAMES, CUTOUT_NAMES, CRACK_NAMES } from "./names.ts";
 import type { SheetModel } from "./model.ts";
 import { dual } from "./quantities.ts";
+import { SERVICE_LABEL, STATIC_BASIS_LABEL, WELD_DETAIL_INFO } from "../src/schema/service.ts";
 
 /** One input as the sheet lists it: the value in the user's unit, SI beside it, and where it came from. */
 export interface InputRow {
@@ -90,7 +91,7 @@ export function inputGroups(m: SheetModel): InputGroup[] {
 
   groups.push({ title: "Material", rows: materialRows(m, q, t) });
   groups.push({ title: "Fatigue", rows: fatigueRows(m, t, q) });
-  groups.push({ title: "Static strength", rows: [t("Yield factor n_y", sig(d.static?.yieldFactor ?? 1.5, 4), d.static ? "" : "default")] });
+  groups.push({ title: "Static strength", rows: staticRows(m, t, q) });
 
   if (d.crack) {
     const k = d.crack;
@@ -208,6 +209,29 @@ function materialRows(m: SheetModel, q: Q, t: T): InputRow[] {
   return rows;
 }
 
+/** The static basis and its values, each marked where a default of the kind of shell or of the basis filled it. */
+function staticRows(m: SheetModel, t: T, q: Q): InputRow[] {
+  const s = m.result.static;
+  const why = (key: string) => (s.defaults[key] ? `default: ${s.defaults[key]}` : "as entered");
+  const rows: InputRow[] = [
+    t("Kind of shell", SERVICE_LABEL[s.service], m.document.shell.service === "other" ? "default" : "as entered"),
+    t("Static basis", STATIC_BASIS_LABEL[s.basis], why("basis")),
+  ];
+  if (s.basis === "en13445-3" || s.basis === "asme-viii-1")
+    rows.push(
+      t(s.basis === "en13445-3" ? "Weld joint coefficient z" : "Joint efficiency E", sig(s.jointEfficiency, 3), why("jointEfficiency")),
+    );
+  if (s.basis === "aircraft") {
+    rows.push(t("Limit factor on the differential", sig(s.limitFactor ?? 0, 3), why("limitFactor")));
+    rows.push(t("Ultimate factor", sig(s.ultimateFactor ?? 0, 3), why("ultimateFactor")));
+  }
+  if (s.basis === "yield") rows.push(t("Yield factor n_y", sig(s.yieldFactor, 4), m.document.static ? "" : "default"));
+  rows.push(q("Corrosion allowance c", s.corrosionAllowance_mm, "length", why("corrosionAllowance_mm")));
+  rows.push(q("Minus tolerance δ", s.thicknessTolerance_mm, "length", why("thicknessTolerance_mm")));
+  rows.push(q("Minimum gauge (without c)", s.minimumGauge_mm, "length", why("minimumGauge_mm")));
+  return rows;
+}
+
 function fatigueRows(m: SheetModel, t: T, q: Q): InputRow[] {
   const f = m.document.fatigue;
   const lifeUnit = m.result.fatigue.lifeCountedIn;
@@ -215,8 +239,22 @@ function fatigueRows(m: SheetModel, t: T, q: Q): InputRow[] {
     t("Design life", `${sig(f.designLife_cycles, 6)} ${lifeUnit}`),
     t("Scatter factor on life", sig(f.scatterFactor, 4), f.scatterFactor === 1 ? "no statistical allowance" : ""),
   ];
-  if (f.curve === "welded") {
-    rows.push(t("S-N curve", "welded detail category"));
+  const rf = m.result.fatigue;
+  const fd = (key: string) => (rf.defaults[key] ? `default: ${rf.defaults[key]}` : "as entered");
+  if (rf.curve === "en13445-welded" || rf.curve === "en13445-unwelded") {
+    rows.push(
+      t(
+        "S-N curve",
+        rf.curve === "en13445-welded" ? "EN 13445-3 clause 18, welded class" : "EN 13445-3 clause 18, unwelded curve from Rm",
+        fd("curve"),
+      ),
+    );
+    if (rf.weldDetail) rows.push(t("Weld detail", WELD_DETAIL_INFO[rf.weldDetail].label, fd("weldDetail")));
+    if (rf.curve === "en13445-welded")
+      rows.push(q("Class Δσ_R (at 2 × 10⁶ cycles)", rf.detailCategory_MPa, "stress", fd("detailCategory_MPa")));
+    rows.push(t("Temperature T*", `${sig(rf.temperature_C, 4)} °C`, fd("temperature_C")));
+  } else if (rf.curve === "welded") {
+    rows.push(t("S-N curve", "welded detail category (EN 1993-1-9)"));
     rows.push(q("Detail category Δσ_C (at 2 × 10⁶ cycles)", f.detailCategory_MPa, "stress"));
     rows.push(t("Partial factor γ_Mf", sig(f.gammaMf, 4)));
   } else {

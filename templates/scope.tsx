@@ -1,4 +1,5 @@
 import { CRITERION_NAMES } from "./names.ts";
+import { STATIC_BASIS_LABEL, WELD_DETAIL_INFO } from "../src/schema/service.ts";
 import { capitalise, sig } from "./format.ts";
 import { typeset } from "./math.tsx";
 import type { SheetModel } from "./model.ts";
@@ -50,7 +51,15 @@ export function Scope({ m, num }: { m: SheetModel; num: number }) {
           <b>Fatigue criterion.</b>{" "}
           {f.curve === "welded"
             ? `Welded detail category ${dualText(d.fatigue.detailCategory_MPa, "stress", m.units)}: the stress range counts without a mean-stress correction (EN 1993-1-9).`
-            : `Mean stress by the ${CRITERION_NAMES[f.criterion]} criterion on the material's Basquin curve; the other criteria are compared in section 4.`}
+            : f.curve === "en13445-welded"
+              ? `EN 13445-3 clause 18 welded class ${dualText(f.detailCategory_MPa ?? undefined, "stress", m.units)}${f.weldDetail ? ` (${WELD_DETAIL_INFO[f.weldDetail].label.toLowerCase()})` : ""}: the equivalent (Tresca) stress range, corrected for plasticity (ke), thickness and temperature, without a mean-stress correction.`
+              : f.curve === "en13445-unwelded"
+                ? "EN 13445-3 clause 18 unwelded curve from Rm: the equivalent (Tresca) range with the surface, thickness, mean-stress and temperature factors."
+                : `Mean stress by the ${CRITERION_NAMES[f.criterion]} criterion on the material's Basquin curve; the other criteria are compared in section 4.`}
+        </li>
+        <li>
+          <b>Static basis.</b> {STATIC_BASIS_LABEL[r.static.basis]}.{" "}
+          {r.static.statement ?? "A stress check on membrane theory, not a code's design-by-formula rule."}
         </li>
         <li>
           <b>Scatter factor.</b> The life read from the curve is divided by {sig(f.scatterFactor, 3)} to allow for the spread of lives

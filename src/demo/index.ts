@@ -53,9 +53,10 @@ const airReceiver: CheckDocument = {
   title: "Shell course at the outlet nozzle",
   project: "500-litre workshop air receiver (invented demo)",
   calcNumber: "AR500-SHELL-003",
-  notes: "Demo scenario: one pass is one year of service — daily start-ups from empty and compressor load/unload cycles.",
+  notes:
+    "Demo scenario: one pass is one year of service — daily start-ups from empty and compressor load/unload cycles. Longitudinal seam spot-examined (z = 0.85); the outlet socket is fillet-welded to the shell.",
   display: { length: "mm", stress: "MPa", pressure: "bar", altitude: "m" },
-  shell: { form: "cylinder", radius_mm: 300, radiusAt: "inner", thickness_mm: 5, theory: "auto" },
+  shell: { form: "cylinder", radius_mm: 300, radiusAt: "inner", thickness_mm: 5, theory: "auto", service: "pressure-vessel" },
   pressure: {
     blocks: [
       { max_MPa: 1.1, min_MPa: 0, cycles: 300 },
@@ -64,7 +65,8 @@ const airReceiver: CheckDocument = {
   },
   cutout: { kind: "circular-hole", radius_mm: 30 },
   material: { id: "steel-p265gh" },
-  fatigue: { meanStress: "goodman", curve: "welded", detailCategory_MPa: 71, designLife_cycles: 20, scatterFactor: 1 },
+  fatigue: { meanStress: "goodman", curve: "en13445-welded", weldDetail: "nozzle-fillet", designLife_cycles: 20, scatterFactor: 1 },
+  static: { basis: "en13445-3", jointEfficiency: 0.85, corrosionAllowance_mm: 1, thicknessTolerance_mm: 0.3, minimumGauge_mm: 1.5 },
   crack: { geometry: "center-through", initial_mm: 2, inspectionFactor: 2 },
 };
 

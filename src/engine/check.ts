@@ -19,6 +19,10 @@ import { fmt, step, type Step } from "./step.ts";
 import { inSheetOrder } from "./sections.ts";
 import { EXTERNAL_PRESSURE_WORDS, VERDICT_WORDS, verdictTable } from "./verdict.ts";
 import { ENGINE_VERSION } from "./version.ts";
+import { allowances_mm, basisStatement, gaugeFloor_mm, requiredOrdered, staticPlan } from "./static/index.ts";
+import { increasingRoot } from "./solve.ts";
+import { plasticityFactor, temperatureFactor, vesselLife, weldedThicknessFactor } from "./vessel/fatigue.ts";
+import { weldedLife } from "./welded.ts";
 
 /** The geometry and material values the check was worked at (the opening traced from the same outline the solver uses). */
 function workedAt(input: ResolvedCheck, t: number): CheckResult["workedAt"] {
@@ -117,9 +121,31 @@ export function runCheck(input: ResolvedCheck): CheckResult {
       ),
     );
 
+  const plan = staticPlan(input.static, input.shell.form, mat);
+  warnings.push(...plan.warnings);
+  const t = input.shell.thickness_mm;
+  if (t - allowances_mm(plan) <= 0)
+    throw new InputError(
+      "static.corrosionAllowance_mm",
+      `the corrosion allowance and the minus tolerance (${fmt(allowances_mm(plan))} mm together) leave nothing of the ${fmt(t)} mm wall`,
+    );
   const ctx: Context = {
     input,
     load,
+    staticPlan: plan,
+    vessel:
+      curveKind === "en13445-welded" || curveKind === "en13445-unwelded"
+        ? {
+            kind: curveKind,
+            family: mat.family,
+            yield_MPa: mat.yield_MPa,
+            ultimate_MPa: mat.ultimate_MPa,
+            class_MPa: input.fatigue.detailCategory_MPa ?? NaN,
+            thickness_mm: t,
+            temperature_C: input.fatigue.temperature_C,
+            rz_um: input.fatigue.roughnessRz_um,
+          }
+        : undefined,
     curve: { coefficient_MPa: coefficient, exponent, enduranceLimit_MPa: se.value, factor: mods.factor, belowLimit },
     strengths: {
       ultimate_MPa: mat.ultimate_MPa,
@@ -129,12 +155,26 @@ export function runCheck(input: ResolvedCheck): CheckResult {
     },
   };
   const criterion = input.fatigue.meanStress;
-  const t = input.shell.thickness_mm;
   const e = evaluate(ctx, t, 1, criterion);
   steps.push(...evaluationSteps(ctx, e, criterion));
   warnings.push(...e.conc.warnings, ...e.notch.warnings, ...(e.governing.welded?.warnings ?? []), ...validityWarnings(ctx, e));
 
-  const criteria = input.fatigue.curve === "welded" ? [] : compareCriteria(ctx, e);
+  const criteria = input.fatigue.curve !== "basquin" ? [] : compareCriteria(ctx, e);
+  const required = requiredThickness(ctx, e);
+  if (required.step) steps.push(required.step);
+  const statement = basisStatement(plan.basis);
+  const gaugeOk = t >= gaugeFloor_mm(plan);
+  if (!gaugeOk)
+    warnings.push(
+      `the wall (${fmt(t)} mm) is below the minimum gauge (${fmt(plan.gauge_mm)} mm plus ${fmt(plan.corrosion_mm)} mm corrosion allowance)`,
+    );
+  if (e.static.formula?.outside)
+    warnings.push(`the static formula is used outside its range: ${e.static.formula.outside}; the static check is referred`);
+  if (plan.refer) warnings.push(plan.refer);
+  if (input.axialExtra && (plan.basis === "en13445-3" || plan.basis === "asme-viii-1"))
+    warnings.push(
+      "the shell formulas of the code take pressure alone: the added axial stress is not in the formula check (only in the stresses and the fatigue)",
+    );
 
   const result: CheckResult = {
     format: "hoopwise.result/1",
@@ -161,11 +201,26 @@ export function runCheck(input: ResolvedCheck): CheckResult {
       vonMisesMax_MPa: e.vonMisesMax,
     },
     static: {
-      yieldFactor: input.static?.yieldFactor ?? 1.5,
+      basis: plan.basis,
+      service: input.shell.service,
+      yieldFactor: input.static.yieldFactor,
       allowable_MPa: e.staticAllowable,
       vonMisesMax_MPa: e.vonMisesMax,
       margin: e.staticMargin,
-      pass: e.staticMargin >= 0,
+      pass: e.staticMargin >= 0 && gaugeOk && !plan.refer && !e.static.formula?.outside,
+      refer: plan.refer ?? e.static.formula?.outside ?? null,
+      governs: e.static.governs,
+      jointEfficiency: plan.joint,
+      corrosionAllowance_mm: plan.corrosion_mm,
+      thicknessTolerance_mm: plan.tolerance_mm,
+      minimumGauge_mm: plan.gauge_mm,
+      analysisThickness_mm: e.thickness_mm - allowances_mm(plan),
+      formulaThickness_mm: e.static.formula ? finiteOrNull(e.static.formula.formula_mm) : null,
+      requiredThickness_mm: required.value,
+      limitFactor: plan.basis === "aircraft" ? plan.limitFactor : null,
+      ultimateFactor: plan.basis === "aircraft" ? plan.ultimateFactor : null,
+      statement,
+      defaults: input.static.defaults,
     },
     notch: {
       kt: e.conc.kt,
@@ -212,6 +267,11 @@ export function runCheck(input: ResolvedCheck): CheckResult {
       },
       criteria,
       pass: e.damage !== null && e.damage <= 1,
+      detailCategory_MPa: input.fatigue.curve === "basquin" ? null : (input.fatigue.detailCategory_MPa ?? null),
+      weldDetail: input.fatigue.curve === "en13445-welded" ? (input.fatigue.weldDetail ?? null) : null,
+      temperature_C: input.fatigue.temperature_C,
+      defaults: input.fatigue.defaults,
+      weldedPoint: weldedPoint(ctx, e),
     },
     lifeVsThickness: lifeVsThickness(ctx, t),
     verdictTable: [],
@@ -226,7 +286,7 @@ export function runCheck(input: ResolvedCheck): CheckResult {
     const extra = input.axialExtra ?? { max_MPa: 0, min_MPa: 0 };
     result.spectrum = {
       cycles: load.cycles.map((c) => {
-        const o = cycleAtPoint(ctx, criterion, e.point, e.unit, extra, 1, c.range, c.mean, e.theory === "thick", true);
+        const o = cycleAtPoint(ctx, criterion, e.point, e.fatigueUnit, extra, 1, c.range, c.mean, e.equivalentRange, true);
         return { range_MPa: 2 * o.amplitude, mean_MPa: o.mean, count: c.count };
       }),
       totalCycles,
@@ -280,6 +340,81 @@ export function runCheck(input: ResolvedCheck): CheckResult {
   result.steps = ordered.steps;
   result.sections = ordered.sections;
   return result;
+}
+
+/** The largest cycle on a welded class curve: the range entering the curve after its corrections, and its life. */
+function weldedPoint(ctx: Context, e: Evaluation): CheckResult["fatigue"]["weldedPoint"] {
+  const f = ctx.input.fatigue;
+  const cls = f.detailCategory_MPa;
+  if (cls === undefined || (f.curve !== "welded" && f.curve !== "en13445-welded")) return null;
+  const spectrum = ctx.load.isSpectrum;
+  const range = 2 * e.governing.amplitude;
+  if (ctx.vessel) {
+    const v = ctx.vessel;
+    const design =
+      (plasticityFactor(range, v.yield_MPa, v.family, v.ultimate_MPa) * range) /
+      (weldedThicknessFactor(v.thickness_mm) * temperatureFactor(v.temperature_C, v.family));
+    return {
+      curveName: `EN 13445-3 class ${fmt(cls)}`,
+      class_MPa: cls,
+      range_MPa: design,
+      life_cycles: vesselLife(v, range, 0, spectrum),
+      variableAmplitude: spectrum,
+    };
+  }
+  const w = weldedLife(range, cls, { variableAmplitude: spectrum, gammaMf: f.gammaMf });
+  return {
+    curveName: `EN 1993-1-9 category ${fmt(cls)}`,
+    class_MPa: cls,
+    range_MPa: range * f.gammaMf,
+    life_cycles: w.life_cycles,
+    variableAmplitude: spectrum,
+  };
+}
+
+function finiteOrNull(x: number): number | null {
+  return Number.isFinite(x) ? x : null;
+}
+
+/**
+ * The ordered wall the static basis alone asks for at the given pressure: the code formula plus
+ * allowances (closed form) or, for the stress bases, the wall where the static ratio reaches 1.
+ */
+function requiredThickness(ctx: Context, e: Evaluation): { value: number | null; step?: Step } {
+  const plan = ctx.staticPlan;
+  if (e.static.formula) {
+    const v = requiredOrdered(plan, e.static.formula.formula_mm);
+    return { value: finiteOrNull(v) };
+  }
+  const shell = ctx.input.shell;
+  const tMax =
+    shell.radiusAt === "inner" ? 100 * shell.radius_mm : shell.radiusAt === "mean" ? 1.999 * shell.radius_mm : 0.999 * shell.radius_mm;
+  const start = Math.max(e.thickness_mm, allowances_mm(plan) * 1.01 + 1e-6);
+  const root = increasingRoot(
+    (t) => Math.log(Math.max(evaluate(ctx, t, 1).static.ratio, 1e-300)),
+    start,
+    Math.max(start * 1e-4, allowances_mm(plan) + 1e-9),
+    tMax,
+    1e-6,
+  );
+  if (!root.found) return { value: null };
+  const v = Math.max(root.x, gaugeFloor_mm(plan));
+  const c = plan.corrosion_mm;
+  const d = plan.tolerance_mm;
+  return {
+    value: v,
+    step: step(
+      "static-required-thickness",
+      "Required ordered wall for the static check alone",
+      plan.basis === "aircraft"
+        ? "e_req: min(MS_L, MS_U) = 0, plus c + δ, not below the gauge"
+        : "e_req: σvm(e_req − c − δ) = Sy/n_y, not below the gauge",
+      `e_req = ${fmt(root.x - c - d)} + ${fmt(c)} + ${fmt(d)} (gauge floor ${fmt(gaugeFloor_mm(plan))})`,
+      v,
+      "mm",
+      "the membrane stresses solved for the wall (bracketing and Illinois false position, Dowell & Jarratt 1971)",
+    ),
+  };
 }
 
 function addCrack(result: CheckResult, input: ResolvedCheck, e: Evaluation, load: Load, steps: Step[], warnings: string[]): void {
@@ -419,7 +554,7 @@ function validityWarnings(ctx: Context, e: Evaluation): string[] {
     let beyondDamage = 0;
     let damage = 0;
     for (const c of ctx.load.cycles) {
-      const o = cycleAtPoint(ctx, input.fatigue.meanStress, e.point, e.unit, extra, 1, c.range, c.mean, e.theory === "thick", true);
+      const o = cycleAtPoint(ctx, input.fatigue.meanStress, e.point, e.fatigueUnit, extra, 1, c.range, c.mean, e.equivalentRange, true);
       if (o.life === null || !(o.life > 0)) continue;
       shortest = Math.min(shortest, o.life);
       damage += c.count / o.life;

@@ -137,7 +137,7 @@ export function damageTolerance(input: ResolvedCheck, e: Evaluation, load: Load)
         bulging: c.bulging,
         form: input.shell.form,
         shellRadius_mm: e.radii.mean_mm,
-        thickness_mm: e.thickness_mm,
+        thickness_mm: e.analysis_mm,
         stressMax_MPa: d.max,
         stressMin_MPa: d.min,
         yield_MPa: mat.yield_MPa,

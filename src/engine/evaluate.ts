@@ -31,6 +31,8 @@ import { basquinLife, lifeStep, type Curve } from "./sn.ts";
 import { fmt, step, type Step } from "./step.ts";
 import { minerDamage } from "./miner.ts";
 import { weldedLife } from "./welded.ts";
+import { allowances_mm, staticAt, staticSteps, type StaticAt, type StaticPlan } from "./static/index.ts";
+import { vesselLife, vesselSteps, type VesselCurve } from "./vessel/fatigue.ts";
 
 /**
  * One evaluation of the shell at a thickness and a pressure scale: membrane stresses, static check,
@@ -43,6 +45,10 @@ export interface Context {
   load: Load;
   curve: Curve;
   strengths: Strengths;
+  /** The static basis with its allowables, resolved once. */
+  staticPlan: StaticPlan;
+  /** The vessel code's curve when fatigue.curve is en13445-welded or en13445-unwelded. */
+  vessel?: VesselCurve;
   /** The opening's field and each point's notch sensitivity: they do not change with thickness or pressure. */
   fieldCache?: PointField;
 }
@@ -162,7 +168,17 @@ interface Instant {
 }
 
 export interface Evaluation {
+  /** The ordered (nominal) wall. */
   thickness_mm: number;
+  /** The wall every stress is worked on: ordered less corrosion allowance and minus tolerance. */
+  analysis_mm: number;
+  /** Inner radius of the new (uncorroded) wall. */
+  newInnerRadius_mm: number;
+  static: StaticAt;
+  /** The stresses per MPa of pressure that fatigue works on (the membrane ones; σr = −p at the bore on the vessel route). */
+  fatigueUnit: UnitStresses;
+  /** Whether fatigue takes the equivalent (Tresca) range of the principal stresses: a thick wall, or the vessel route. */
+  equivalentRange: boolean;
   scale: number;
   radii: Radii;
   theory: Theory;
@@ -207,9 +223,12 @@ export function evaluate(
 ): Evaluation {
   const { input, load } = ctx;
   const shell = input.shell;
-  const r = radii(shell.radius_mm, shell.radiusAt, thickness_mm);
-  const theory = chooseTheory(shell.theory, r, thickness_mm);
-  const u = unitStresses(shell.form, theory, r, thickness_mm);
+  const plan = ctx.staticPlan;
+  // A wall used up by its allowances keeps a sliver so the arithmetic stays finite; its static ratio is 0.
+  const analysis_mm = Math.max(thickness_mm - allowances_mm(plan), thickness_mm * 1e-6);
+  const r = radii(shell.radius_mm, shell.radiusAt, analysis_mm);
+  const theory = chooseTheory(shell.theory, r, analysis_mm);
+  const u = unitStresses(shell.form, theory, r, analysis_mm);
   const extra = input.axialExtra ?? { max_MPa: 0, min_MPa: 0 };
   const pMax = load.max_MPa * scale;
   const pMin = load.min_MPa * scale;
@@ -219,12 +238,21 @@ export function evaluate(
   const axialMin = u.axial * pMin + extra.min_MPa;
   const radialMax = u.radial * pMax;
   const vm = vonMises(hoopMax, axialMax, radialMax);
-  const yieldFactor = input.static?.yieldFactor ?? 1.5;
-  const staticAllowable = input.material.yield_MPa / yieldFactor;
+  const newInnerRadius_mm = radii(shell.radius_mm, shell.radiusAt, thickness_mm).inner_mm;
+  const st = staticAt(plan, {
+    analysis_mm: thickness_mm - allowances_mm(plan),
+    innerRadius_mm: newInnerRadius_mm,
+    pMax,
+    vonMisesAt: (k) => vonMises(k * hoopMax, k * u.axial * pMax + extra.max_MPa, k * radialMax),
+  });
+  const staticAllowable = plan.allowable_MPa;
   const lambda = hoopMax > 0 ? axialMax / hoopMax : 0;
   const field = pointField(ctx);
-  const thick = theory === "thick";
-  const candidates = candidatesFor(field.candidates, u, extra, thick);
+  // The equivalent (Tresca) range of the principal stresses at the bore: for a thick wall, and always on the
+  // vessel code's route, which takes σr = −p at the inner surface whatever the wall (EN 13445-3 §18, from memory).
+  const thick = theory === "thick" || ctx.vessel !== undefined;
+  const fu = fatigueUnit(ctx, u, theory);
+  const candidates = candidatesFor(field.candidates, fu, extra, thick);
 
   // Damage of one pass at each candidate point; the worst point governs.
   let best: { c: Candidate; damage: number; noAnswer: boolean; governing: CycleOutcome; sigmaAr: number } | undefined;
@@ -234,7 +262,7 @@ export function evaluate(
     let governing: CycleOutcome | undefined;
     let largestRange = -1;
     for (const c of load.cycles) {
-      const o = cycleAtPoint(ctx, criterion, cand, u, extra, scale, c.range, c.mean, thick, load.isSpectrum);
+      const o = cycleAtPoint(ctx, criterion, cand, fu, extra, scale, c.range, c.mean, thick, load.isSpectrum);
       // A life that underflowed to 0 is no life, as life 0 reads everywhere else.
       if (o.status === "no-answer" || o.life === 0) noAnswer = true;
       else if (o.life !== null) damage += c.count / o.life;
@@ -266,6 +294,11 @@ export function evaluate(
   const { conc, notch } = governingNotch(ctx, field, point, hoopMax, axialMax, lambda);
   return {
     thickness_mm,
+    analysis_mm,
+    newInnerRadius_mm,
+    static: st,
+    fatigueUnit: fu,
+    equivalentRange: thick,
     scale,
     radii: r,
     theory,
@@ -279,7 +312,7 @@ export function evaluate(
     radialMax,
     vonMisesMax: vm,
     staticAllowable,
-    staticMargin: vm > 0 ? staticAllowable / vm - 1 : Infinity,
+    staticMargin: st.ratio - 1,
     lambda,
     conc,
     notch,
@@ -294,6 +327,11 @@ export function evaluate(
     allowable,
     damage,
   };
+}
+
+/** The stresses per MPa that fatigue works on: the membrane ones, with σr = −p at the bore on the vessel route. */
+function fatigueUnit(ctx: Context, u: UnitStresses, theory: Theory): UnitStresses {
+  return ctx.vessel && theory !== "thick" ? { ...u, radial: -1 } : u;
 }
 
 /**
@@ -429,6 +467,10 @@ function cycleOutcome(ctx: Context, criterion: MeanStressCriterion, amplitude: n
   if (input.fatigue.localYield === "shakedown" && m + amplitude > input.material.yield_MPa && amplitude < input.material.yield_MPa) {
     m = input.material.yield_MPa - amplitude;
   }
+  if (ctx.vessel) {
+    const life = vesselLife(ctx.vessel, 2 * amplitude, mean, spectrum);
+    return { amplitude, mean, sigmaAr: amplitude, life, status: life === null ? "unlimited" : "ok" };
+  }
   if (input.fatigue.curve === "welded") {
     const w = weldedLife(2 * amplitude, input.fatigue.detailCategory_MPa as number, {
       variableAmplitude: spectrum,
@@ -453,7 +495,7 @@ function cycleOutcome(ctx: Context, criterion: MeanStressCriterion, amplitude: n
 /** The worked steps of one evaluation, in the order a checker redoes them. */
 export function evaluationSteps(ctx: Context, e: Evaluation, criterion: MeanStressCriterion): Step[] {
   const { input, load } = ctx;
-  const t = e.thickness_mm;
+  const t = e.analysis_mm;
   const steps: Step[] = [];
   steps.push(
     step(
@@ -509,27 +551,17 @@ export function evaluationSteps(ctx: Context, e: Evaluation, criterion: MeanStre
       "von Mises criterion; Dowling, Mechanical Behavior of Materials, §7.5",
     ),
   );
-  const yf = input.static?.yieldFactor ?? 1.5;
   steps.push(
-    step(
-      "static-allowable",
-      "Allowable membrane stress",
-      "σ_allow = Sy/n_y",
-      `σ_allow = ${fmt(input.material.yield_MPa)}/${fmt(yf)}`,
-      e.staticAllowable,
-      "MPa",
-      "yield factor 1.5 by default, i.e. 2/3 of yield (ASME II-D Mandatory Appendix 1 basis, from memory)",
-    ),
-  );
-  steps.push(
-    step(
-      "static-margin",
-      "Static margin",
-      "MS = σ_allow/σvm − 1",
-      `MS = ${fmt(e.staticAllowable)}/${fmt(e.vonMisesMax)} − 1`,
-      e.staticMargin,
-      "—",
-      "margin of safety, common practice",
+    ...staticSteps(
+      ctx.staticPlan,
+      {
+        analysis_mm: e.thickness_mm - allowances_mm(ctx.staticPlan),
+        innerRadius_mm: e.newInnerRadius_mm,
+        pMax: e.pMax,
+        vonMisesAt: (k) => vonMises(k * e.hoopMax, k * e.unit.axial * e.pMax + (e.axialMax - e.unit.axial * e.pMax), k * e.radialMax),
+      },
+      e.static,
+      e.thickness_mm,
     ),
   );
   if (input.cutout.kind !== "none")
@@ -563,7 +595,7 @@ export function evaluationSteps(ctx: Context, e: Evaluation, criterion: MeanStre
       ),
     );
   }
-  if (e.theory === "thick") {
+  if (e.equivalentRange) {
     steps.push(
       step(
         "amplitude",
@@ -612,7 +644,10 @@ export function evaluationSteps(ctx: Context, e: Evaluation, criterion: MeanStre
       ),
     );
   }
-  if (input.fatigue.curve === "welded") {
+  if (ctx.vessel) {
+    const v = vesselSteps(ctx.vessel, 2 * g.amplitude, g.mean, load.isSpectrum);
+    steps.push(...v.steps);
+  } else if (input.fatigue.curve === "welded") {
     steps.push(
       step(
         "weld-range",
@@ -654,9 +689,9 @@ export function evaluationSteps(ctx: Context, e: Evaluation, criterion: MeanStre
       );
     } else {
       const extra = input.axialExtra ?? { max_MPa: 0, min_MPa: 0 };
-      const thick = e.theory === "thick";
+      const thick = e.equivalentRange;
       const lifeOf = (range: number, mean: number) =>
-        cycleAtPoint(ctx, criterion, e.point, e.unit, extra, e.scale, range, mean, thick, true).life;
+        cycleAtPoint(ctx, criterion, e.point, e.fatigueUnit, extra, e.scale, range, mean, thick, true).life;
       // With a welded detail, its design limits (fatigue limit, cut-off) come first: the Miner sum reads each cycle against them.
       if (g.welded) steps.push(...g.welded.steps.filter((st) => st.id !== "welded-life"));
       steps.push(...minerDamage(load.cycles, lifeOf).steps);
@@ -713,7 +748,7 @@ export function evaluationSteps(ctx: Context, e: Evaluation, criterion: MeanStre
 function pointSteps(ctx: Context, e: Evaluation): Step[] {
   const { input } = ctx;
   const steps: Step[] = [];
-  const thick = e.theory === "thick";
+  const thick = e.equivalentRange;
   const field = pointField(ctx);
   const shown = input.cutout.kind === "none" ? e.candidates : field.candidates.filter((c) => !c.membrane || c === e.point);
   for (const c of shown) {
@@ -741,7 +776,7 @@ function pointSteps(ctx: Context, e: Evaluation): Step[] {
       "governing-point",
       "Point that governs fatigue",
       "the point with the most damage per pass (every point at every counted peak and valley)",
-      `${e.point.point.label}${thick ? "; thick wall: Tresca equivalent of the principal stress ranges at the bore" : ""}`,
+      `${e.point.point.label}${thick ? `; ${e.theory === "thick" ? "thick wall" : "vessel route"}: Tresca equivalent of the principal stress ranges at the bore` : ""}`,
       e.life,
       ctx.load.isSpectrum ? "passes" : "cycles",
       "superposition of the hoop and axial stresses at each instant; the worst point governs",

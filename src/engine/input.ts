@@ -7,6 +7,15 @@ import { checkSchema, type MaterialFamily, type ParsedCheck, type SurfaceFinish 
  * materials library and the cross-field rules. The schema knows neither the engine nor the
  * library; this is where the two meet.
  */
+import {
+  BASIS_DEFAULTS,
+  SERVICE_DEFAULTS,
+  WELD_DETAIL_INFO,
+  type FatigueCurve,
+  type Service,
+  type StaticBasis,
+  type WeldDetail,
+} from "../schema/service.ts";
 
 /** A material with every value the engine needs; optional ones only where a method may go without. */
 export interface ResolvedMaterial {
@@ -31,8 +40,111 @@ export interface ResolvedMaterial {
   source: string;
 }
 
+/** The static basis with every value it needs; `defaults` names each key a default filled, with the reason. */
+export interface ResolvedStatic {
+  basis: StaticBasis;
+  yieldFactor: number;
+  allowableStress_MPa?: number;
+  jointEfficiency: number;
+  corrosionAllowance_mm: number;
+  thicknessTolerance_mm: number;
+  minimumGauge_mm: number;
+  limitFactor: number;
+  ultimateFactor: number;
+  defaults: Partial<Record<string, string>>;
+}
+
+export type ResolvedFatigue = Omit<ParsedCheck["fatigue"], "curve"> & {
+  curve: FatigueCurve;
+  temperature_C: number;
+  roughnessRz_um: number;
+  defaults: Partial<Record<string, string>>;
+};
+
 /** The parsed document (defaults filled in) is kept beside the resolved values: it is what gets fingerprinted. */
-export type ResolvedCheck = Omit<ParsedCheck, "material"> & { material: ResolvedMaterial; document: ParsedCheck };
+export type ResolvedCheck = Omit<ParsedCheck, "material" | "static" | "fatigue"> & {
+  material: ResolvedMaterial;
+  static: ResolvedStatic;
+  fatigue: ResolvedFatigue;
+  document: ParsedCheck;
+};
+
+const STEEL_FAMILIES: readonly MaterialFamily[] = ["steel", "stainless"];
+
+function resolveStatic(parsed: ParsedCheck): ResolvedStatic {
+  const service: Service = parsed.shell.service;
+  const sd = SERVICE_DEFAULTS[service];
+  const given = parsed.static;
+  const defaults: Partial<Record<string, string>> = {};
+  const pick = <T>(key: string, value: T | undefined, d: { value: T; why: string }): T => {
+    if (value !== undefined) return value;
+    defaults[key] = d.why;
+    return d.value;
+  };
+  const basis = pick("basis", given?.basis, sd.basis);
+  const code = basis === "en13445-3" || basis === "asme-viii-1";
+  const jointEfficiency = code
+    ? pick("jointEfficiency", given?.jointEfficiency, BASIS_DEFAULTS.jointEfficiency)
+    : (given?.jointEfficiency ?? 1);
+  const aircraft = basis === "aircraft";
+  return {
+    basis,
+    yieldFactor: given?.yieldFactor ?? 1.5,
+    allowableStress_MPa: given?.allowableStress_MPa,
+    jointEfficiency,
+    corrosionAllowance_mm: pick("corrosionAllowance_mm", given?.corrosionAllowance_mm, sd.corrosionAllowance_mm),
+    thicknessTolerance_mm: pick("thicknessTolerance_mm", given?.thicknessTolerance_mm, sd.thicknessTolerance_mm),
+    minimumGauge_mm: pick("minimumGauge_mm", given?.minimumGauge_mm, sd.minimumGauge_mm),
+    limitFactor: aircraft
+      ? pick("limitFactor", given?.limitFactor, BASIS_DEFAULTS.limitFactor)
+      : (given?.limitFactor ?? BASIS_DEFAULTS.limitFactor.value),
+    ultimateFactor: aircraft
+      ? pick("ultimateFactor", given?.ultimateFactor, BASIS_DEFAULTS.ultimateFactor)
+      : (given?.ultimateFactor ?? BASIS_DEFAULTS.ultimateFactor.value),
+    defaults,
+  };
+}
+
+function resolveFatigue(parsed: ParsedCheck, family: MaterialFamily, errors: FieldError[]): ResolvedFatigue {
+  const f = parsed.fatigue;
+  const sd = SERVICE_DEFAULTS[parsed.shell.service];
+  const defaults: Partial<Record<string, string>> = {};
+  const steel = STEEL_FAMILIES.includes(family);
+  let curve: FatigueCurve;
+  if (f.curve !== undefined) curve = f.curve;
+  else if (f.weldDetail !== undefined) curve = "en13445-welded";
+  else if (sd.steelCurve.value !== "basquin" && steel) {
+    curve = sd.steelCurve.value;
+    defaults.curve = sd.steelCurve.why;
+  } else {
+    curve = "basquin";
+    if (sd.steelCurve.value !== "basquin")
+      defaults.curve = `the material curve: the vessel code's welded classes are for steels, and the material is "${family}"`;
+  }
+  let detailCategory_MPa = f.detailCategory_MPa;
+  let weldDetail: WeldDetail | undefined = f.weldDetail;
+  if (curve === "en13445-welded" && detailCategory_MPa === undefined) {
+    if (weldDetail === undefined) {
+      weldDetail = sd.weldDetail.value;
+      defaults.weldDetail = sd.weldDetail.why;
+    }
+    detailCategory_MPa = WELD_DETAIL_INFO[weldDetail].class_MPa;
+    defaults.detailCategory_MPa = `the class of the ${WELD_DETAIL_INFO[weldDetail].label.toLowerCase()} detail`;
+  }
+  const welded = curve === "welded" || curve === "en13445-welded";
+  if (welded && !steel && f.detailCategory_MPa === undefined) {
+    errors.push({
+      path: "fatigue.detailCategory_MPa",
+      message: `the welded classes here are for steels; for a "${family}" shell give the class of your own welded curve as detailCategory_MPa (for aluminium, EN 1999-1-3), or use the material curve`,
+    });
+  }
+  const temperature_C = f.temperature_C ?? 20;
+  if (f.temperature_C === undefined && curve.startsWith("en13445"))
+    defaults.temperature_C = "20 °C: no temperature correction below 100 °C";
+  const roughnessRz_um = f.roughnessRz_um ?? 200;
+  if (f.roughnessRz_um === undefined && curve === "en13445-unwelded") defaults.roughnessRz_um = "200 µm, as-rolled plate (conservative)";
+  return { ...f, curve, detailCategory_MPa, weldDetail, temperature_C, roughnessRz_um, defaults };
+}
 
 /**
  * Cross-field rules the schema cannot see one field at a time: the library lookup with
@@ -69,7 +181,8 @@ export function resolveCheck(parsed: ParsedCheck): { ok: true; value: ResolvedCh
   need("ultimate_MPa", "the ultimate strength");
   need("yield_MPa", "the yield strength");
   need("modulus_MPa", "the elastic modulus");
-  const curve = parsed.fatigue.curve;
+  const fatigue = resolveFatigue(parsed, merged.family ?? "other", errors);
+  const curve = fatigue.curve;
   if (curve === "basquin" && !merged.coupons) {
     need("fatigueStrengthCoefficient_MPa", "the fatigue strength coefficient σ'f", " (or give coupons to fit it)");
     need("fatigueStrengthExponent", "the Basquin exponent b", " (or give coupons to fit it)");
@@ -173,7 +286,7 @@ export function resolveCheck(parsed: ParsedCheck): { ok: true; value: ResolvedCh
     family: merged.family ?? "other",
     source: merged.source ?? "entered by the user",
   };
-  return { ok: true, value: { ...parsed, material, document: parsed } };
+  return { ok: true, value: { ...parsed, material, static: resolveStatic(parsed), fatigue, document: parsed } };
 }
 
 function stripUndefined<T extends object>(o: T): Partial<T> {

@@ -1,4 +1,4 @@
-import type { MeanStressCriterion } from "../schema/check.ts";
+import type { FatigueCurve, MeanStressCriterion, Service, StaticBasis, WeldDetail } from "../schema/check.ts";
 import type { EvidenceResult } from "./evidence.ts";
 import type { FleetResult } from "./fleet.ts";
 import type { Section } from "./sections.ts";
@@ -26,7 +26,17 @@ export interface CriterionRow {
 export type Verdict = "pass" | "fail" | "refer";
 
 export interface VerdictRow {
-  id: "static" | "fatigue" | "crack" | "evidence" | "leak-before-break" | "external-pressure" | "opening" | "fleet" | (string & {});
+  id:
+    | "static"
+    | "minimum-gauge"
+    | "fatigue"
+    | "crack"
+    | "evidence"
+    | "leak-before-break"
+    | "external-pressure"
+    | "opening"
+    | "fleet"
+    | (string & {});
   title: string;
   /** "refer": this row cannot be judged here and needs an analysis beyond this screening. */
   status: "pass" | "fail" | "info" | "refer";
@@ -80,7 +90,37 @@ export interface CheckResult {
     radialMax_MPa: number;
     vonMisesMax_MPa: number;
   };
-  static: { yieldFactor: number; allowable_MPa: number; vonMisesMax_MPa: number; margin: number; pass: boolean };
+  static: {
+    basis: StaticBasis;
+    service: Service;
+    yieldFactor: number;
+    /** f (EN 13445-3), S (ASME VIII-1), Sy (aircraft, at limit) or Sy/n (yield). */
+    allowable_MPa: number;
+    vonMisesMax_MPa: number;
+    /** Capacity over demand less 1: the wall over the formula's wall for the code bases, stresses otherwise. */
+    margin: number;
+    pass: boolean;
+    /** Why the static basis cannot judge the shell (refer), or null. */
+    refer: string | null;
+    /** Which check of the basis governs, in words. */
+    governs: string;
+    jointEfficiency: number;
+    corrosionAllowance_mm: number;
+    thicknessTolerance_mm: number;
+    minimumGauge_mm: number;
+    /** Ordered wall less corrosion allowance and minus tolerance: the wall every stress is worked on. */
+    analysisThickness_mm: number;
+    /** The code formula's wall without allowances (code bases only). */
+    formulaThickness_mm: number | null;
+    /** The ordered wall the static basis alone asks for, allowances and gauge included. */
+    requiredThickness_mm: number | null;
+    limitFactor: number | null;
+    ultimateFactor: number | null;
+    /** The plain statement of what the basis's check is and is not. */
+    statement: string | null;
+    /** Keys filled by a default of the service or basis, with the reason. */
+    defaults: Partial<Record<string, string>>;
+  };
   notch: {
     kt: number;
     ktGoverns: string;
@@ -107,7 +147,7 @@ export interface CheckResult {
   };
   fatigue: {
     criterion: MeanStressCriterion;
-    curve: "basquin" | "welded";
+    curve: FatigueCurve;
     amplitude_MPa: number;
     mean_MPa: number;
     equivalentAmplitude_MPa: number | null;
@@ -123,6 +163,19 @@ export interface CheckResult {
     curveUsed: { fatigueStrengthCoefficient_MPa: number; fatigueStrengthExponent: number; enduranceLimit_MPa: number | null };
     criteria: CriterionRow[];
     pass: boolean;
+    /** The welded class or detail category in use (MPa at 2·10⁶ cycles), or null. */
+    detailCategory_MPa: number | null;
+    weldDetail: WeldDetail | null;
+    temperature_C: number;
+    defaults: Partial<Record<string, string>>;
+    /** The largest cycle on a welded class curve (range after the route's corrections, in MPa) for the S-N plot; null otherwise. */
+    weldedPoint: {
+      curveName: string;
+      class_MPa: number;
+      range_MPa: number;
+      life_cycles: number | null;
+      variableAmplitude: boolean;
+    } | null;
   };
   crack?: {
     geometry: string;

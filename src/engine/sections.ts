@@ -52,6 +52,7 @@ const HEADING_OF: Record<string, SectionHeading> = {
   sigma: "Fatigue life",
   weld: "Fatigue life",
   welded: "Fatigue life",
+  vessel: "Fatigue life",
   life: "Fatigue life",
   miner: "Fatigue life",
   passes: "Fatigue life",

@@ -3,6 +3,7 @@ import type { CheckResult } from "./result.ts";
 import { roundingFor, roundingWords, roundUp } from "./gauges.ts";
 import { increasingRoot } from "./solve.ts";
 import { fmt, step, type Step } from "./step.ts";
+import { gaugeFloor_mm } from "./static/index.ts";
 
 /**
  * Design solvers. The reserve of an evaluation is the smaller of the fatigue reserve
@@ -13,14 +14,14 @@ const CAP = 50;
 
 function reserve(e: Evaluation, designLife: number): { value: number; governs: "fatigue" | "static" } {
   const fatigue = e.allowable === null ? CAP : e.allowable <= 0 ? -CAP : Math.log10(e.allowable / designLife);
-  const stat = e.vonMisesMax > 0 ? Math.log10(e.staticAllowable / e.vonMisesMax) : CAP;
+  const stat = e.static.ratio > 0 ? Math.min(Math.log10(e.static.ratio), CAP) : -CAP;
   return fatigue <= stat ? { value: Math.max(fatigue, -CAP), governs: "fatigue" } : { value: Math.max(stat, -CAP), governs: "static" };
 }
 
 /** The two reserves separately. */
 function reserves(e: Evaluation, designLife: number): { fatigue: number; stat: number } {
   const fatigue = e.allowable === null ? CAP : e.allowable <= 0 ? -CAP : Math.log10(e.allowable / designLife);
-  const stat = e.vonMisesMax > 0 ? Math.log10(e.staticAllowable / e.vonMisesMax) : CAP;
+  const stat = e.static.ratio > 0 ? Math.min(Math.log10(e.static.ratio), CAP) : -CAP;
   return { fatigue, stat };
 }
 
@@ -64,7 +65,7 @@ export function solveFor(
       step(
         "solve-thickness",
         "Minimum wall thickness for the fatigue and static checks (crack growth and test evidence are not re-solved)",
-        "t_min: min(log₁₀(N_allow/N_design), log₁₀(σ_allow/σvm)) = 0",
+        "t_min: min(log₁₀(N_allow/N_design), log₁₀(static capacity/demand)) = 0",
         `t_min = ${fmt(root.x)} mm (${governs} governs; ${root.evaluations} evaluations)`,
         root.x,
         "mm",
@@ -78,8 +79,9 @@ export function solveFor(
         warnings,
       };
     // Round up to a thickness that exists, never below the minimum gauge, and show the reserve there.
-    const rounding = roundingFor(ctx.input.solve ?? {}, ctx.input.material.family, (shell as { service?: string }).service);
-    const floor = (ctx.input.static as { minimumGauge_mm?: number } | undefined)?.minimumGauge_mm ?? 0;
+    const rounding = roundingFor(ctx.input.solve ?? {}, ctx.input.material.family, shell.service);
+    // Never below the minimum gauge, exclusive of the corrosion allowance (ASME VIII-1 UG-16(b) convention, from memory).
+    const floor = gaugeFloor_mm(ctx.staticPlan);
     const rounded = roundUp(root.x, rounding, floor);
     // A gauge past the geometric limit would leave no inside: keep the solved value and say so.
     const tr = rounded <= tMax ? rounded : root.x;
@@ -111,7 +113,7 @@ export function solveFor(
         roundedTo: words,
         damageAtThickness: er.damage,
         staticMarginAtThickness: er.staticMargin,
-        governs,
+        governs: floor > root.x ? "minimum gauge" : governs,
         iterations: root.iterations,
         evaluations: root.evaluations,
       },
@@ -129,7 +131,7 @@ export function solveFor(
   const stepOut = step(
     "solve-pressure",
     "Maximum pressure for the fatigue and static checks (all pressures scaled together; crack growth and test evidence are not re-solved)",
-    "p_max: min(log₁₀(N_allow/N_design), log₁₀(σ_allow/σvm)) = 0",
+    "p_max: min(log₁₀(N_allow/N_design), log₁₀(static capacity/demand)) = 0",
     `p_max = ${fmt(ctx.load.max_MPa)} × ${fmt(s)} (${governs} governs; ${root.evaluations} evaluations)`,
     pMax,
     "MPa",

@@ -30,13 +30,18 @@ export function verdictTable(r: CheckResult): {
 } {
   const rows: VerdictRow[] = [];
   const s = r.static;
-  rows.push({
-    id: "static",
-    title: "Static strength (von Mises against yield / factor)",
-    status: s.pass ? "pass" : "fail",
-    detail: `σvm = ${fmt(s.vonMisesMax_MPa)} MPa against Sy/${fmt(s.yieldFactor)} = ${fmt(s.allowable_MPa)} MPa`,
-    margin: s.margin,
-  });
+  rows.push(staticRow(r));
+  if (s.minimumGauge_mm > 0) {
+    const floor = s.minimumGauge_mm + s.corrosionAllowance_mm;
+    const t = s.analysisThickness_mm + s.corrosionAllowance_mm + s.thicknessTolerance_mm;
+    rows.push({
+      id: "minimum-gauge",
+      title: "Minimum gauge",
+      status: t >= floor ? "pass" : "fail",
+      detail: `wall ${fmt(t)} mm against the minimum gauge ${fmt(s.minimumGauge_mm)} mm plus ${fmt(s.corrosionAllowance_mm)} mm corrosion allowance`,
+      margin: t / floor - 1,
+    });
+  }
   const f = r.fatigue;
   const unit = f.lifeCountedIn;
   // An unlimited life has no life reserve: its reserve is the corrected endurance limit over the equivalent amplitude.
@@ -47,7 +52,7 @@ export function verdictTable(r: CheckResult): {
       : null;
   rows.push({
     id: "fatigue",
-    title: `Fatigue life (${f.curve === "welded" ? "welded detail category" : (f.criteria.find((c) => c.chosen)?.label ?? f.criterion)}, scatter factor ${fmt(f.scatterFactor)})`,
+    title: `Fatigue life (${curveWords(f)}, scatter factor ${fmt(f.scatterFactor)})`,
     status: f.pass ? "pass" : "fail",
     detail:
       f.life_cycles === null
@@ -187,4 +192,35 @@ function crackRows(r: CheckResult): VerdictRow[] {
     });
   }
   return rows;
+}
+
+const BASIS_TITLE: Record<CheckResult["static"]["basis"], string> = {
+  "en13445-3": "Static strength (EN 13445-3 design by formula)",
+  "asme-viii-1": "Static strength (ASME VIII-1 UG-27 shell formula)",
+  aircraft: "Static strength (limit pressure against yield, ultimate against ultimate strength)",
+  yield: "Static strength (von Mises against yield / factor)",
+};
+
+function staticRow(r: CheckResult): VerdictRow {
+  const s = r.static;
+  const title = BASIS_TITLE[s.basis];
+  const status = s.refer ? "refer" : s.margin >= 0 ? "pass" : "fail";
+  let detail: string;
+  if (s.basis === "en13445-3" || s.basis === "asme-viii-1") {
+    const sym = s.basis === "en13445-3" ? "f" : "S";
+    detail = `analysis wall ${fmt(s.analysisThickness_mm)} mm against ${fmt(s.formulaThickness_mm ?? Infinity)} mm from the formula (${s.governs}, ${sym} = ${fmt(s.allowable_MPa)} MPa, ${s.basis === "en13445-3" ? "z" : "E"} = ${fmt(s.jointEfficiency)}); ordered wall needed ${fmt(s.requiredThickness_mm ?? Infinity)} mm`;
+  } else if (s.basis === "aircraft") {
+    detail = `${s.governs}: factors ${fmt(s.limitFactor ?? 0)} (limit) and ${fmt(s.ultimateFactor ?? 0)} (ultimate) on the differential`;
+  } else {
+    detail = `σvm = ${fmt(s.vonMisesMax_MPa)} MPa against Sy/${fmt(s.yieldFactor)} = ${fmt(s.allowable_MPa)} MPa`;
+  }
+  if (s.refer) detail = `${s.refer}; ${detail}`;
+  return { id: "static", title, status, detail, margin: s.margin };
+}
+
+function curveWords(f: CheckResult["fatigue"]): string {
+  if (f.curve === "welded") return "welded detail category, EN 1993-1-9";
+  if (f.curve === "en13445-welded") return `EN 13445-3 welded class ${fmt(f.detailCategory_MPa ?? 0)}`;
+  if (f.curve === "en13445-unwelded") return "EN 13445-3 unwelded curve";
+  return f.criteria.find((c) => c.chosen)?.label ?? f.criterion;
 }

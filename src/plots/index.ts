@@ -10,3 +10,5 @@ export { spectrumPlot, type SpectrumData } from "./spectrum.ts";
 export { edgeStressPlot, openingPicture, type OpeningPictureData } from "./opening.ts";
 export { fleetPlot, type FleetPlotData } from "./fleet.ts";
 export { shellPicture, type ShellPictureData } from "./shell.ts";
+export { weldedSnCurve, type WeldedSnData } from "./weldedSn.ts";
+export { weldDetailSketch } from "./weldDetail.ts";

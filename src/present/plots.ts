@@ -16,11 +16,12 @@ import {
   shellPicture,
   snCurve,
   spectrumPlot,
+  weldedSnCurve,
 } from "../plots/index.ts";
 import type { Units } from "../schema/units.ts";
 
 export interface Figure {
-  id: "shell" | "haigh" | "sn" | "thickness" | "crack" | "spectrum" | "opening" | "edge-stress" | "fleet";
+  id: "shell" | "haigh" | "sn" | "welded-sn" | "thickness" | "crack" | "spectrum" | "opening" | "edge-stress" | "fleet";
   caption: string;
   /** SVG from src/plots, which escapes every text it draws. */
   svg: string;
@@ -97,6 +98,24 @@ export function plotInputs(r: CheckResult, units: Units, face: { title?: string 
           designLife_cycles: f.designLife_cycles,
           scatterFactor: f.scatterFactor,
           allowableLife_cycles: f.allowableLife_cycles,
+        },
+        opts,
+      ),
+    });
+  }
+  if (f.weldedPoint) {
+    const w = f.weldedPoint;
+    figures.push({
+      id: "welded-sn",
+      caption: `Welded S-N curve (${w.curveName}) with the largest cycle as the operating point: its range after the route's corrections, at its own life in cycles.`,
+      svg: weldedSnCurve(
+        {
+          class_MPa: w.class_MPa,
+          curveName: w.curveName,
+          variableAmplitude: w.variableAmplitude,
+          operating: { range_MPa: w.range_MPa, life_cycles: w.life_cycles },
+          designLife_cycles: f.designLife_cycles,
+          designLifeUnit: f.lifeCountedIn,
         },
         opts,
       ),
@@ -183,6 +202,6 @@ export function plotInputs(r: CheckResult, units: Units, face: { title?: string 
       ? undefined
       : basquin
         ? "No Haigh or S-N plot: they show a single cycle, and this check sums the damage of a spectrum (see the calculation)."
-        : "No Haigh or S-N plot of the material: the welded detail curve is worked in the calculation.";
+        : "No Haigh plot: a welded class is a curve of stress range, and the mean stress does not enter it.";
   return { figures, note };
 }

@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { ALTITUDE_UNITS, LENGTH_UNITS, PRESSURE_UNITS, STRESS_UNITS } from "./units.ts";
+import { FATIGUE_CURVES, SERVICES, STATIC_BASES, WELD_DETAILS } from "./service.ts";
 
 /**
  * The check format, version 1: the one definition of a check.
@@ -43,6 +44,11 @@ const signedStress = (what: string) =>
   num(what)
     .min(-1e4, { error: `${what} must be at least −10 000 MPa` })
     .max(1e4, { error: `${what} must be at most 10 000 MPa` });
+/** Zero or more, at most `max` (an allowance or a gauge). */
+const nonNegative = (what: string, max: number) =>
+  num(what)
+    .min(0, { error: `${what} must be 0 or more` })
+    .max(max, { error: `${what} must be at most ${max}` });
 const text = (what: string, max: number) =>
   z.string({ error: `${what} must be text` }).max(max, { error: `${what} must be at most ${max} characters` });
 
@@ -61,6 +67,10 @@ export const shellSchema = z
       .enum(["auto", "thin", "thick"], { error: 'theory must be "auto", "thin" or "thick"' })
       .default("auto")
       .describe("auto: thick-wall (Lamé) below mean radius / thickness = 10"),
+    service: z
+      .enum(SERVICES, { error: `service must be one of ${SERVICES.join(", ")}` })
+      .default("other")
+      .describe("The kind of shell; it sets the defaults of the static basis and of the fatigue route"),
   })
   .superRefine((s, ctx) => {
     const inner =
@@ -144,7 +154,7 @@ export const pressureSchema = z
         code: "custom",
         path: ["max_MPa"],
         message:
-          "the maximum pressure must be greater than 0 (inside above outside); an outside pressure needs a buckling check, which this tool does not make",
+          "the maximum pressure must be greater than 0 (inside above outside): a shell under outside pressure alone needs a buckling check to the governing code, which this tool does not make; a vacuum part of a cycle is taken (min_MPa below 0) and refers the check",
       });
     } else if (p.max_MPa !== undefined && p.max_MPa < FLOORS.pressure_MPa) {
       ctx.addIssue({
@@ -333,8 +343,25 @@ export const fatigueSchema = z
       .min(1, { error: "the scatter factor must be at least 1" })
       .max(100, { error: "the scatter factor must be at most 100" })
       .default(1),
-    curve: z.enum(["basquin", "welded"], { error: 'curve must be "basquin" or "welded"' }).default("basquin"),
+    curve: z
+      .enum(FATIGUE_CURVES, { error: `curve must be one of ${FATIGUE_CURVES.join(", ")}` })
+      .optional()
+      .describe(
+        "basquin (the material curve), welded (EN 1993-1-9), en13445-welded or en13445-unwelded; the default follows shell.service",
+      ),
     detailCategory_MPa: positive("the detail category", 1000, FLOORS.strength).optional(),
+    weldDetail: z
+      .enum(WELD_DETAILS, { error: `weldDetail must be one of ${WELD_DETAILS.join(", ")}` })
+      .optional()
+      .describe("A weld detail of the picker; it sets the class unless detailCategory_MPa is given"),
+    temperature_C: num("the fatigue temperature")
+      .min(-200, { error: "the fatigue temperature must be at least −200 °C" })
+      .max(600, { error: "the fatigue temperature must be at most 600 °C" })
+      .optional()
+      .describe("T* = 0.75·T_max + 0.25·T_min of the cycle, for the temperature correction of the vessel curves (default 20 °C)"),
+    roughnessRz_um: positive("the surface roughness Rz", 1000)
+      .optional()
+      .describe("Peak-to-valley roughness Rz in µm for the unwelded vessel curve (default 200 µm, as-rolled plate)"),
     gammaMf: num("the partial factor γMf")
       .min(1, { error: "γMf must be at least 1" })
       .max(2, { error: "γMf must be at most 2" })
@@ -368,6 +395,13 @@ export const fatigueSchema = z
         code: "custom",
         path: ["detailCategory_MPa"],
         message: "a welded curve needs its detail category (stress range at 2 million cycles, MPa)",
+      });
+    }
+    if (f.weldDetail !== undefined && f.curve !== undefined && f.curve !== "en13445-welded") {
+      ctx.addIssue({
+        code: "custom",
+        path: ["weldDetail"],
+        message: 'a weld detail picks a class of the EN 13445-3 welded curves: choose curve "en13445-welded" or leave the detail out',
       });
     }
   });
@@ -488,10 +522,35 @@ export const checkSchema = z.strictObject({
   fatigue: fatigueSchema,
   static: z
     .strictObject({
+      basis: z
+        .enum(STATIC_BASES, { error: `the static basis must be one of ${STATIC_BASES.join(", ")}` })
+        .optional()
+        .describe("en13445-3, asme-viii-1, aircraft or yield; the default follows shell.service"),
       yieldFactor: num("the yield factor")
         .min(1, { error: "the yield factor must be at least 1" })
         .max(10, { error: "the yield factor must be at most 10" })
         .default(1.5),
+      allowableStress_MPa: positive("the allowable stress", 1e4, FLOORS.strength)
+        .optional()
+        .describe("The code's nominal design stress f or allowable stress S, when the user has it from the code's tables"),
+      jointEfficiency: num("the joint efficiency")
+        .gt(0, { error: "the joint efficiency must be above 0 and at most 1" })
+        .max(1, { error: "the joint efficiency must be above 0 and at most 1" })
+        .optional()
+        .describe("Weld joint coefficient z (EN 13445-3) or joint efficiency E (ASME VIII-1)"),
+      corrosionAllowance_mm: nonNegative("the corrosion allowance", 100).optional(),
+      thicknessTolerance_mm: nonNegative("the thickness tolerance", 100).optional().describe("The plate's minus tolerance"),
+      minimumGauge_mm: nonNegative("the minimum gauge", 1000)
+        .optional()
+        .describe("Least wall, exclusive of the corrosion allowance; the solved wall is never below it plus the allowance"),
+      limitFactor: num("the limit pressure factor")
+        .min(1, { error: "the limit pressure factor must be at least 1" })
+        .max(5, { error: "the limit pressure factor must be at most 5" })
+        .optional(),
+      ultimateFactor: num("the ultimate factor")
+        .min(1, { error: "the ultimate factor must be at least 1" })
+        .max(5, { error: "the ultimate factor must be at most 5" })
+        .optional(),
     })
     .optional(),
   crack: crackSchema.optional(),
@@ -530,3 +589,4 @@ export type MeanStressCriterion = (typeof MEAN_STRESS_CRITERIA)[number];
 export type SurfaceFinish = (typeof SURFACE_FINISHES)[number];
 export type MaterialFamily = (typeof MATERIAL_FAMILIES)[number];
 export type GaugeList = (typeof GAUGE_LISTS)[number];
+export * from "./service.ts";

@@ -17,7 +17,8 @@ describe("check format parsing", () => {
     expect(r.ok).toBe(true);
     if (!r.ok) return;
     expect(r.value.fatigue.scatterFactor).toBe(3);
-    expect(r.value.static).toBeUndefined();
+    expect(r.value.document.static).toBeUndefined();
+    expect(r.value.static.basis).toBe("yield");
     expect(r.value.crack?.cracksAtHole).toBe(2);
   });
 

@@ -6,6 +6,7 @@ import { FatigueSection } from "./fatigue.tsx";
 import { MaterialSection } from "./material.tsx";
 import { OptionsSection } from "./options.tsx";
 import { PressureSection } from "./pressure.tsx";
+import { ServiceSection } from "./service.tsx";
 import { ShellSection } from "./shell.tsx";
 import { UnitsSection } from "./units.tsx";
 import type { FormState } from "./state.ts";
@@ -35,6 +36,7 @@ export function CheckForm({ s }: { s: FormState }) {
       <button type="submit" class="default-submit" tabindex={-1} aria-hidden="true" hx-post="/recalc">
         Work it out
       </button>
+      <ServiceSection s={s} />
       <AboutSection s={s} />
       <UnitsSection s={s} />
       <ShellSection s={s} />

@@ -2,6 +2,7 @@ import type { CheckResult, VerdictRow } from "../../src/engine/index.ts";
 import { engineText } from "../../src/present/numbers.ts";
 import { VERDICT_WORDS } from "../../src/present/words.ts";
 import { cycles, margin, sig } from "../format.ts";
+import { STATIC_BASIS_LABEL, WELD_DETAIL_INFO } from "../../src/schema/service.ts";
 
 /** The row the verdict rests on, as the engine names it. */
 export function governingRow(result: CheckResult): VerdictRow | undefined {
@@ -34,6 +35,17 @@ export function VerdictSummary({ result }: { result: CheckResult }) {
           </>
         ) : null}
       </p>
+      <p class="static-basis" data-testid="static-basis">
+        <strong>Static basis:</strong> {STATIC_BASIS_LABEL[result.static.basis]}
+        {result.static.requiredThickness_mm !== null ? <> — ordered wall needed {sig(result.static.requiredThickness_mm, 4)} mm</> : null}
+        {f.weldDetail ? (
+          <>
+            {" "}
+            · <strong>Weld detail:</strong> {WELD_DETAIL_INFO[f.weldDetail].label}, class {sig(f.detailCategory_MPa, 3)}
+          </>
+        ) : null}
+      </p>
+      {result.static.statement ? <p class="static-statement">{result.static.statement}</p> : null}
       <dl class="headline">
         <div>
           <dt>Fatigue damage</dt>

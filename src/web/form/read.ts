@@ -47,6 +47,7 @@ export function readForm(v: FormValues, units: Units): ReadForm {
       radiusAt: pick("shell.radiusAt", "shell.radiusAt"),
       thickness_mm: number("shell.thickness"),
       theory: pick("shell.theory", "shell.theory"),
+      service: pick("shell.service", "shell.service"),
     },
     pressure: readPressure(v, units, r),
     cutout: readCutout(r),
@@ -58,8 +59,18 @@ export function readForm(v: FormValues, units: Units): ReadForm {
 
   const axial = { max_MPa: number("axial.max"), min_MPa: number("axial.min") };
   if (axial.max_MPa !== undefined || axial.min_MPa !== undefined) doc.axialExtra = axial;
-  const yieldFactor = number("static.yieldFactor");
-  if (yieldFactor !== undefined) doc.static = { yieldFactor };
+  const stat = {
+    basis: pick("static.basis", "static.basis"),
+    yieldFactor: number("static.yieldFactor"),
+    allowableStress_MPa: number("static.allowableStress"),
+    jointEfficiency: number("static.jointEfficiency"),
+    corrosionAllowance_mm: number("static.corrosionAllowance"),
+    thicknessTolerance_mm: number("static.thicknessTolerance"),
+    minimumGauge_mm: number("static.minimumGauge"),
+    limitFactor: number("static.limitFactor"),
+    ultimateFactor: number("static.ultimateFactor"),
+  };
+  if (Object.values(stat).some((x) => x !== undefined)) doc.static = stat;
   if (v["crack.on"]) doc.crack = readCrack(v, r);
   const fleetSize = number("fleet.size");
   if (fleetSize !== undefined || number("fleet.logStdDev") !== undefined)
@@ -204,8 +215,11 @@ function readFatigue(v: FormValues, r: Readers): Obj {
     designLife_cycles: r.number("fatigue.designLife"),
     scatterFactor: r.number("fatigue.scatterFactor"),
     curve,
-    detailCategory_MPa: curve === "welded" ? r.number("fatigue.detailCategory") : undefined,
+    detailCategory_MPa: curve === "welded" || curve === "en13445-welded" ? r.number("fatigue.detailCategory") : undefined,
     gammaMf: curve === "welded" ? r.number("fatigue.gammaMf") : undefined,
+    weldDetail: curve === "en13445-welded" || curve === undefined ? r.pick("fatigue.weldDetail", "fatigue.weldDetail") : undefined,
+    temperature_C: curve?.startsWith("en13445") || curve === undefined ? r.number("fatigue.temperature") : undefined,
+    roughnessRz_um: curve === "en13445-unwelded" ? r.number("fatigue.roughness") : undefined,
     localYield: r.pick("fatigue.localYield", "fatigue.localYield"),
     modifiers: Object.values(modifiers).some((x) => x !== undefined) ? modifiers : undefined,
   };

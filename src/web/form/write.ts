@@ -32,6 +32,7 @@ export function writeForm(doc: unknown, units: Units): FormValues {
   choose("shell.form", "shell.form");
   choose("shell.radiusAt", "shell.radiusAt");
   choose("shell.theory", "shell.theory");
+  choose("shell.service", "shell.service");
   putNumber("shell.radius");
   putNumber("shell.thickness");
 
@@ -94,7 +95,9 @@ export function writeForm(doc: unknown, units: Units): FormValues {
   for (const name of Object.keys(NUMBER_FIELDS) as NumberFieldName[]) if (name.startsWith("fatigue.")) putNumber(name);
   const constant = at("fatigue.notchConstant");
   v["fatigue.notch"] = typeof constant === "string" ? constant : at("fatigue.notchSensitivity") !== undefined ? "q" : "kt";
-  putNumber("static.yieldFactor");
+  put("static.basis", "static.basis");
+  put("fatigue.weldDetail", "fatigue.weldDetail");
+  for (const name of Object.keys(NUMBER_FIELDS) as NumberFieldName[]) if (name.startsWith("static.")) putNumber(name);
 
   if (at("crack") !== undefined) {
     v["crack.on"] = "on";
