@@ -202,6 +202,8 @@ export function plotInputs(r: CheckResult, units: Units, face: { title?: string 
       ? undefined
       : basquin
         ? "No Haigh or S-N plot: they show a single cycle, and this check sums the damage of a spectrum (see the calculation)."
-        : "No Haigh plot: a welded class is a curve of stress range, and the mean stress does not enter it.";
+        : f.curve === "en13445-unwelded"
+          ? "No Haigh or S-N plot of the material: the vessel code's unwelded curve and its factors are worked in the calculation."
+          : "No Haigh plot: a welded class is a curve of stress range, and the mean stress does not enter it.";
   return { figures, note };
 }
