@@ -4,7 +4,7 @@ import type { ResolvedCheck } from "./input.ts";
 import { fitCoupons } from "./coupons.ts";
 import { damageTolerance } from "./crackProgramme.ts";
 import { InputError } from "./errors.ts";
-import { cycleAtPoint, evaluate, evaluationSteps, type Context, type Evaluation } from "./evaluate.ts";
+import { cycleAtPoint, evaluate, evaluationSteps, membraneAt, type Context, type Evaluation } from "./evaluate.ts";
 import { evaluateEvidence } from "./evidence.ts";
 import { fleetView } from "./fleet.ts";
 import { resolveLoad, type Load } from "./load.ts";
@@ -391,7 +391,7 @@ function requiredThickness(ctx: Context, e: Evaluation): { value: number | null;
     shell.radiusAt === "inner" ? 100 * shell.radius_mm : shell.radiusAt === "mean" ? 1.999 * shell.radius_mm : 0.999 * shell.radius_mm;
   const start = Math.max(e.thickness_mm, allowances_mm(plan) * 1.01 + 1e-6);
   const root = increasingRoot(
-    (t) => Math.log(Math.max(evaluate(ctx, t, 1).static.ratio, 1e-300)),
+    (t) => Math.log(Math.max(membraneAt(ctx, t, 1).st.ratio, 1e-300)),
     start,
     Math.max(start * 1e-4, allowances_mm(plan) + 1e-9),
     tMax,

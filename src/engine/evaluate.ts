@@ -222,29 +222,9 @@ export function evaluate(
   criterion: MeanStressCriterion = ctx.input.fatigue.meanStress,
 ): Evaluation {
   const { input, load } = ctx;
-  const shell = input.shell;
   const plan = ctx.staticPlan;
-  // A wall used up by its allowances keeps a sliver so the arithmetic stays finite; its static ratio is 0.
-  const analysis_mm = Math.max(thickness_mm - allowances_mm(plan), thickness_mm * 1e-6);
-  const r = radii(shell.radius_mm, shell.radiusAt, analysis_mm);
-  const theory = chooseTheory(shell.theory, r, analysis_mm);
-  const u = unitStresses(shell.form, theory, r, analysis_mm);
-  const extra = input.axialExtra ?? { max_MPa: 0, min_MPa: 0 };
-  const pMax = load.max_MPa * scale;
-  const pMin = load.min_MPa * scale;
-  const hoopMax = u.hoop * pMax;
-  const hoopMin = u.hoop * pMin;
-  const axialMax = u.axial * pMax + extra.max_MPa;
-  const axialMin = u.axial * pMin + extra.min_MPa;
-  const radialMax = u.radial * pMax;
-  const vm = vonMises(hoopMax, axialMax, radialMax);
-  const newInnerRadius_mm = radii(shell.radius_mm, shell.radiusAt, thickness_mm).inner_mm;
-  const st = staticAt(plan, {
-    analysis_mm: thickness_mm - allowances_mm(plan),
-    innerRadius_mm: newInnerRadius_mm,
-    pMax,
-    vonMisesAt: (k) => vonMises(k * hoopMax, k * u.axial * pMax + extra.max_MPa, k * radialMax),
-  });
+  const m = membraneAt(ctx, thickness_mm, scale);
+  const { analysis_mm, r, theory, u, extra, pMax, pMin, hoopMax, hoopMin, axialMax, axialMin, radialMax, vm, newInnerRadius_mm, st } = m;
   const staticAllowable = plan.allowable_MPa;
   const lambda = hoopMax > 0 ? axialMax / hoopMax : 0;
   const field = pointField(ctx);
@@ -327,6 +307,35 @@ export function evaluate(
     allowable,
     damage,
   };
+}
+
+/** The membrane stresses and the static check alone at a wall and a pressure scale (no fatigue): what the static solve needs. */
+export function membraneAt(ctx: Context, thickness_mm: number, scale: number) {
+  const { input, load } = ctx;
+  const shell = input.shell;
+  const plan = ctx.staticPlan;
+  // A wall used up by its allowances keeps a sliver so the arithmetic stays finite; its static ratio is 0.
+  const analysis_mm = Math.max(thickness_mm - allowances_mm(plan), thickness_mm * 1e-6);
+  const r = radii(shell.radius_mm, shell.radiusAt, analysis_mm);
+  const theory = chooseTheory(shell.theory, r, analysis_mm);
+  const u = unitStresses(shell.form, theory, r, analysis_mm);
+  const extra = input.axialExtra ?? { max_MPa: 0, min_MPa: 0 };
+  const pMax = load.max_MPa * scale;
+  const pMin = load.min_MPa * scale;
+  const hoopMax = u.hoop * pMax;
+  const hoopMin = u.hoop * pMin;
+  const axialMax = u.axial * pMax + extra.max_MPa;
+  const axialMin = u.axial * pMin + extra.min_MPa;
+  const radialMax = u.radial * pMax;
+  const vm = vonMises(hoopMax, axialMax, radialMax);
+  const newInnerRadius_mm = radii(shell.radius_mm, shell.radiusAt, thickness_mm).inner_mm;
+  const st = staticAt(plan, {
+    analysis_mm: thickness_mm - allowances_mm(plan),
+    innerRadius_mm: newInnerRadius_mm,
+    pMax,
+    vonMisesAt: (k) => vonMises(k * hoopMax, k * u.axial * pMax + extra.max_MPa, k * radialMax),
+  });
+  return { analysis_mm, r, theory, u, extra, pMax, pMin, hoopMax, hoopMin, axialMax, axialMin, radialMax, vm, newInnerRadius_mm, st };
 }
 
 /** The stresses per MPa that fatigue works on: the membrane ones, with σr = −p at the bore on the vessel route. */

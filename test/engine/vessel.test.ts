@@ -112,6 +112,25 @@ describe("the vessel path through the whole check", () => {
     expect(r.static.statement).toContain("not a statement of compliance");
   });
 
+  it("a plain thin receiver wall on class 63: Δσ_eq = Δp·(r_m/e_a + 1) with σr = −p, N = 2×10⁶·(63/Δσ_eq)³ (hand calculation)", () => {
+    const r = run({
+      format: "hoopwise.check/1",
+      shell: { form: "cylinder", radius_mm: 300, radiusAt: "inner", thickness_mm: 5, service: "pressure-vessel" },
+      pressure: { max_MPa: 1.1, min_MPa: 0 },
+      material: { id: "steel-p265gh" },
+      fatigue: { designLife_cycles: 1000, weldDetail: "nozzle-fillet" },
+      static: { basis: "en13445-3", corrosionAllowance_mm: 1, thicknessTolerance_mm: 0.3 },
+    });
+    // analysis wall e_a = 5 − 1 − 0.3 = 3.7 mm (EN 13445-3 §5.2, from memory); r_m = 300 + 3.7/2 = 301.85 mm
+    // principal ranges at the bore: σθ = 1.1 × 301.85/3.7, σx = half of it, σr = −1.1 ⇒ Tresca = σθ − σr (§18.6, from memory)
+    const range = 1.1 * (301.85 / 3.7 + 1);
+    expect(2 * r.fatigue.amplitude_MPa).toBeCloseTo(range, 9);
+    // 5 mm ≤ 25 mm: no thickness correction; 20 °C: no temperature correction; range < 2·Rp0.2: ke = 1
+    // welded class 63 (nozzle fillet, EN 13445-3 Table 18-4 from memory), slope 3: N = 2×10⁶·(63/90.84)³ ≈ 667 000 cycles
+    expect(r.fatigue.life_cycles).toBeCloseTo(2e6 * (63 / range) ** 3, 3);
+    expect(r.fatigue.weldedPoint?.range_MPa).toBeCloseTo(range, 9);
+  });
+
   it("the welded route is refused for aluminium unless a class is given", () => {
     const doc = {
       format: "hoopwise.check/1",
