@@ -83,6 +83,40 @@ const SPARSE: [string, Record<string, unknown>][] = [
     },
   ],
   [
+    "every static and vessel-fatigue key: ASME basis, unwelded vessel curve",
+    {
+      ...base,
+      shell: { form: "cylinder", radius_mm: 300, radiusAt: "inner", thickness_mm: 8, service: "pressure-vessel" },
+      pressure: { max_MPa: 1.6, min_MPa: 0 },
+      cutout: { kind: "none" },
+      material: { id: "steel-p265gh" },
+      fatigue: { designLife_cycles: 20000, curve: "en13445-unwelded", temperature_C: 150, roughnessRz_um: 50 },
+      static: {
+        basis: "asme-viii-1",
+        allowableStress_MPa: 118,
+        jointEfficiency: 0.85,
+        corrosionAllowance_mm: 1.5,
+        thicknessTolerance_mm: 0.25,
+        minimumGauge_mm: 2,
+      },
+    },
+  ],
+  [
+    "a welded vessel class given as a number, with the EN basis left to the service",
+    {
+      ...base,
+      shell: { form: "sphere", radius_mm: 400, radiusAt: "inner", thickness_mm: 6, service: "pressure-vessel" },
+      pressure: { max_MPa: 1, min_MPa: 0 },
+      cutout: { kind: "none" },
+      material: { id: "steel-p265gh" },
+      fatigue: { designLife_cycles: 5000, curve: "en13445-welded", detailCategory_MPa: 80 },
+    },
+  ],
+  [
+    "an aircraft cabin with its pressure factors",
+    { ...base, shell: { ...base.shell, service: "aircraft-cabin" }, static: { limitFactor: 1.4, ultimateFactor: 1.6 } },
+  ],
+  [
     "a detectable size by inspection method",
     { ...base, crack: { geometry: "edge-through", initial_mm: 1, detectableBy: "detailed-visual", orientation: "axial" } },
   ],
@@ -118,6 +152,22 @@ describe("a document and its form posted back unchanged give one result", () => 
     const cabin = DEMOS.find((d) => d.id === "cabin")?.document;
     const carried = unshownParts(cabin, unitsFrom(cabin?.display as Record<string, unknown> | undefined)) ?? {};
     expect(Object.keys(carried).filter((k) => k.startsWith("crack.") || k.startsWith("fleet."))).toEqual([]);
+  });
+
+  it("shows every kind-of-shell, static-basis and vessel-fatigue key in a field of its own", () => {
+    const vesselKey = (k: string) =>
+      k === "shell.service" ||
+      k.startsWith("static.") ||
+      ["fatigue.curve", "fatigue.weldDetail", "fatigue.detailCategory_MPa", "fatigue.temperature_C", "fatigue.roughnessRz_um"].includes(k);
+    const docs = [
+      DEMOS.find((d) => d.id === "receiver")?.document,
+      ...SPARSE.filter(([name]) => /vessel|aircraft cabin/.test(name)).map(([, d]) => d),
+    ];
+    expect(docs.length).toBe(4);
+    for (const doc of docs) {
+      const carried = unshownParts(doc, unitsFrom((doc as { display?: Record<string, unknown> } | undefined)?.display)) ?? {};
+      expect(Object.keys(carried).filter(vesselKey)).toEqual([]);
+    }
   });
 
   it("the cabin demo's crack row is the same before and after pressing “Work it out” unchanged", async () => {
