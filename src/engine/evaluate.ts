@@ -316,7 +316,13 @@ export function membraneAt(ctx: Context, thickness_mm: number, scale: number) {
   const plan = ctx.staticPlan;
   // A wall used up by its allowances keeps a sliver so the arithmetic stays finite; its static ratio is 0.
   const analysis_mm = Math.max(thickness_mm - allowances_mm(plan), thickness_mm * 1e-6);
-  const r = radii(shell.radius_mm, shell.radiusAt, analysis_mm);
+  const newInnerRadius_mm = radii(shell.radius_mm, shell.radiusAt, thickness_mm).inner_mm;
+  // The wall corrodes from the inside: the stresses are worked on the corroded inner radius R_i + c with the analysis
+  // wall outside it, as the code formulas take R (or Di) in the corroded condition (ASME VIII-1 UG-27, EN 13445-3 §7.4).
+  const r =
+    plan.corrosion_mm > 0
+      ? radii(newInnerRadius_mm + plan.corrosion_mm, "inner", analysis_mm)
+      : radii(shell.radius_mm, shell.radiusAt, analysis_mm);
   const theory = chooseTheory(shell.theory, r, analysis_mm);
   const u = unitStresses(shell.form, theory, r, analysis_mm);
   const extra = input.axialExtra ?? { max_MPa: 0, min_MPa: 0 };
@@ -328,7 +334,6 @@ export function membraneAt(ctx: Context, thickness_mm: number, scale: number) {
   const axialMin = u.axial * pMin + extra.min_MPa;
   const radialMax = u.radial * pMax;
   const vm = vonMises(hoopMax, axialMax, radialMax);
-  const newInnerRadius_mm = radii(shell.radius_mm, shell.radiusAt, thickness_mm).inner_mm;
   const st = staticAt(plan, {
     analysis_mm: thickness_mm - allowances_mm(plan),
     innerRadius_mm: newInnerRadius_mm,

@@ -121,12 +121,13 @@ describe("the vessel path through the whole check", () => {
       fatigue: { designLife_cycles: 1000, weldDetail: "nozzle-fillet" },
       static: { basis: "en13445-3", corrosionAllowance_mm: 1, thicknessTolerance_mm: 0.3 },
     });
-    // analysis wall e_a = 5 − 1 − 0.3 = 3.7 mm (EN 13445-3 §5.2, from memory); r_m = 300 + 3.7/2 = 301.85 mm
+    // analysis wall e_a = 5 − 1 − 0.3 = 3.7 mm (EN 13445-3 §5.2, from memory) outside the corroded inner radius
+    // R = 300 + 1 = 301 mm (UG-27: R in the corroded condition, from memory) ⇒ r_m = 301 + 3.7/2 = 302.85 mm
     // principal ranges at the bore: σθ = 1.1 × 301.85/3.7, σx = half of it, σr = −1.1 ⇒ Tresca = σθ − σr (§18.6, from memory)
-    const range = 1.1 * (301.85 / 3.7 + 1);
+    const range = 1.1 * (302.85 / 3.7 + 1);
     expect(2 * r.fatigue.amplitude_MPa).toBeCloseTo(range, 9);
     // 5 mm ≤ 25 mm: no thickness correction; 20 °C: no temperature correction; range < 2·Rp0.2: ke = 1
-    // welded class 63 (nozzle fillet, EN 13445-3 Table 18-4 from memory), slope 3: N = 2×10⁶·(63/90.84)³ ≈ 667 000 cycles
+    // welded class 63 (nozzle fillet, EN 13445-3 Table 18-4 from memory), slope 3: N = 2×10⁶·(63/91.14)³ ≈ 660 600 cycles
     expect(r.fatigue.life_cycles).toBeCloseTo(2e6 * (63 / range) ** 3, 3);
     expect(r.fatigue.weldedPoint?.range_MPa).toBeCloseTo(range, 9);
   });
