@@ -1,9 +1,10 @@
 import { availableParallelism } from "node:os";
 import { Piscina } from "piscina";
-import type { CheckAnswer } from "./work.ts";
+import type { ImportKeys } from "../store/exchange.ts";
+import type { CheckAnswer, ImportAnswer } from "./work.ts";
 import type { Task } from "./worker.ts";
 
-export { checkText, checkValue, type CheckAnswer } from "./work.ts";
+export { checkText, checkValue, prepareImportText, type CheckAnswer, type ImportAnswer } from "./work.ts";
 
 /**
  * A pool of worker threads (node:worker_threads through piscina) for work too big for the request
@@ -16,6 +17,8 @@ export interface WorkPool {
   check(doc: string | Uint8Array): Promise<CheckAnswer>;
   /** Several documents in one hand-over to a thread; the answers in the same order. */
   checkMany(texts: string[]): Promise<CheckAnswer[]>;
+  /** A records import's document (UTF-8 bytes, moved to the worker) parsed, validated and its signatures checked against `keys`. */
+  prepareImport(bytes: Uint8Array, keys: ImportKeys): Promise<ImportAnswer>;
   readonly threads: number;
   close(): Promise<void>;
 }
@@ -39,7 +42,7 @@ const WORKER = new URL("./worker.ts", import.meta.url).href;
 
 export function createPool(opts: PoolOptions = {}): WorkPool {
   const threads = Math.max(1, opts.threads ?? availableParallelism());
-  const piscina = new Piscina<Task, CheckAnswer | CheckAnswer[]>({
+  const piscina = new Piscina<Task, CheckAnswer | CheckAnswer[] | ImportAnswer>({
     filename: WORKER,
     minThreads: threads,
     maxThreads: threads,
@@ -60,6 +63,18 @@ export function createPool(opts: PoolOptions = {}): WorkPool {
         if (typeof doc === "string") return (await piscina.run({ kind: "check", text: doc })) as CheckAnswer;
         const own = doc.byteOffset === 0 && doc.byteLength === doc.buffer.byteLength ? doc : doc.slice();
         return (await piscina.run({ kind: "check-bytes", bytes: own }, { transferList: [own.buffer as ArrayBuffer] })) as CheckAnswer;
+      } catch (err) {
+        if (/queue is at limit/i.test((err as Error).message)) throw new WorkPoolBusy((err as Error).message);
+        throw err;
+      }
+    },
+    async prepareImport(bytes, keys) {
+      const own = bytes.byteOffset === 0 && bytes.byteLength === bytes.buffer.byteLength ? bytes : bytes.slice();
+      try {
+        return (await piscina.run(
+          { kind: "prepare-import", bytes: own, keys },
+          { transferList: [own.buffer as ArrayBuffer] },
+        )) as ImportAnswer;
       } catch (err) {
         if (/queue is at limit/i.test((err as Error).message)) throw new WorkPoolBusy((err as Error).message);
         throw err;

@@ -1,6 +1,10 @@
 import { checkDocument } from "../engine/index.ts";
 import { parseJsonText } from "../schema/jsonText.ts";
 import { MAX_JSON_DEPTH, tooDeepAt } from "../schema/depth.ts";
+import { jsonBody } from "../schema/jsonBody.ts";
+import { validateCheckDocument } from "../store/checkValidator.ts";
+import { InvalidRecordError } from "../store/errors.ts";
+import { prepareImport, type ImportKeys, type PreparedImport } from "../store/exchange.ts";
 
 /**
  * One check from the text of its document to the text of its answer: parse, depth guard, validate,
@@ -32,4 +36,25 @@ export function checkValue(value: unknown): CheckAnswer {
     return { status: 422, body: errorsText(deep, `nests deeper than ${MAX_JSON_DEPTH} levels; no field of Hoopwise nests that deep`) };
   const out = checkDocument(value);
   return out.ok ? { status: 200, body: JSON.stringify(out.result) } : { status: 422, body: JSON.stringify({ errors: out.errors }) };
+}
+
+/** A records import worked off the request thread: ready for the store's transaction, or refused. */
+export type ImportAnswer =
+  | { ok: true; prepared: PreparedImport }
+  | { ok: false; status: 400 | 422; body: { errors: { path: string; message: string }[] } };
+
+/**
+ * An exchange document from its text to what the store's import transaction needs: parsed, its
+ * caps and fields checked, every revision's fingerprint and input validated with the check schema,
+ * every signature checked against `keys`. Never throws for a bad document.
+ */
+export function prepareImportText(text: string, keys: ImportKeys): ImportAnswer {
+  const body = jsonBody(text);
+  if (!body.ok) return body;
+  try {
+    return { ok: true, prepared: prepareImport({ validate: validateCheckDocument }, body.value, keys) };
+  } catch (err) {
+    if (err instanceof InvalidRecordError) return { ok: false, status: 422, body: { errors: err.errors } };
+    throw err;
+  }
 }

@@ -3,17 +3,20 @@
  * thread boundary (the document in, the answer out), so nothing is cloned field by field.
  */
 import "./yield.ts";
-import { checkText, type CheckAnswer } from "./work.ts";
+import type { ImportKeys } from "../store/exchange.ts";
+import { checkText, prepareImportText, type CheckAnswer, type ImportAnswer } from "./work.ts";
 
 export type Task =
   | { kind: "check"; text: string }
   | { kind: "check-bytes"; bytes: Uint8Array }
   /** Several small documents at once (a batch run): one hand-over to the thread for all of them. */
-  | { kind: "check-many"; texts: string[] };
+  | { kind: "check-many"; texts: string[] }
+  /** A records import's document (UTF-8 bytes, moved) with the keys its signatures may be by. */
+  | { kind: "prepare-import"; bytes: Uint8Array; keys: ImportKeys };
 
 const utf8 = new TextDecoder();
 
-export default function run(task: Task): CheckAnswer | CheckAnswer[] {
+export default function run(task: Task): CheckAnswer | CheckAnswer[] | ImportAnswer {
   switch (task.kind) {
     case "check":
       return checkText(task.text);
@@ -21,5 +24,7 @@ export default function run(task: Task): CheckAnswer | CheckAnswer[] {
       return checkText(utf8.decode(task.bytes));
     case "check-many":
       return task.texts.map((t) => checkText(t, "the line"));
+    case "prepare-import":
+      return prepareImportText(utf8.decode(task.bytes), task.keys);
   }
 }

@@ -1,3 +1,4 @@
+import type { KeyObject } from "node:crypto";
 import { z } from "zod";
 import { fingerprint } from "../engine/fingerprint.ts";
 import { canonicalJson } from "../schema/canonical.ts";
@@ -12,7 +13,7 @@ import { getCheck } from "./history.ts";
 import { keyFingerprint, readPublicKey, signatureValid } from "./keys.ts";
 import { identityOf, signOffProblem, type SignoffRow } from "./signoffs.ts";
 import { ROLES } from "./state.ts";
-import { keyForFingerprint } from "./trust.ts";
+import { listTrustedKeys } from "./trust.ts";
 import type { Actor } from "./users.ts";
 
 /**
@@ -138,42 +139,58 @@ export async function exportCheck(ctx: StoreContext, checkId: string): Promise<E
   };
 }
 
+/** The public keys an import's signatures may be by: these records' own and the ones an admin trusts. */
+export interface ImportKeys {
+  /** PEM text by fingerprint. */
+  [fingerprint: string]: string;
+}
+
 /**
- * An exchange document checked for everything that needs no database: the caps, the fields,
- * the numbering, every fingerprint and the input of each revision (validated and normalized),
- * and the canonical text the file's signature covers. Pure and CPU-bound, so a large import can
- * be worked out of the request thread; the result is plain data.
+ * An exchange document checked for everything but what is already in the records: the caps, the
+ * fields, the numbering, every fingerprint, the input of each revision (validated), the file's
+ * and every sign-off's signature against `keys`, and the sign-off rules. Pure and CPU-bound, so a
+ * large import is worked in a worker thread; the answer is plain data (the inputs left out, their
+ * canonical text kept), cheap to hand back.
  */
 export interface PreparedImport {
+  /** The document with each revision's input set to null: `canonical` holds it. */
   doc: ExchangeDocument;
   /** The canonical JSON of each revision's input, in order, as it will be stored. */
   canonical: string[];
-  /** The canonical JSON of the document without its signature: what the file's signature signs. */
-  signedBody: string;
+  trust: Trust;
 }
 
-export function prepareImport(ctx: Pick<StoreContext, "validate">, document: unknown): PreparedImport {
+export function prepareImport(ctx: Pick<StoreContext, "validate">, document: unknown, keys: ImportKeys): PreparedImport {
   refuseOverCaps(document);
   const doc = parseFields(exchangeDoc, document);
   const errors = checkContent(ctx, doc);
   if (errors.length) throw new InvalidRecordError(errors);
   const { signature: _s, ...body } = document as Record<string, unknown>;
-  return { doc, canonical: doc.revisions.map((r) => canonicalJson(r.input)), signedBody: canonicalJson(body) };
+  const trust = judgeTrust(doc, canonicalJson(body), (fp) => (keys[fp] ? readPublicKey(keys[fp]) : undefined));
+  if (trust.ok) {
+    const ruleErrors = doc.revisions.flatMap((r, i) => signoffErrors(r.signoffs, `revisions.${i}`));
+    if (ruleErrors.length) throw new InvalidRecordError(ruleErrors);
+  }
+  const canonical = doc.revisions.map((r) => canonicalJson(r.input));
+  return { doc: { ...doc, revisions: doc.revisions.map((r) => ({ ...r, input: null })) }, canonical, trust };
+}
+
+/** The keys an import may be signed with, as prepareImport takes them. */
+export async function importKeys(ctx: Pick<StoreContext, "sql" | "keys">): Promise<ImportKeys> {
+  const keys: ImportKeys = { [ctx.keys.fingerprint]: ctx.keys.publicKeyPem };
+  for (const k of await listTrustedKeys(ctx.sql)) keys[k.fingerprint] = k.publicKeyPem;
+  return keys;
 }
 
 /**
  * Bring an exported check into this database after checking the caps, every fingerprint, the
  * input of each revision, the signatures and the sign-off rules. Nothing is written unless all
- * of it holds: the rows go in one write transaction. `prepared` is prepareImport's answer when
- * it was worked elsewhere (a worker thread); otherwise it is worked here.
+ * of it holds: the rows go in one write transaction. `prepared` is prepareImport's answer for
+ * this document when it was worked elsewhere (a worker thread, with the same schema and keys);
+ * otherwise it is worked here.
  */
 export async function importCheck(ctx: StoreContext, document: unknown, by: Actor, prepared?: PreparedImport): Promise<ImportedCheck> {
-  const { doc, canonical, signedBody } = prepared ?? prepareImport(ctx, document);
-  const trust = await judgeTrust(ctx, doc, signedBody);
-  if (trust.ok) {
-    const ruleErrors = doc.revisions.flatMap((r, i) => signoffErrors(r.signoffs, `revisions.${i}`));
-    if (ruleErrors.length) throw new InvalidRecordError(ruleErrors);
-  }
+  const { doc, canonical, trust } = prepared ?? prepareImport(ctx, document, await importKeys(ctx));
 
   const at = isoNow(ctx);
   const { check } = doc;
@@ -286,15 +303,15 @@ function checkContent(ctx: Pick<StoreContext, "validate">, doc: ExchangeDocument
   return errors;
 }
 
-type Trust = { ok: true; fingerprint: string } | { ok: false; fingerprint: string | null; why: string };
+export type Trust = { ok: true; fingerprint: string } | { ok: false; fingerprint: string | null; why: string };
 
 /** Whether the document and all its sign-offs are signed by a key these records trust. */
-async function judgeTrust(ctx: StoreContext, doc: ExchangeDocument, signedBody: string): Promise<Trust> {
+function judgeTrust(doc: ExchangeDocument, signedBody: string, keyFor: (fingerprint: string) => KeyObject | undefined): Trust {
   const key = readPublicKey(doc.signature.publicKeyPem);
   if (!key) return { ok: false, fingerprint: null, why: "the file's public key cannot be read" };
   // The fingerprint is worked out from the key itself, never taken from the file's word.
   const fp = keyFingerprint(key);
-  const trusted = await keyForFingerprint(ctx, ctx.sql, fp);
+  const trusted = keyFor(fp);
   if (!trusted)
     return { ok: false, fingerprint: fp, why: `the file is signed with key ${fp}, which no admin of these records has marked trusted` };
   if (!signatureValid(trusted, signedBody, doc.signature.value)) {
@@ -311,7 +328,7 @@ async function judgeTrust(ctx: StoreContext, doc: ExchangeDocument, signedBody: 
         name: s.name,
         signedAt: s.signedAt,
       };
-      const signer = s.keyFingerprint ? await keyForFingerprint(ctx, ctx.sql, s.keyFingerprint) : undefined;
+      const signer = s.keyFingerprint ? keyFor(s.keyFingerprint) : undefined;
       if (!signer || !s.signature || s.userId === null || !signatureValid(signer, signoffMessage(facts), s.signature)) {
         return { ok: false, fingerprint: fp, why: `the ${s.role} sign-off of revision ${i + 1} has no valid signature from a trusted key` };
       }

@@ -8,7 +8,15 @@ import { openPostgres } from "./postgres.ts";
 import type { Dialect, Sql } from "./sql.ts";
 import { sqliteSql } from "./sqlite.ts";
 import { addRevision, createCheck, type CreatedCheck, type NewCheck, type NewRevision, type SavedRevision } from "./checks.ts";
-import { exportCheck, importCheck, type ExchangeDocument, type ImportedCheck, type PreparedImport } from "./exchange.ts";
+import {
+  exportCheck,
+  importCheck,
+  importKeys,
+  type ExchangeDocument,
+  type ImportedCheck,
+  type ImportKeys,
+  type PreparedImport,
+} from "./exchange.ts";
 import { probeWrite } from "./health.ts";
 import { getCheck, getSheetRevision, listChecks, type CheckRecord, type CheckSummary, type SheetRevision } from "./history.ts";
 import { openKeyFile, openSigningKeys, type SigningKeys } from "./keys.ts";
@@ -85,8 +93,10 @@ export interface Store {
   getSheetRevision(checkId: string, revision: number): Promise<SheetRevision>;
   signOff(checkId: string, request: SignOffRequest, by: Actor, source: string): Promise<SignedRevision>;
   exportCheck(checkId: string): Promise<ExchangeDocument>;
-  /** `prepared`: prepareImport's answer for this document, worked elsewhere (a worker thread). */
+  /** `prepared`: prepareImport's answer for this document, worked elsewhere (a worker thread) with importKeys(). */
   importCheck(document: unknown, by: Actor, prepared?: PreparedImport): Promise<ImportedCheck>;
+  /** The public keys an import's signatures may be by (these records' own and the trusted ones), for prepareImport. */
+  importKeys(): Promise<ImportKeys>;
 
   /** `by` null only while no one is registered: the first user, an admin. */
   addUser(args: NewUser, by: Adder, source?: string): Promise<UserRecord>;
@@ -209,6 +219,7 @@ function facade(sql: Sql, keys: SigningKeys, options: StoreOptions): OpenedStore
     signOff: (checkId, request, by, source) => signOff(ctx, checkId, request, by, source),
     exportCheck: (checkId) => exportCheck(ctx, checkId),
     importCheck: (document, by, prepared) => importCheck(ctx, document, by, prepared),
+    importKeys: () => importKeys(ctx),
     addUser: (args, by, source) => addUser(ctx, args, by, source),
     countUsers: () => countUsers(sql),
     listUsers: () => listUsers(sql),
@@ -230,7 +241,7 @@ function facade(sql: Sql, keys: SigningKeys, options: StoreOptions): OpenedStore
 export type { Validator } from "./context.ts";
 export type { Db } from "./db.ts";
 export type { CreatedCheck, NewCheck, NewRevision, SavedRevision } from "./checks.ts";
-export type { ExchangeDocument, ImportedCheck, PreparedImport } from "./exchange.ts";
+export type { ExchangeDocument, ImportedCheck, ImportKeys, PreparedImport } from "./exchange.ts";
 export type { Dialect, Param, Q, Sql } from "./sql.ts";
 export type { CheckRecord, CheckSummary, RevisionRecord, SheetRevision } from "./history.ts";
 export type { EventKind, EventRecord } from "./events.ts";

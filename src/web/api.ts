@@ -1,7 +1,7 @@
 import { Hono } from "hono";
 import { bodyLimit } from "hono/body-limit";
 import { checkText, sharedPool, WorkPoolBusy, type WorkPool } from "../pool/index.ts";
-import { illFormedAt, MAX_JSON_DEPTH, tooDeepAt } from "../schema/depth.ts";
+import { jsonBody } from "../schema/jsonBody.ts";
 
 /** Largest JSON body the API reads: room for the longest history the schema takes (5 000 000 points of about 8 characters). */
 export const MAX_JSON_BYTES = 64 * 1024 * 1024;
@@ -23,31 +23,10 @@ export async function readJson(
 ): Promise<{ ok: true; value: unknown } | { ok: false; status: 400 | 415 | 422; body: ReturnType<typeof errorsDoc> }> {
   const wrongType = notJson(req);
   if (wrongType) return { ok: false, status: 415, body: wrongType };
-  const text = await req.text();
-  let value: unknown;
-  try {
-    value = JSON.parse(text);
-  } catch (err) {
-    return { ok: false, status: 400, body: errorsDoc("(document)", `the body is not valid JSON: ${(err as Error).message}`) };
-  }
-  const deep = tooDeepAt(value);
-  if (deep !== undefined)
-    return {
-      ok: false,
-      status: 422,
-      body: errorsDoc(deep, `nests deeper than ${MAX_JSON_DEPTH} levels; no field of Hoopwise nests that deep`),
-    };
-  const bad = illFormedAt(value);
-  if (bad !== undefined)
-    return {
-      ok: false,
-      status: 422,
-      body: errorsDoc(bad, "holds ill-formed Unicode (a lone surrogate, half of a character); send the text as proper UTF-8"),
-    };
-  return { ok: true, value };
+  return jsonBody(await req.text());
 }
 
-function notJson(req: Request): ReturnType<typeof errorsDoc> | undefined {
+export function notJson(req: Request): ReturnType<typeof errorsDoc> | undefined {
   const type = req.headers.get("content-type") ?? "";
   if (/^application\/(.+\+)?json\b/i.test(type)) return undefined;
   return errorsDoc("(document)", `send the check as JSON with Content-Type: application/json (got "${type || "none"}")`);

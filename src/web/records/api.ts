@@ -1,14 +1,20 @@
 import { Hono } from "hono";
 import { bodyLimit } from "hono/body-limit";
 import { MAX_IMPORT_BYTES, type NewCheck, type NewRevision, type NewUser, type SignOffRequest, type Store } from "../../store/index.ts";
-import { errorsDoc, readJson, tooLarge } from "../api.ts";
+import { sharedPool, WorkPoolBusy, type WorkPool } from "../../pool/index.ts";
+import { jsonBody } from "../../schema/jsonBody.ts";
+import { errorsDoc, notJson, POOL_FROM_BYTES, readJson, tooLarge } from "../api.ts";
 import { clearSessionCookie, noStore, requireUser, setSessionCookie, sourceOf, tokenOf, type RecordsEnv } from "./auth.ts";
 import { recordsErrorResponse } from "./http.ts";
 
 export interface RecordsDeps {
   /** The open records store; it validates check inputs with the validator it was opened with. */
   store: Store;
+  /** Worker threads for large imports; the process's shared pool unless given. */
+  pool?: WorkPool;
 }
+
+const utf8 = new TextDecoder();
 
 const importLimit = bodyLimit({
   maxSize: MAX_IMPORT_BYTES,
@@ -21,7 +27,7 @@ const importLimit = bodyLimit({
  * only carry requests in and answers out, for the signed-in user. Only POST /api/v1/session and
  * GET /api/v1/keys are open.
  */
-export function recordsApi({ store }: RecordsDeps): Hono<RecordsEnv> {
+export function recordsApi({ store, pool }: RecordsDeps): Hono<RecordsEnv> {
   const app = new Hono<RecordsEnv>();
   app.onError(recordsErrorResponse);
   for (const path of ["/api/v1/checks", "/api/v1/users", "/api/v1/session", "/api/v1/keys"]) {
@@ -65,11 +71,29 @@ export function recordsApi({ store }: RecordsDeps): Hono<RecordsEnv> {
     return c.json(created, 201);
   });
 
-  // "import" can never be taken for a check id here: it has no second path segment.
+  // "import" can never be taken for a check id here: it has no second path segment. A large file
+  // is parsed, validated and its signatures checked in a worker thread (the bytes moved there, not
+  // copied), so the request thread keeps serving; only the write transaction runs here.
   app.post("/api/v1/checks/import", importLimit, async (c) => {
-    const body = await readJson(c.req.raw);
-    if (!body.ok) return c.json(body.body, body.status);
-    const imported = await store.importCheck(body.value, c.get("user"));
+    const wrongType = notJson(c.req.raw);
+    if (wrongType) return c.json(wrongType, 415);
+    const bytes = new Uint8Array(await c.req.raw.arrayBuffer());
+    let imported: Awaited<ReturnType<Store["importCheck"]>>;
+    if (bytes.byteLength < POOL_FROM_BYTES) {
+      const body = jsonBody(utf8.decode(bytes));
+      if (!body.ok) return c.json(body.body, body.status);
+      imported = await store.importCheck(body.value, c.get("user"));
+    } else {
+      let answer: Awaited<ReturnType<WorkPool["prepareImport"]>>;
+      try {
+        answer = await (pool ?? sharedPool()).prepareImport(bytes, await store.importKeys());
+      } catch (err) {
+        if (!(err instanceof WorkPoolBusy)) throw err;
+        return c.json(errorsDoc("(server)", "every worker is busy with large documents; try again shortly"), 503, { "retry-after": "2" });
+      }
+      if (!answer.ok) return c.json(answer.body, answer.status);
+      imported = await store.importCheck(undefined, c.get("user"), answer.prepared);
+    }
     c.header("Location", `/api/v1/checks/${encodeURIComponent(imported.id)}`);
     return c.json(imported, 201);
   });
