@@ -1,10 +1,11 @@
 import { availableParallelism } from "node:os";
 import { Piscina } from "piscina";
 import type { ImportKeys } from "../store/exchange.ts";
-import type { CheckAnswer, ImportAnswer } from "./work.ts";
+import type { LogOptions } from "../schema/pressureLog.ts";
+import type { CheckAnswer, ImportAnswer, LogPreview } from "./work.ts";
 import type { Task } from "./worker.ts";
 
-export { checkText, checkValue, prepareImportText, type CheckAnswer, type ImportAnswer } from "./work.ts";
+export { checkText, checkValue, prepareImportText, previewLogText, type CheckAnswer, type ImportAnswer, type LogPreview } from "./work.ts";
 
 /**
  * A pool of worker threads (node:worker_threads through piscina) for work too big for the request
@@ -19,6 +20,8 @@ export interface WorkPool {
   checkMany(texts: string[]): Promise<CheckAnswer[]>;
   /** A records import's document (UTF-8 bytes, moved to the worker) parsed, validated and its signatures checked against `keys`. */
   prepareImport(bytes: Uint8Array, keys: ImportKeys): Promise<ImportAnswer>;
+  /** A logger's file (UTF-8 bytes, moved to the worker) read and drawn for the page's preview. */
+  previewLog(bytes: Uint8Array, opts: LogOptions): Promise<LogPreview>;
   readonly threads: number;
   close(): Promise<void>;
 }
@@ -42,7 +45,7 @@ const WORKER = new URL("./worker.ts", import.meta.url).href;
 
 export function createPool(opts: PoolOptions = {}): WorkPool {
   const threads = Math.max(1, opts.threads ?? availableParallelism());
-  const piscina = new Piscina<Task, CheckAnswer | CheckAnswer[] | ImportAnswer>({
+  const piscina = new Piscina<Task, CheckAnswer | CheckAnswer[] | ImportAnswer | LogPreview>({
     filename: WORKER,
     minThreads: threads,
     maxThreads: threads,
@@ -75,6 +78,15 @@ export function createPool(opts: PoolOptions = {}): WorkPool {
           { kind: "prepare-import", bytes: own, keys },
           { transferList: [own.buffer as ArrayBuffer] },
         )) as ImportAnswer;
+      } catch (err) {
+        if (/queue is at limit/i.test((err as Error).message)) throw new WorkPoolBusy((err as Error).message);
+        throw err;
+      }
+    },
+    async previewLog(bytes, opts) {
+      const own = bytes.byteOffset === 0 && bytes.byteLength === bytes.buffer.byteLength ? bytes : bytes.slice();
+      try {
+        return (await piscina.run({ kind: "log-preview", bytes: own, opts }, { transferList: [own.buffer as ArrayBuffer] })) as LogPreview;
       } catch (err) {
         if (/queue is at limit/i.test((err as Error).message)) throw new WorkPoolBusy((err as Error).message);
         throw err;

@@ -2,6 +2,10 @@ import { checkDocument } from "../engine/index.ts";
 import { parseJsonText } from "../schema/jsonText.ts";
 import { MAX_JSON_DEPTH, tooDeepAt } from "../schema/depth.ts";
 import { jsonBody } from "../schema/jsonBody.ts";
+import type { FieldError } from "../engine/errors.ts";
+import { historyPlot } from "../plots/history.ts";
+import { readPressureLog, type LogOptions } from "../schema/pressureLog.ts";
+import { SI_UNITS, toSI } from "../schema/units.ts";
 import { validateCheckDocument } from "../store/checkValidator.ts";
 import { InvalidRecordError } from "../store/errors.ts";
 import { prepareImport, type ImportKeys, type PreparedImport } from "../store/exchange.ts";
@@ -57,4 +61,32 @@ export function prepareImportText(text: string, keys: ImportKeys): ImportAnswer 
     if (err instanceof InvalidRecordError) return { ok: false, status: 422, body: { errors: err.errors } };
     throw err;
   }
+}
+
+/** A logger's file read and drawn for the page's preview, or the reader's errors. */
+export type LogPreview =
+  | { ok: true; rows: number; delimiter: string; min: number; max: number; svg: string; drawn_ms: number }
+  | { ok: false; errors: FieldError[] };
+
+/**
+ * Read a log with the command line's reader and draw it (min/max per pixel column) in the log's
+ * own unit. CPU-bound for a long log, so the page's preview runs it in a worker thread.
+ */
+export function previewLogText(text: string, opts: LogOptions): LogPreview {
+  const read = readPressureLog(text, opts);
+  if (!read.ok) return read;
+  const unit = opts.unit ?? "MPa";
+  const perUnit = toSI(1, "pressure", { ...SI_UNITS, pressure: unit });
+  const values = new Float64Array(read.history_MPa.length);
+  let min = Infinity;
+  let max = -Infinity;
+  for (let i = 0; i < values.length; i++) {
+    const v = read.history_MPa[i] / perUnit;
+    values[i] = v;
+    if (v < min) min = v;
+    if (v > max) max = v;
+  }
+  const t = performance.now();
+  const svg = historyPlot({ values, unit });
+  return { ok: true, rows: read.rows, delimiter: read.delimiter, min, max, svg, drawn_ms: performance.now() - t };
 }

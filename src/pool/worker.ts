@@ -4,7 +4,8 @@
  */
 import "./yield.ts";
 import type { ImportKeys } from "../store/exchange.ts";
-import { checkText, prepareImportText, type CheckAnswer, type ImportAnswer } from "./work.ts";
+import type { LogOptions } from "../schema/pressureLog.ts";
+import { checkText, prepareImportText, previewLogText, type CheckAnswer, type ImportAnswer, type LogPreview } from "./work.ts";
 
 export type Task =
   | { kind: "check"; text: string }
@@ -12,11 +13,13 @@ export type Task =
   /** Several small documents at once (a batch run): one hand-over to the thread for all of them. */
   | { kind: "check-many"; texts: string[] }
   /** A records import's document (UTF-8 bytes, moved) with the keys its signatures may be by. */
-  | { kind: "prepare-import"; bytes: Uint8Array; keys: ImportKeys };
+  | { kind: "prepare-import"; bytes: Uint8Array; keys: ImportKeys }
+  /** A logger's file (UTF-8 bytes, moved) read and drawn for the page's preview. */
+  | { kind: "log-preview"; bytes: Uint8Array; opts: LogOptions };
 
 const utf8 = new TextDecoder();
 
-export default function run(task: Task): CheckAnswer | CheckAnswer[] | ImportAnswer {
+export default function run(task: Task): CheckAnswer | CheckAnswer[] | ImportAnswer | LogPreview {
   switch (task.kind) {
     case "check":
       return checkText(task.text);
@@ -26,5 +29,7 @@ export default function run(task: Task): CheckAnswer | CheckAnswer[] | ImportAns
       return task.texts.map((t) => checkText(t, "the line"));
     case "prepare-import":
       return prepareImportText(utf8.decode(task.bytes), task.keys);
+    case "log-preview":
+      return previewLogText(utf8.decode(task.bytes), task.opts);
   }
 }

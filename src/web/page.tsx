@@ -14,6 +14,7 @@ import { MAX_SHARE_LINK_CHARS } from "../../views/results/share.tsx";
 import { MAX_JSON_BYTES } from "./api.ts";
 import { sheetResponse } from "./sheet.ts";
 import { assetRoutes } from "./assets.ts";
+import { logPreviewRoutes } from "./logPreview.tsx";
 import { readForm, readPosted, SPARE_BLOCK_ROWS, valueAt, writeForm, type FormValues, type Posted } from "./form/index.ts";
 import { MAX_JSON_DEPTH, tooDeepAt } from "../schema/depth.ts";
 import { unshownParts } from "./form/carry.ts";
@@ -41,10 +42,17 @@ interface Worked {
 function work(
   document: Record<string, unknown>,
   solve: Posted["solve"],
-  form: { values: FormValues; units: Units; rows: number[]; fieldFor: (p: string) => string | undefined },
+  form: {
+    values: FormValues;
+    units: Units;
+    rows: number[];
+    fieldFor: (p: string) => string | undefined;
+    formErrors?: Map<string, string[]>;
+  },
 ): Worked {
   const run = checkDocument(solve ? { ...document, solve: { for: solve } } : document);
-  const errors = new Map<string, string[]>();
+  // Messages the form itself found (a log that cannot be read) stand for what the check then lacks.
+  const errors = new Map<string, string[]>(form.formErrors ?? []);
   const general: FieldError[] = [];
   let outcome: Outcome = { errorCount: 0, general, canUsePressure: form.values["pressure.mode"] === "direct" };
   let link: string | undefined;
@@ -53,11 +61,12 @@ function work(
     outcome.view = { result: run.result, units: form.units, link, solve };
   } else {
     for (const e of run.errors) {
+      if (form.formErrors?.size && (e.path === "pressure" || e.path.startsWith("pressure."))) continue;
       const name = form.fieldFor(e.path);
       if (name === undefined) general.push(e);
       else errors.set(name, [...(errors.get(name) ?? []), e.message]);
     }
-    outcome = { ...outcome, errorCount: run.errors.length };
+    outcome = { ...outcome, errorCount: [...errors.values()].reduce((n, m) => n + m.length, 0) + general.length };
   }
   const state: FormState = {
     values: form.values,
@@ -198,6 +207,7 @@ const formLimit = bodyLimit({
 export function pageRoutes(): Hono {
   const app = new Hono();
   app.route("/", assetRoutes());
+  app.route("/", logPreviewRoutes());
   // Whole pages opened by a link are gzipped (about a fifth of the bytes); an edit's fragments on
   // loopback are not, as packing them would cost more time than it saves.
   app.get("/", compress(), showLinked);

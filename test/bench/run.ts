@@ -2,6 +2,7 @@ import os from "node:os";
 import { apiBench } from "./api.ts";
 import { engineBench, openingBench, rainflowBench } from "./engine.ts";
 import { historyBench } from "./history.ts";
+import { previewBench } from "./preview.ts";
 import { apiVsEngineBench, batchBench } from "./scale.ts";
 
 /**
@@ -46,6 +47,13 @@ add(
   "Whole check of that history: peak extra resident memory / input text bytes (worker's young generation)",
   f(h.memoryOverInput, 2),
   "≤ 3",
+);
+
+const pv = previewBench();
+add(
+  `Preview plot of a ${pv.points.toLocaleString("en")}-point history (min/max per pixel column) / one summing pass over the points`,
+  `${f(pv.ratio, 2)} (${f(pv.draw_ms, 0)} ms / ${f(pv.sum_ms, 0)} ms)`,
+  "a moment: well under 1 s",
 );
 
 const b = await batchBench();

@@ -136,9 +136,12 @@ export const CHOICE_FIELDS = [
   "crack.leakBeforeBreak",
 ] as const;
 
+/** The fields of a logger's file (pressure given as "a logger's file"); the gate is in the log's unit. */
+export const LOG_FIELDS = ["log.file", "log.column", "log.unit", "log.decimal", "log.skip", "log.gate"] as const;
+
 /** Every error slot the form shows for these block rows: a recalculation refreshes each, so an error put right disappears. */
 export function errorSlotNames(rows: readonly number[]): string[] {
   const cells = rows.flatMap((r) => (Object.keys(BLOCK_COLUMNS) as BlockColumn[]).map((c) => blockField(r, c)));
   // "savedBy" sits with the save button, outside the form but posted with it.
-  return [...TEXT_FIELDS, ...CHOICE_FIELDS, ...Object.keys(NUMBER_FIELDS), "blocks", "savedBy", ...cells];
+  return [...TEXT_FIELDS, ...CHOICE_FIELDS, ...Object.keys(NUMBER_FIELDS), ...LOG_FIELDS, "blocks", "savedBy", ...cells];
 }

@@ -25,6 +25,7 @@ export function CheckForm({ s }: { s: FormState }) {
       method="post"
       action="/"
       enctype="multipart/form-data"
+      hx-encoding="multipart/form-data"
       hx-post="/recalc"
       hx-trigger="input changed delay:300ms, change"
       hx-target="#results"

@@ -1,6 +1,6 @@
 import { blockField, errorId, fieldId } from "./fields.ts";
-import { unitLabel } from "../../src/schema/units.ts";
-import { Choice, ErrorSlot, NumberInput, Panel } from "./controls.tsx";
+import { PRESSURE_UNITS, unitLabel } from "../../src/schema/units.ts";
+import { Choice, ErrorSlot, NumberInput, Panel, Select, TextInput } from "./controls.tsx";
 import type { FormState } from "./state.ts";
 
 /** The pressure cycle, given one of four ways. Pressures are differential: inside minus outside. */
@@ -18,6 +18,7 @@ export function PressureSection({ s }: { s: FormState }) {
           { value: "direct", label: "one cycle, highest and lowest" },
           { value: "altitude", label: "flight and cabin altitudes" },
           { value: "history", label: "a recorded history" },
+          { value: "log", label: "a logger's file (CSV or TSV)" },
           { value: "blocks", label: "blocks of repeated cycles" },
         ]}
       />
@@ -37,6 +38,9 @@ export function PressureSection({ s }: { s: FormState }) {
       </Panel>
       <Panel name="pressure.mode" value="history">
         <HistoryInput s={s} />
+      </Panel>
+      <Panel name="pressure.mode" value="log">
+        <LogInput s={s} />
       </Panel>
       <Panel name="pressure.mode" value="blocks">
         <BlockTable s={s} />
@@ -76,6 +80,89 @@ function HistoryInput({ s }: { s: FormState }) {
         <input type="file" id={fieldId("history.file")} name="history.file" accept=".csv,.txt,.tsv,text/csv,text/plain" />
         <p class="hint">Choosing a file fills the box above; without scripting, press “Work it out” after choosing.</p>
       </div>
+    </div>
+  );
+}
+
+/**
+ * A pressure logger's file, read on the server with the same reader as the command line's --log:
+ * the column, its unit, the decimal separator and the header lines to skip; a hysteresis gate
+ * drops ripples smaller than the size given. The file stays in its input and is sent with each
+ * recalculation; "Preview" draws the history as logged without counting it.
+ */
+function LogInput({ s }: { s: FormState }) {
+  const file = "log.file";
+  const errs = s.errors.get(file);
+  const unit = s.values["log.unit"] || s.units.pressure;
+  return (
+    <div class="log-input">
+      <div class="grid">
+        <div class="field wide">
+          <label for={fieldId(file)}>Logger's file (CSV or TSV, one reading a line)</label>
+          <input
+            type="file"
+            id={fieldId(file)}
+            name={file}
+            accept=".csv,.tsv,.txt,text/csv,text/tab-separated-values,text/plain"
+            aria-describedby={`${errorId(file)} ${fieldId(file)}-hint`}
+            aria-invalid={errs ? "true" : undefined}
+          />
+          <p class="hint" id={`${fieldId(file)}-hint`}>
+            Cells separated by tabs, semicolons or commas. The file is read on the server each time the check is worked out; without
+            scripting, choose it again after each “Work it out”.
+          </p>
+          <ErrorSlot name={file} messages={errs} />
+        </div>
+        <TextInput
+          s={s}
+          name="log.column"
+          label="Column"
+          placeholder="1"
+          hint="Counted from 1, or the column's name in the last header line."
+        />
+        <Select
+          s={s}
+          name="log.unit"
+          label="Unit of the readings"
+          options={PRESSURE_UNITS.map((u) => ({ value: u, label: u }))}
+          fallback={unit}
+        />
+        <Select
+          s={s}
+          name="log.decimal"
+          label="Decimal separator"
+          options={[
+            { value: ".", label: "point (12.5)" },
+            { value: ",", label: "comma (12,5)" },
+          ]}
+        />
+        <TextInput s={s} name="log.skip" label="Header lines to skip" placeholder="0" />
+        <TextInput
+          s={s}
+          name="log.gate"
+          label={`Hysteresis gate (${unit})`}
+          placeholder="none"
+          hint="Ripples smaller than this pressure range are dropped before counting; the result says how many reversals it removed."
+        />
+      </div>
+      <div class="log-actions">
+        <button
+          type="submit"
+          class="secondary"
+          id="log-preview-button"
+          hx-post="/log/preview"
+          hx-target="#log-preview"
+          hx-swap="innerHTML"
+          hx-indicator="#log-progress"
+        >
+          Preview the log
+        </button>
+        <div id="log-progress" class="log-progress" hidden>
+          <progress max={100} value={0} aria-label="Sending the log" />
+          <span class="log-progress-text" role="status" aria-live="polite" />
+        </div>
+      </div>
+      <div id="log-preview" class="log-preview" aria-live="polite" />
     </div>
   );
 }

@@ -10,6 +10,7 @@ import {
   type FormValues,
 } from "../../../views/form/fields.ts";
 import { applyCarried } from "./carry.ts";
+import { readLog } from "./log.ts";
 import { blockRows, readForm, type ReadForm } from "./read.ts";
 import { convertValues } from "./write.ts";
 
@@ -28,6 +29,8 @@ export interface Posted {
   units: Units;
   /** Rows of the block table to show. */
   rows: number[];
+  /** Messages beside fields that no document path names (a logger's file that cannot be read). */
+  formErrors?: Map<string, string[]>;
   fieldFor: ReadForm["fieldFor"];
   /**
    * True when the form itself must be drawn again, not only the result: the units changed,
@@ -44,12 +47,16 @@ export async function readPosted(req: Request): Promise<Posted> {
   const body = await parseForm(req);
   const values: FormValues = {};
   let file: File | undefined;
+  let log: File | undefined;
   for (const [k, raw] of Object.entries(body)) {
     const last = Array.isArray(raw) ? raw[raw.length - 1] : raw;
     if (typeof last === "string") values[k] = last;
     else if (k === "history.file" && last.size > 0) file = last;
+    else if (k === "log.file" && last.size > 0) log = last;
   }
-  return understand(values, file ? await file.text() : undefined);
+  // A logger's file is read only when its way of giving the pressure is the one chosen.
+  const logText = log && values["pressure.mode"] === "log" ? await log.text() : undefined;
+  return understand(values, file ? await file.text() : undefined, logText);
 }
 
 async function parseForm(req: Request): Promise<Body> {
@@ -70,7 +77,7 @@ async function parseForm(req: Request): Promise<Body> {
 }
 
 /** The posted values plus what the buttons asked for, turned into a document and the values to show. */
-export function understand(posted: FormValues, historyFile?: string): Posted {
+export function understand(posted: FormValues, historyFile?: string, logText?: string): Posted {
   const values = { ...posted };
   const chosen = unitsFrom({
     length: values["units.length"],
@@ -100,6 +107,21 @@ export function understand(posted: FormValues, historyFile?: string): Posted {
   }
 
   const read = readForm(values, shown);
+  let formErrors: Map<string, string[]> | undefined;
+  let fieldFor = read.fieldFor;
+  if (values["pressure.mode"] === "log") {
+    // The history comes from the file, never into a text box: a log of millions of points stays
+    // in the file input and is sent again with each post.
+    const log = readLog(logText, values);
+    if (log.ok)
+      read.document.pressure = { history_MPa: log.history_MPa, ...(log.gate_MPa !== undefined ? { gate_MPa: log.gate_MPa } : {}) };
+    else {
+      delete read.document.pressure;
+      formErrors = log.errors;
+    }
+    fieldFor = (path) =>
+      path === "pressure.gate_MPa" ? "log.gate" : path === "pressure" || path.startsWith("pressure.") ? "log.file" : read.fieldFor(path);
+  }
   applyCarried(read.document, values.carry);
   read.document.display = { ...chosen };
   const show = sameUnits(shown, chosen) ? values : convertValues(values, shown, chosen);
@@ -111,7 +133,8 @@ export function understand(posted: FormValues, historyFile?: string): Posted {
     values: show,
     units: chosen,
     rows: rowsToShow(values, more),
-    fieldFor: read.fieldFor,
+    fieldFor,
+    formErrors,
     redraw: redraw || more || !sameUnits(shown, chosen),
   };
 }
