@@ -24,7 +24,7 @@ Commands:
                                add a person to the records (passphrase from standard input or a prompt)
   key show                     print the records' public signing key (PEM) and its fingerprint
   materials [--json]           list the material library (typical values — verify against certified data)
-  schema                       print the check format as JSON Schema
+  schema [--result]            print the check format (or the result format) as JSON Schema
   help                         this text
 
 Exit codes: 0 done, 2 the input is wrong (the errors document names each field), 1 something else failed.

@@ -1,6 +1,7 @@
 import { z } from "zod";
 import { MATERIALS, TYPICAL_FLAG } from "../materials/library.ts";
 import { checkSchema } from "../schema/check.ts";
+import { resultSchema } from "../schema/result.ts";
 import type { Io } from "./io.ts";
 
 /** `materials [--json]`: the library, each with its source and the typical-values flag. */
@@ -19,15 +20,15 @@ export function materialsCommand(args: string[], io: Io): number {
   return 0;
 }
 
-/** `schema`: the check format as JSON Schema, generated from the zod schema (the one definition). */
-export function schemaCommand(_args: string[], io: Io): number {
-  const schema = z.toJSONSchema(checkSchema, { io: "input", unrepresentable: "any" });
-  io.stdout.write(
-    JSON.stringify(
-      { $id: "https://hoopwise.invalid/schema/check-1.json", title: "Hoopwise check, format hoopwise.check/1", ...schema },
-      null,
-      2,
-    ) + "\n",
-  );
+/** `schema [--result]`: the check format, or the result format, as JSON Schema generated from its zod schema (the one definition). */
+export function schemaCommand(args: string[], io: Io): number {
+  const result = args.includes("--result");
+  const schema = result
+    ? z.toJSONSchema(resultSchema, { io: "output", unrepresentable: "any" })
+    : z.toJSONSchema(checkSchema, { io: "input", unrepresentable: "any" });
+  const head = result
+    ? { $id: "https://hoopwise.invalid/schema/result-1.json", title: "Hoopwise result, format hoopwise.result/1" }
+    : { $id: "https://hoopwise.invalid/schema/check-1.json", title: "Hoopwise check, format hoopwise.check/1" };
+  io.stdout.write(`${JSON.stringify({ ...head, ...schema }, null, 2)}\n`);
   return 0;
 }

@@ -609,6 +609,10 @@ function fitSummary(
     runouts: fit.runouts,
     logStdDev: fit.logStdDev,
     rSquared: fit.rSquared,
-    band: amplitudes.map((a) => ({ amplitude_MPa: a, ...fit.band(a, 0.95) })),
+    // The band's numbers only: its worked step is for the sheet's calculation, not for every plotted point.
+    band: amplitudes.map((a) => {
+      const b = fit.band(a, 0.95);
+      return { amplitude_MPa: a, lower_cycles: b.lower_cycles, median_cycles: b.median_cycles, upper_cycles: b.upper_cycles };
+    }),
   };
 }

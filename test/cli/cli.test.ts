@@ -42,6 +42,10 @@ describe("command line", { timeout: 90_000 }, () => {
     const schema = JSON.parse(s.stdout);
     expect(schema.properties.shell.properties.thickness_mm.type).toBe("number");
     expect(schema.required).toEqual(expect.arrayContaining(["format", "shell", "pressure", "material", "fatigue"]));
+    const r = JSON.parse(cli(["schema", "--result"]).stdout);
+    expect(r.title).toBe("Hoopwise result, format hoopwise.result/1");
+    expect(r.properties.verdict.enum).toEqual(["pass", "fail", "refer"]);
+    expect(r.additionalProperties).toBe(false);
   });
 
   it("--help explains the commands and the cautions", () => {

@@ -8,6 +8,7 @@ import { unshownParts } from "../../src/web/form/carry.ts";
 import { encodeCheck } from "../../src/web/link.ts";
 import { pageRoutes } from "../../src/web/page.tsx";
 import { browserFields } from "./formFields.ts";
+import { SPARSE } from "../fixtures/documents.ts";
 
 /**
  * A document opened, linked or loaded as a demo must give the same result as its form posted
@@ -37,90 +38,6 @@ function expectSameResult(a: unknown, b: unknown) {
     else expect(y, p).toEqual(x);
   }
 }
-
-const base = {
-  format: "hoopwise.check/1",
-  shell: { form: "cylinder", radius_mm: 1000, thickness_mm: 2 },
-  pressure: { max_MPa: 0.06 },
-  cutout: { kind: "circular-hole", radius_mm: 10 },
-  material: { id: "al-2024-t3" },
-  fatigue: { designLife_cycles: 50000 },
-};
-
-/** Documents that leave optional keys to the schema's defaults. */
-const SPARSE: [string, Record<string, unknown>][] = [
-  ["the fewest keys", base],
-  ["a crack at a hole with no count of cracks", { ...base, crack: { geometry: "hole-through", initial_mm: 1.27 } }],
-  ["a centre crack with no inspection factor", { ...base, crack: { geometry: "center-through", initial_mm: 2 } }],
-  [
-    "blocks and a sphere",
-    { ...base, shell: { form: "sphere", radius_mm: 500, thickness_mm: 3 }, pressure: { blocks: [{ max_MPa: 1, min_MPa: 0, cycles: 10 }] } },
-  ],
-  ["evidence with the default reliability", { ...base, evidence: { lives_cycles: [200000, 240000, 260000] } }],
-  ["a given Kt with no basis", { ...base, cutout: { kind: "given", kt: 3 } }],
-  ["altitudes with no lowest pressure", { ...base, pressure: { fromAltitude: { flight_m: 9000, cabin_m: 2400 } } }],
-  [
-    "every damage-tolerance key, and a fleet with its own scatter",
-    {
-      ...base,
-      axialExtra: { max_MPa: 10, min_MPa: 0 },
-      crack: {
-        geometry: "hole-through",
-        initial_mm: 1.27,
-        holeRadius_mm: 2.4,
-        cracksAtHole: 1,
-        openingDistance_mm: 12,
-        width_mm: 400,
-        detectable_mm: 3,
-        orientation: "both",
-        bulging: false,
-        minimumInterval_cycles: 1000,
-        leakBeforeBreak: "decide",
-        walkerGamma: 0.6,
-        inspectionFactor: 3,
-      },
-      fleet: { size: 40, logStdDev: 0.15 },
-    },
-  ],
-  [
-    "every static and vessel-fatigue key: ASME basis, unwelded vessel curve",
-    {
-      ...base,
-      shell: { form: "cylinder", radius_mm: 300, radiusAt: "inner", thickness_mm: 8, service: "pressure-vessel" },
-      pressure: { max_MPa: 1.6, min_MPa: 0 },
-      cutout: { kind: "none" },
-      material: { id: "steel-p265gh" },
-      fatigue: { designLife_cycles: 20000, curve: "en13445-unwelded", temperature_C: 150, roughnessRz_um: 50 },
-      static: {
-        basis: "asme-viii-1",
-        allowableStress_MPa: 118,
-        jointEfficiency: 0.85,
-        corrosionAllowance_mm: 1.5,
-        thicknessTolerance_mm: 0.25,
-        minimumGauge_mm: 2,
-      },
-    },
-  ],
-  [
-    "a welded vessel class given as a number, with the EN basis left to the service",
-    {
-      ...base,
-      shell: { form: "sphere", radius_mm: 400, radiusAt: "inner", thickness_mm: 6, service: "pressure-vessel" },
-      pressure: { max_MPa: 1, min_MPa: 0 },
-      cutout: { kind: "none" },
-      material: { id: "steel-p265gh" },
-      fatigue: { designLife_cycles: 5000, curve: "en13445-welded", detailCategory_MPa: 80 },
-    },
-  ],
-  [
-    "an aircraft cabin with its pressure factors",
-    { ...base, shell: { ...base.shell, service: "aircraft-cabin" }, static: { limitFactor: 1.4, ultimateFactor: 1.6 } },
-  ],
-  [
-    "a detectable size by inspection method",
-    { ...base, crack: { geometry: "edge-through", initial_mm: 1, detectableBy: "detailed-visual", orientation: "axial" } },
-  ],
-];
 
 const CASES: [string, Record<string, unknown>][] = [
   ...DEMOS.map((d) => [`demo ${d.id}`, d.document] as [string, Record<string, unknown>]),
