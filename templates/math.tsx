@@ -30,7 +30,7 @@ export function typeset(text: string): Child[] {
         continue;
       }
       // Combining marks (x̄) belong to the letter before them.
-      const token = /^[-−]?[0-9A-Za-z.'′\u0300-\u036f]+/.exec(text.slice(i + 1));
+      const token = /^[-−]?[0-9A-Za-z.'′\p{M}]+/u.exec(text.slice(i + 1));
       if (token) {
         flush();
         out.push(<sup>{tidy(token[0])}</sup>);

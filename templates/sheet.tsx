@@ -20,7 +20,7 @@ const STYLE = readFileSync(new URL("./sheet.css", import.meta.url), "utf8");
 
 /** The sheet's page body as HTML; the printer's header and footer come from src/sheet/margins.tsx. */
 export function sheetBody(m: SheetModel): string {
-  return "<!doctype html>" + htmlOf(<Sheet m={m} />);
+  return `<!doctype html>${htmlOf(<Sheet m={m} />)}`;
 }
 
 function Sheet({ m }: { m: SheetModel }) {

@@ -18,6 +18,7 @@ export const RECALC_BUTTON = {
  */
 export function OutcomeActions({ s }: { s: FormState }) {
   return (
+    // biome-ignore lint/a11y/useSemanticElements: a row of buttons, not form fields: a fieldset would add a legend and a frame
     <div class="outcome-actions" id="outcome-actions" role="group" aria-label="Solve, download, print or save this check">
       <button type="submit" form="check-form" name="solve" value="thickness" {...RECALC_BUTTON}>
         Find the least thickness
@@ -47,6 +48,7 @@ export function OutcomeActions({ s }: { s: FormState }) {
 function SaveActions({ s }: { s: FormState }) {
   const record = s.values.record;
   return (
+    // biome-ignore lint/a11y/useSemanticElements: a row of buttons, not form fields: a fieldset would add a legend and a frame
     <div class="save-actions" role="group" aria-labelledby="h-save">
       <p id="h-save" class="save-title">
         Keep this check

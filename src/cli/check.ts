@@ -7,7 +7,7 @@ const LOG_OPTIONS = ["--log", "--column", "--unit", "--decimal", "--skip", "--ga
 type ArgErrors = { path: string; message: string }[];
 
 const fail = (io: Io, errors: ArgErrors) => {
-  io.stdout.write(JSON.stringify({ errors }, null, 2) + "\n");
+  io.stdout.write(`${JSON.stringify({ errors }, null, 2)}\n`);
   return 2;
 };
 
@@ -43,7 +43,7 @@ export async function checkCommand(args: string[], io: Io): Promise<number> {
   }
   const out = checkDocument(document);
   if (!out.ok) return fail(io, out.errors);
-  io.stdout.write(JSON.stringify(out.result, null, 2) + "\n");
+  io.stdout.write(`${JSON.stringify(out.result, null, 2)}\n`);
   return 0;
 }
 

@@ -7,7 +7,7 @@ import type { Io } from "./io.ts";
 /** `materials [--json]`: the library, each with its source and the typical-values flag. */
 export function materialsCommand(args: string[], io: Io): number {
   if (args.includes("--json")) {
-    io.stdout.write(JSON.stringify(MATERIALS, null, 2) + "\n");
+    io.stdout.write(`${JSON.stringify(MATERIALS, null, 2)}\n`);
     return 0;
   }
   io.stdout.write(`Material library (${TYPICAL_FLAG}):\n\n`);

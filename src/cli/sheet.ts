@@ -85,7 +85,7 @@ export async function verifyCommand(args: string[], io: Io): Promise<number> {
     return json ? fail(io, e) : usage(io, e);
   }
   const report = await verifySheet(bytes, { publicKeys });
-  io.stdout.write(json ? JSON.stringify(report, null, 2) + "\n" : formatReport(file, report));
+  io.stdout.write(json ? `${JSON.stringify(report, null, 2)}\n` : formatReport(file, report));
   return report.ok ? 0 : 1;
 }
 
@@ -117,11 +117,11 @@ export function formatReport(file: string, r: VerifyReport): string {
     `  Input attached        ${r.input.found ? (r.input.valid ? "yes, a valid check" : "yes, but not a valid check") : "no"}`,
     `  Fingerprint recorded  ${r.fingerprint.recorded ?? "none"}`,
     `  Fingerprint of input  ${r.fingerprint.recomputed ?? "—"}${r.fingerprint.recomputed ? (r.fingerprint.matches ? "  (matches)" : "  (DIFFERS)") : ""}`,
-    `  Engine then / now     ${r.engine.then ?? "not named"} / ${r.engine.now}${r.engine.same ? "  (same)" : ""}`,
+    `  Engine then / now     ${r.engine.recorded ?? "not named"} / ${r.engine.now}${r.engine.same ? "  (same)" : ""}`,
     `  Verdict then / now    ${r.results.verdictThen ?? "—"} / ${r.results.verdictNow ?? "—"}`,
     `  Results               ${!r.results.recorded ? "no record to compare" : r.results.verdictNow === null ? "not recomputed" : r.results.matches ? "the same as recorded" : `${r.results.differences.length} differ`}`,
   ];
-  for (const d of r.results.differences.slice(0, 20)) lines.push(`      ${d.what}: then ${d.then}, now ${d.now}`);
+  for (const d of r.results.differences.slice(0, 20)) lines.push(`      ${d.what}: then ${d.recorded}, now ${d.now}`);
   if (r.results.differences.length > 20) lines.push(`      … and ${r.results.differences.length - 20} more (use --json for all)`);
   for (const e of r.input.errors) lines.push(`      input ${e.path}: ${e.message}`);
   if (r.signoffs.attached) {
@@ -135,11 +135,11 @@ export function formatReport(file: string, r: VerifyReport): string {
   }
   if (r.problems.length) lines.push("", "Problems:", ...r.problems.map((p) => `  - ${p}`));
   if (r.notes.length) lines.push("", ...r.notes.map((n) => `  ${n}`));
-  return lines.join("\n") + "\n";
+  return `${lines.join("\n")}\n`;
 }
 
 function fail(io: Io, errors: ArgErrors): number {
-  io.stdout.write(JSON.stringify({ errors }, null, 2) + "\n");
+  io.stdout.write(`${JSON.stringify({ errors }, null, 2)}\n`);
   return 2;
 }
 

@@ -61,6 +61,7 @@ export function bowieTwoCracks(s: number): number {
  */
 export function bowieOneCrack(s: number): number {
   const l = 1 - s;
+  // biome-ignore lint/suspicious/noApproximativeNumericConstant: 0.707 is the fit's published leading coefficient, not 1/√2
   const fit = 0.707 + l * (-0.18 + l * (6.55 + l * (-10.54 + l * 6.85)));
   // Beyond a = 3R the fit dips up to 2 % below the table; the long-crack limit (a centre crack of
   // half-length R + a/2, √((2 − s)/(2s))) lies above the table there, so the larger is taken.

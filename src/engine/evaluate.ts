@@ -271,7 +271,7 @@ export function evaluate(
   const point = chosen.c;
   const peakMax = point.fh * hoopMax + point.fa * axialMax;
   const peakMin = point.fh * hoopMin + point.fa * axialMin;
-  const { conc, notch } = governingNotch(ctx, field, point, hoopMax, axialMax, lambda);
+  const { conc, notch } = governingNotch(ctx, field, point, lambda);
   return {
     thickness_mm,
     analysis_mm,
@@ -446,14 +446,7 @@ function worseOutcome(a: CycleOutcome, b: CycleOutcome): boolean {
 }
 
 /** Kt, q and Kf at the governing point, referred to the nominal hoop stress at maximum pressure. */
-function governingNotch(
-  ctx: Context,
-  field: PointField,
-  point: Candidate,
-  hoopMax: number,
-  axialMax: number,
-  lambda: number,
-): { conc: Concentration; notch: NotchFactor } {
+function governingNotch(ctx: Context, field: PointField, point: Candidate, lambda: number): { conc: Concentration; notch: NotchFactor } {
   const conc: ExtendedConcentration = field.extended
     ? { ...field.extended, kt: edgeStress(point.point, 1, lambda) }
     : openingConcentration(ctx.input.cutout, lambda, field.geometry, () =>

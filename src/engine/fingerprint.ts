@@ -14,5 +14,5 @@ import { ENGINE_VERSION } from "./version.ts";
 export function fingerprint(input: unknown, engineVersion: string = ENGINE_VERSION): string {
   const hash = createHash("sha256");
   writeCanonical(input, (piece) => hash.update(piece));
-  return hash.update("\n" + engineVersion).digest("hex");
+  return hash.update(`\n${engineVersion}`).digest("hex");
 }

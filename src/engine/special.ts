@@ -1,3 +1,4 @@
+// biome-ignore-all lint/correctness/noPrecisionLoss: published coefficients keep the digits they are printed with; the double nearest them is what counts
 /**
  * Special functions and the small numerical tools the statistics and crack-growth
  * modules share: the standard normal distribution, the log-gamma function, the
@@ -335,5 +336,5 @@ export function noncentralTQuantile(p: number, df: number, delta: number): numbe
  */
 export function fQuantileDf1Two(p: number, df2: number): number {
   if (!(p >= 0 && p < 1) || !(df2 > 0)) return NaN;
-  return 0.5 * df2 * (Math.pow(1 - p, -2 / df2) - 1);
+  return 0.5 * df2 * ((1 - p) ** (-2 / df2) - 1);
 }

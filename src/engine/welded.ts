@@ -52,7 +52,7 @@ const EN1993 = "EN 1993-1-9 §7.1, Figure 7.1 (fatigue strength curves for direc
 /** Δσ_D and Δσ_L of a category Δσ_C (MPa), from the definitions in EN 1993-1-9 §7.1. */
 export function weldedLimits(category_MPa: number): { fatigueLimit_MPa: number; cutOff_MPa: number } {
   const fatigueLimit_MPa = Math.cbrt(N_C / N_D) * category_MPa;
-  const cutOff_MPa = Math.pow(N_D / N_L, 1 / 5) * fatigueLimit_MPa;
+  const cutOff_MPa = (N_D / N_L) ** (1 / 5) * fatigueLimit_MPa;
   return { fatigueLimit_MPa, cutOff_MPa };
 }
 

@@ -164,7 +164,7 @@ function fitHeading(heading: string | null, width: number): { text: string; size
   const room = width - 40;
   for (const size of [FONT_SIZE.heading, 18, 16]) if (textWidth(heading, size, true) <= room) return { text: heading, size };
   const chars = Math.max(8, Math.floor(room / (16 * 0.6)) - 1);
-  return { text: heading.slice(0, chars) + "…", size: 16 };
+  return { text: `${heading.slice(0, chars)}…`, size: 16 };
 }
 
 /** The y title runs along a short side: shrink it rather than let it leave the picture. */

@@ -107,9 +107,9 @@ export function haighDiagram(data: HaighData, opts?: PlotOptions): string {
 
   const content: string[] = [];
   if (showYield) content.push(yieldLine(frame, m.yield, xMin));
-  drawable.forEach((c, i) =>
-    content.push(criterionLine(frame, c, m, xMax, styleOf(c, data.selected), 0.25 + (0.5 * i) / Math.max(1, drawable.length))),
-  );
+  drawable.forEach((c, i) => {
+    content.push(criterionLine(frame, c, m, xMax, styleOf(c, data.selected), 0.25 + (0.5 * i) / Math.max(1, drawable.length)));
+  });
   content.push(materialMarks(frame, m, sar, su));
   const op = frame.at(mean, amp);
   if (op) content.push(operatingPoint(op));

@@ -136,7 +136,7 @@ export function openingPicture(data: OpeningPictureData, opts?: PlotOptions): st
       `curvature parameter β = ${formatValue(data.curvature.beta)} (${data.curvature.within ? `within β ≤ ${formatValue(data.curvature.limit)}` : `beyond ${formatValue(data.curvature.limit)}: refer`})`,
     );
   lines.push(`width shown ${formatValue(u.length(x1 - x0))} ${u.lengthUnit}; holes drawn at least 7 px across`);
-  lines.forEach((t, k) => out.push(textAt(20, H - 40 + k * 20, t, { size: FONT_SIZE.note })));
+  for (const [k, t] of lines.entries()) out.push(textAt(20, H - 40 + k * 20, t, { size: FONT_SIZE.note }));
   out.push("</svg>");
   return out.join("\n");
 }

@@ -110,7 +110,7 @@ function section(data: ShellPictureData, b: Box, len: (mm: number) => string): s
     `${data.form === "sphere" ? "Sphere, section through the opening" : "Cylinder, cross-section at the opening"}`,
     `wall t ${len(data.thickness_mm)}, r_{m}/t ${formatValue(rm / data.thickness_mm)}${wallPx < 1.5 ? " (thinner than a line here)" : ""}`,
   ];
-  lines.forEach((t, k) => out.push(textAt(b.x, b.y + b.h + 30 + k * 20, t, { size: FONT_SIZE.note, rich: true })));
+  for (const [k, t] of lines.entries()) out.push(textAt(b.x, b.y + b.h + 30 + k * 20, t, { size: FONT_SIZE.note, rich: true }));
   return out;
 }
 

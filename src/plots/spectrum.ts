@@ -6,7 +6,7 @@
 import { scaleLinear } from "d3-scale";
 import { formatValue, isFiniteNumber } from "./format.ts";
 import { type Frame, makeFrame, notes } from "./frame.ts";
-import { type SeriesStyle } from "./marks.ts";
+import type { SeriesStyle } from "./marks.ts";
 import { escapeXml, FONT_SIZE, num, textAt } from "./svgText.ts";
 import { decadeDomain } from "./ticks.ts";
 import { displayUnits, type PlotOptions } from "./units.ts";

@@ -10,11 +10,13 @@ export const FONT_FAMILY = "'DejaVu Sans', 'Liberation Sans', Arial, Helvetica, 
 /** Sizes in viewBox units; at the default width of 800 printed 16 cm wide, 15 units ≈ 3 mm (8.5 pt). */
 export const FONT_SIZE = { heading: 20, axisTitle: 17, tick: 15, legend: 15, note: 14 } as const;
 
+// Control characters are not allowed in XML at all, even escaped; a pasted title may carry them.
+// biome-ignore lint/suspicious/noControlCharactersInRegex: control characters are what this removes (XML 1.0 forbids them)
+const XML_FORBIDDEN = /[\u0000-\u0008\u000B\u000C\u000E-\u001F\uFFFE\uFFFF]/g;
+
 export function escapeXml(s: string): string {
-  // Control characters are not allowed in XML at all, even escaped; a pasted title may carry them.
-  // eslint-disable-next-line no-control-regex
   return String(s)
-    .replace(/[\u0000-\u0008\u000B\u000C\u000E-\u001F\uFFFE\uFFFF]/g, "")
+    .replace(XML_FORBIDDEN, "")
     .replace(/[&<>"']/g, (c) => ESCAPES[c]);
 }
 const ESCAPES: Record<string, string> = { "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&apos;" };

@@ -70,7 +70,7 @@ export function logTicks(domain: [number, number], maxCount: number, style: LogL
 export function decadeDomain(values: number[], fallback: [number, number]): [number, number] {
   const v = values.filter((x) => isFiniteNumber(x) && x > 0);
   if (v.length === 0) return fallback;
-  let lo = 10 ** Math.floor(Math.log10(Math.min(...v)) + 1e-9);
+  const lo = 10 ** Math.floor(Math.log10(Math.min(...v)) + 1e-9);
   let hi = 10 ** Math.ceil(Math.log10(Math.max(...v)) - 1e-9);
   if (hi <= lo) hi = lo * 10;
   return [lo, hi];

@@ -192,8 +192,7 @@ export function plotInputs(r: CheckResult, units: Units, face: { title?: string 
   if (r.spectrum) {
     figures.push({
       id: "spectrum",
-      caption:
-        `The counted cycles of one pass, by range of the local stress the fatigue check counts: at ${r.notch.ktGoverns}, Kf times the nominal stresses of each instant (rainflow, ASTM E1049).`,
+      caption: `The counted cycles of one pass, by range of the local stress the fatigue check counts: at ${r.notch.ktGoverns}, Kf times the nominal stresses of each instant (rainflow, ASTM E1049).`,
       svg: spectrumPlot({ cycles: r.spectrum.cycles }, opts),
     });
   }

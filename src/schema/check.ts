@@ -197,9 +197,9 @@ export const pressureSchema = z
         message: `the pressure history never reaches ${FLOORS.pressure_MPa} MPa (1 Pa): the shell is hardly pressurized`,
       });
     }
-    if (p.blocks && p.blocks.every((b) => b.max_MPa <= 0)) {
+    if (p.blocks?.every((b) => b.max_MPa <= 0)) {
       ctx.addIssue({ code: "custom", path: ["blocks"], message: "no block rises above 0 MPa: the shell is never pressurized" });
-    } else if (p.blocks && p.blocks.every((b) => b.max_MPa < FLOORS.pressure_MPa)) {
+    } else if (p.blocks?.every((b) => b.max_MPa < FLOORS.pressure_MPa)) {
       ctx.addIssue({
         code: "custom",
         path: ["blocks"],

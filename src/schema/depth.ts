@@ -44,7 +44,7 @@ export function illFormedAt(value: unknown): string | undefined {
     const at = (k: string) => (path ? `${path}.${k}` : k);
     if (typeof v === "string") {
       if (lone.test(v)) return path || "(document)";
-    } else if (Array.isArray(v)) v.forEach((c, i) => stack.push({ v: c, path: at(String(i)) }));
+    } else if (Array.isArray(v)) for (const [i, c] of v.entries()) stack.push({ v: c, path: at(String(i)) });
     else if (v !== null && typeof v === "object") {
       for (const [k, c] of Object.entries(v)) {
         if (lone.test(k)) return at(k.replace(/\p{Cs}/gu, "\uFFFD"));

@@ -47,7 +47,7 @@ function withScannedHistory(text: string): unknown {
   return rest;
 }
 
-const enum C {
+enum C {
   Space = 32,
   Tab = 9,
   Lf = 10,

@@ -6,7 +6,7 @@
  * attachInput so the embedded-files name tree stays in key order (ISO 32000-1, 7.9.6).
  * It holds the verdict, the principal numbers and every step's value at full precision.
  */
-import { AFRelationship, PDFDocument } from "pdf-lib";
+import { AFRelationship, type PDFDocument } from "pdf-lib";
 import type { CheckResult, Verdict } from "../engine/index.ts";
 import { extractAttachment } from "./attach.ts";
 
@@ -68,7 +68,7 @@ export function recordOf(r: CheckResult): SheetRecord {
 /** One number (or outcome) that differs between the record and a fresh computation. */
 export interface Difference {
   what: string;
-  then: string;
+  recorded: string;
   now: string;
 }
 
@@ -88,27 +88,28 @@ const shown = (x: number | null | undefined) => (x === undefined ? "absent" : x 
 
 export function compareRecords(then: SheetRecord, now: SheetRecord): Difference[] {
   const out: Difference[] = [];
-  if (then.verdict !== now.verdict) out.push({ what: "verdict", then: then.verdict, now: now.verdict });
-  if (then.governs !== now.governs) out.push({ what: "what governs", then: then.governs, now: now.governs });
+  if (then.verdict !== now.verdict) out.push({ what: "verdict", recorded: then.verdict, now: now.verdict });
+  if (then.governs !== now.governs) out.push({ what: "what governs", recorded: then.governs, now: now.governs });
   for (const key of new Set([...Object.keys(then.values), ...Object.keys(now.values)])) {
-    if (!same(then.values[key], now.values[key])) out.push({ what: key, then: shown(then.values[key]), now: shown(now.values[key]) });
+    if (!same(then.values[key], now.values[key])) out.push({ what: key, recorded: shown(then.values[key]), now: shown(now.values[key]) });
   }
   const rows = new Map(now.verdictTable.map((v) => [v.id, v]));
   for (const row of then.verdictTable) {
     const fresh = rows.get(row.id);
-    if (!fresh) out.push({ what: `verdict row ${row.id}`, then: row.status, now: "absent" });
-    else if (fresh.status !== row.status) out.push({ what: `verdict row ${row.id}`, then: row.status, now: fresh.status });
-    else if (!same(row.margin, fresh.margin)) out.push({ what: `margin of ${row.id}`, then: shown(row.margin), now: shown(fresh.margin) });
+    if (!fresh) out.push({ what: `verdict row ${row.id}`, recorded: row.status, now: "absent" });
+    else if (fresh.status !== row.status) out.push({ what: `verdict row ${row.id}`, recorded: row.status, now: fresh.status });
+    else if (!same(row.margin, fresh.margin))
+      out.push({ what: `margin of ${row.id}`, recorded: shown(row.margin), now: shown(fresh.margin) });
   }
   for (const row of now.verdictTable) {
-    if (!then.verdictTable.some((v) => v.id === row.id)) out.push({ what: `verdict row ${row.id}`, then: "absent", now: row.status });
+    if (!then.verdictTable.some((v) => v.id === row.id)) out.push({ what: `verdict row ${row.id}`, recorded: "absent", now: row.status });
   }
   const steps = Math.max(then.steps.length, now.steps.length);
   for (let i = 0; i < steps; i += 1) {
     const [idThen, vThen] = then.steps[i] ?? ["absent", undefined];
     const [idNow, vNow] = now.steps[i] ?? ["absent", undefined];
-    if (idThen !== idNow) out.push({ what: `step ${i + 1}`, then: idThen, now: idNow });
-    else if (!same(vThen, vNow)) out.push({ what: `step ${i + 1} (${idThen})`, then: shown(vThen), now: shown(vNow) });
+    if (idThen !== idNow) out.push({ what: `step ${i + 1}`, recorded: idThen, now: idNow });
+    else if (!same(vThen, vNow)) out.push({ what: `step ${i + 1} (${idThen})`, recorded: shown(vThen), now: shown(vNow) });
   }
   return out;
 }

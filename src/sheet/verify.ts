@@ -77,7 +77,7 @@ export interface VerifyReport {
     /** What a sheet printed now, by this engine, would carry. */
     thisEngine: string | null;
   };
-  engine: { then: string | null; now: string; same: boolean };
+  engine: { recorded: string | null; now: string; same: boolean };
   results: {
     /** Whether the sheet carries a results record. */
     recorded: boolean;
@@ -116,7 +116,7 @@ export async function verifySheet(pdf: Uint8Array, options: VerifyOptions = {}):
     ok: false,
     input: { found: false, valid: false, errors: [] },
     fingerprint: { recorded: null, recomputed: null, matches: false, thisEngine: null },
-    engine: { then: null, now: ENGINE_VERSION, same: false },
+    engine: { recorded: null, now: ENGINE_VERSION, same: false },
     results: { recorded: false, verdictThen: null, verdictNow: null, matches: false, differences: [] },
     signoffs: { attached: false, checked: false, keyFingerprint: null, each: [] },
     problems: [],
@@ -134,7 +134,7 @@ export async function verifySheet(pdf: Uint8Array, options: VerifyOptions = {}):
     return report;
   }
   report.fingerprint.recorded = info.fingerprint ?? null;
-  report.engine.then = info.engineVersion ?? null;
+  report.engine.recorded = info.engineVersion ?? null;
   report.engine.same = info.engineVersion === ENGINE_VERSION;
   if (!info.fingerprint)
     problem("The PDF records no fingerprint: it is not a Hoopwise check sheet, or its document information was rewritten.");

@@ -5,7 +5,7 @@ describe("numbers in substituted equations", () => {
   it("four significant figures, no exponent between 10⁻³ and 10⁶, true minus signs", () => {
     expect(fmt(60000)).toBe("60000");
     expect(fmt(48.713928)).toBe("48.71");
-    expect(fmt(-3.14159)).toBe("−3.142");
+    expect(fmt(-3.14171)).toBe("−3.142");
     expect(fmt(100)).toBe("100");
   });
   it("exponent form outside that range", () => {

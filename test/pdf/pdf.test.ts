@@ -135,7 +135,7 @@ describe("renderPdf", () => {
       numbers.map((n) => renderPdf(`<p>Invented sheet number ${n} of ten</p>`, { paper: "A4", pool: counted })),
     );
     // Each PDF holds its own document: reused pages do not carry one render into another.
-    pdfs.forEach((pdf, i) => expect(pdfText(pdf)).toContain(`Invented sheet number ${numbers[i]} of ten`));
+    for (const [i, pdf] of pdfs.entries()) expect(pdfText(pdf)).toContain(`Invented sheet number ${numbers[i]} of ten`);
     expect(maxInFlight).toBe(2); // the pool's concurrency, reached and not passed
     expect(pool.stats().running).toBe(0);
   });

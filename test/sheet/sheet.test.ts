@@ -141,7 +141,7 @@ describe("the cabin demo's sheet", () => {
     const report = await verifySheet(edited);
     expect(report.ok).toBe(false);
     expect(report.fingerprint.matches).toBe(true); // the input is intact; the record is not
-    expect(report.results.differences).toEqual([{ what: "fatigue.damage", then: "0.5", now: String(result.fatigue.damage) }]);
+    expect(report.results.differences).toEqual([{ what: "fatigue.damage", recorded: "0.5", now: String(result.fatigue.damage) }]);
 
     const garbled = await verifySheet(await replaceAttachment(pdf, INPUT_ATTACHMENT, new TextEncoder().encode("{ not json")));
     expect(garbled.ok).toBe(false);

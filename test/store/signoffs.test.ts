@@ -74,7 +74,7 @@ onEachBackend("sign-off", (b) => {
   // Attack: one person signing more than one role. Preparer, checker and approver are three
   // different user ids (the four-eyes rule and a separate approval, common practice).
   it("attack — one person signs two roles: the preparer may neither check nor approve, the checker may not approve", async () => {
-    const { store, id, sign } = await storeWithCheck(b);
+    const { sign } = await storeWithCheck(b);
     await sign(1, "prepared", "ana");
     const err = await sign(1, "checked", "ana").catch((e: unknown) => e);
     expect(err).toBeInstanceOf(SignOffRefusedError);

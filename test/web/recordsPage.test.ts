@@ -266,7 +266,7 @@ describe("people, and signing", () => {
     expect(stateOf(page.html, 2)).toBe("approved");
     expect(stateOf(page.html, 1)).toBe("superseded");
     expect(page.html).toContain("Revision 2 is approved");
-    expect(page.html).not.toContain('action="/records/' + id + '/sign"');
+    expect(page.html).not.toContain(`action="/records/${id}/sign"`);
     const log = /<ol class="log">([\s\S]*?)<\/ol>/.exec(page.html)![1];
     expect(log.match(/<strong>Signed<\/strong>/g)).toHaveLength(3);
     for (const secret of SECRETS) for (const body of s.bodies) expect(body).not.toContain(secret);

@@ -1,5 +1,4 @@
 // Hoopwise page script: small touches on top of htmx. The page works without it.
-"use strict";
 
 // An error slot swapped in by htmx changes text only; mark its field invalid (or valid again) to match,
 // so assistive technology announces the state the server decided.

@@ -34,6 +34,7 @@ export function CheckForm({ s }: { s: FormState }) {
       hx-indicator="#busy"
     >
       {/* The first submit button is the one Enter presses: it must recalculate, not add rows or solve. */}
+      {/* biome-ignore lint/a11y/noAriaHiddenOnFocusable: out of the tab order (tabindex −1) and off screen; the visible "Work it out" is the one people use */}
       <button type="submit" class="default-submit" tabindex={-1} aria-hidden="true" hx-post="/recalc">
         Work it out
       </button>

@@ -2,7 +2,7 @@ import { InputError } from "../errors.ts";
 import { fmt } from "../step.ts";
 import { discretize, ellipse, periodicSpline, roundedRectangle, TooManyPanels, type Discretization, type Outline } from "./geometry.ts";
 import { interpolationRow } from "./gauss.ts";
-import { buildOperator, edgeStress, NoConvergence, solve, stressAt, type PlaneStress } from "./solver.ts";
+import { buildOperator, edgeStress, NoConvergence, type PlaneStress, type Solution, solve, stressAt } from "./solver.ts";
 
 /**
  * Openings of any smooth shape with the fastener holes around them, in the biaxial membrane field
@@ -407,8 +407,8 @@ export function solveOpening(cutout: ShapeCutout, fasteners: FastenerInput[] = [
     throw e;
   }
   const op = buildOperator(disc);
-  let hoopSol;
-  let axialSol;
+  let hoopSol: Solution;
+  let axialSol: Solution;
   try {
     hoopSol = solve(op, { sxx: 1, syy: 0 });
     axialSol = solve(op, { sxx: 0, syy: 1 });

@@ -462,7 +462,6 @@ export function edgeStress(sol: Solution): Float64Array {
     const own = Math.floor(i / p);
     const ti = x[i];
     const tq = y[i];
-    let sr = 0;
     let si = 0;
     // own panel: subtracted Cauchy integral of W
     for (let j = own * p; j < own * p + p; j++) {
@@ -474,19 +473,13 @@ export function edgeStress(sol: Solution): Float64Array {
       const r2 = ex * ex + ey * ey;
       const ar = fr * dx[j] - fi * dy[j];
       const ai = fr * dy[j] + fi * dx[j];
-      sr += ((ar * ex + ai * ey) / r2) * w[j];
       si += ((ai * ex - ar * ey) / r2) * w[j];
     }
     {
       // diagonal: (W(t) − W(t₀))·t′/(t − t₀) → dW/dξ
-      let dr = 0;
       let di = 0;
       const li = i - own * p;
-      for (let j = 0; j < p; j++) {
-        dr += rule.D[li * p + j] * Wre[own * p + j];
-        di += rule.D[li * p + j] * Wim[own * p + j];
-      }
-      sr += dr * w[i];
+      for (let j = 0; j < p; j++) di += rule.D[li * p + j] * Wim[own * p + j];
       si += di * w[i];
       const [sx, sy, ex2, ey2] = ends[own];
       const er = ex2 - ti;
@@ -496,20 +489,17 @@ export function edgeStress(sol: Solution): Float64Array {
       const lr = 0.5 * Math.log((er * er + ei * ei) / (br * br + bi * bi));
       let lim = Math.atan2(ei * br - er * bi, er * br + ei * bi);
       if (lim <= 0) lim += 2 * Math.PI;
-      sr += Wre[i] * lr - Wim[i] * lim;
       si += Wre[i] * lim + Wim[i] * lr;
       // ω(s)/(s − t₀) − ω(e)/(e − t₀)
       const [oa, ob, oc, od] = endW[own];
       const bm = br * br + bi * bi;
       const em = er * er + ei * ei;
-      sr += (oa * br + ob * bi) / bm - (oc * er + od * ei) / em;
       si += (ob * br - oa * bi) / bm - (od * er - oc * ei) / em;
     }
     for (let pi = 0; pi < np; pi++) {
       if (pi === own) continue;
       if (Math.hypot(ti - pcx[pi], tq - pcy[pi]) < 1.0 * plen[pi]) {
-        const [ir, ii] = nearCauchy2(sol, pi, ti, tq);
-        sr += ir;
+        const [, ii] = nearCauchy2(sol, pi, ti, tq);
         si += ii;
         continue;
       }
@@ -523,11 +513,10 @@ export function edgeStress(sol: Solution): Float64Array {
         const i2i = 2 * invr * invi;
         const odr = (sol.wre[j] * dx[j] - sol.wim[j] * dy[j]) * w[j];
         const odi = (sol.wre[j] * dy[j] + sol.wim[j] * dx[j]) * w[j];
-        sr += odr * i2r - odi * i2i;
         si += odr * i2i + odi * i2r;
       }
     }
-    // φ₁′ = (1/2πi)(sr + i si) ⇒ Re φ₁′ = si/2π
+    // φ₁′ = (1/2πi)(sr + i si) ⇒ Re φ₁′ = si/2π: only the imaginary sum si is needed, so sr is never summed
     out[i] = 4 * (sol.gamma + si / (2 * Math.PI));
   }
   return out;

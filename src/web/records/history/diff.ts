@@ -29,7 +29,7 @@ const MAX_LISTED = 300;
 export function flatten(value: unknown, prefix = "", out = new Map<string, unknown>()): Map<string, unknown> {
   if (Array.isArray(value)) {
     if (value.length === 0 || value.every(isPlain)) out.set(prefix, value);
-    else value.forEach((item, i) => flatten(item, join(prefix, String(i)), out));
+    else for (const [i, item] of value.entries()) flatten(item, join(prefix, String(i)), out);
   } else if (value !== null && typeof value === "object") {
     const entries = Object.entries(value as Record<string, unknown>).filter(([, v]) => v !== undefined);
     if (entries.length === 0) out.set(prefix, value);
