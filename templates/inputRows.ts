@@ -1,3 +1,4 @@
+import { inputAt } from "../src/schema/inputs.ts";
 import type { Quantity } from "../src/schema/units.ts";
 import { numberList, percent, sig } from "./format.ts";
 import { CRITERION_NAMES, CUTOUT_NAMES, CRACK_NAMES } from "./names.ts";
@@ -27,6 +28,11 @@ export function inputGroups(m: SheetModel): InputGroup[] {
   const u = m.units;
   const q = (label: string, x: number | null | undefined, kind: Quantity, note = ""): InputRow => ({ label, ...dual(x, kind, u), note });
   const t = (label: string, shown: string, note = ""): InputRow => ({ label, shown, si: "", note });
+  // An input as the format names it: its label and symbol and its quantity from the registry, so the form and the sheet say the same.
+  const input = (path: string, x: number | null | undefined, note = ""): InputRow => {
+    const i = inputAt(path);
+    return q(i.symbol ? `${i.label} ${i.symbol}` : i.label, x, i.quantity, note);
+  };
   const groups: InputGroup[] = [];
 
   const shell = d.shell;
@@ -40,24 +46,24 @@ export function inputGroups(m: SheetModel): InputGroup[] {
         "length",
         shell.radiusAt === "mean" ? "" : "mean radius worked out in the calculation",
       ),
-      q("Wall thickness t", shell.thickness_mm, "length"),
+      input("shell.thickness_mm", shell.thickness_mm),
       t("Wall theory asked for", THEORY_ASKED[shell.theory]),
     ],
   });
 
-  groups.push({ title: "Pressure (inside minus outside)", rows: pressureRows(m, q, t) });
+  groups.push({ title: "Pressure (inside minus outside)", rows: pressureRows(m, q, t, input) });
 
   const c = d.cutout;
   const cutoutRows: InputRow[] = [t("Opening", CUTOUT_NAMES[c.kind])];
-  if (c.kind === "circular-hole" && c.radius_mm !== undefined) cutoutRows.push(q("Hole radius", c.radius_mm, "length"));
+  if (c.kind === "circular-hole" && c.radius_mm !== undefined) cutoutRows.push(input("cutout.radius_mm", c.radius_mm));
   if (c.kind === "elliptical-hole") {
-    cutoutRows.push(q("Half-axis along the hoop direction", c.halfAxisAlongHoop_mm, "length"));
-    cutoutRows.push(q("Half-axis along the axial direction", c.halfAxisAlongAxial_mm, "length"));
+    cutoutRows.push(input("cutout.halfAxisAlongHoop_mm", c.halfAxisAlongHoop_mm));
+    cutoutRows.push(input("cutout.halfAxisAlongAxial_mm", c.halfAxisAlongAxial_mm));
   }
   if (c.kind === "rounded-rectangle") {
-    cutoutRows.push(q("Half-width along the hoop direction", c.halfWidthAlongHoop_mm, "length"));
-    cutoutRows.push(q("Half-length along the axial direction", c.halfLengthAlongAxial_mm, "length"));
-    cutoutRows.push(q("Corner radius", c.cornerRadius_mm, "length"));
+    cutoutRows.push(input("cutout.halfWidthAlongHoop_mm", c.halfWidthAlongHoop_mm));
+    cutoutRows.push(input("cutout.halfLengthAlongAxial_mm", c.halfLengthAlongAxial_mm));
+    cutoutRows.push(input("cutout.cornerRadius_mm", c.cornerRadius_mm));
   }
   if (c.kind === "outline")
     cutoutRows.push(
@@ -80,11 +86,11 @@ export function inputGroups(m: SheetModel): InputGroup[] {
     c.reinforcement
   ) {
     cutoutRows.push(t("Reinforcement area", `${sig(c.reinforcement.area_mm2, 4)} mm²`));
-    cutoutRows.push(q("Reinforcement width", c.reinforcement.width_mm, "length"));
+    cutoutRows.push(input("cutout.reinforcement.width_mm", c.reinforcement.width_mm));
   }
   if (c.kind === "given") {
     cutoutRows.push(t("Kt given", sig(c.kt, 4), "referred to the nominal hoop stress"));
-    if (c.rootRadius_mm !== undefined) cutoutRows.push(q("Notch root radius", c.rootRadius_mm, "length"));
+    if (c.rootRadius_mm !== undefined) cutoutRows.push(input("cutout.rootRadius_mm", c.rootRadius_mm));
     cutoutRows.push(t("Basis of the given Kt", c.basis ?? "not stated", c.basis ? "as entered" : "state where the value comes from"));
   }
   groups.push({ title: "Opening", rows: cutoutRows });
@@ -99,8 +105,8 @@ export function inputGroups(m: SheetModel): InputGroup[] {
       t("Crack", CRACK_NAMES[k.geometry]),
       q(k.geometry === "center-through" ? "Initial half-length a₀" : "Initial depth a₀", k.initial_mm, "length"),
     ];
-    if (k.width_mm !== undefined) rows.push(q("Panel width W", k.width_mm, "length", "finite-width correction"));
-    if (k.holeRadius_mm !== undefined) rows.push(q("Hole radius R", k.holeRadius_mm, "length"));
+    if (k.width_mm !== undefined) rows.push(input("crack.width_mm", k.width_mm, "finite-width correction"));
+    if (k.holeRadius_mm !== undefined) rows.push(input("crack.holeRadius_mm", k.holeRadius_mm));
     if (k.geometry === "hole-through") rows.push(t("Cracks at the hole", String(k.cracksAtHole)));
     rows.push(t("Inspection factor", sig(k.inspectionFactor, 4)));
     rows.push(t("Bulging of the curved skin", k.bulging ? "included" : "not included"));
@@ -129,6 +135,7 @@ export function inputGroups(m: SheetModel): InputGroup[] {
 
 type Q = (label: string, x: number | null | undefined, kind: Quantity, note?: string) => InputRow;
 type T = (label: string, shown: string, note?: string) => InputRow;
+type I = (path: string, x: number | null | undefined, note?: string) => InputRow;
 
 const THEORY_ASKED: Record<"auto" | "thin" | "thick", string> = {
   auto: "chosen from mean radius ÷ thickness (thick wall below 10)",
@@ -136,16 +143,16 @@ const THEORY_ASKED: Record<"auto" | "thin" | "thick", string> = {
   thick: "thick wall (Lamé), as asked",
 };
 
-function pressureRows(m: SheetModel, q: Q, t: T): InputRow[] {
+function pressureRows(m: SheetModel, q: Q, t: T, input: I): InputRow[] {
   const p = m.document.pressure;
   const rows: InputRow[] = [];
   if (p.max_MPa !== undefined) {
-    rows.push(q("Highest pressure p_max", p.max_MPa, "pressure"));
-    rows.push(q("Lowest pressure p_min", p.min_MPa ?? 0, "pressure", p.min_MPa === undefined ? "default" : ""));
+    rows.push(input("pressure.max_MPa", p.max_MPa));
+    rows.push(input("pressure.min_MPa", p.min_MPa ?? 0, p.min_MPa === undefined ? "default" : ""));
   } else if (p.fromAltitude) {
-    rows.push(q("Flight altitude", p.fromAltitude.flight_m, "altitude", "standard atmosphere"));
-    rows.push(q("Cabin altitude", p.fromAltitude.cabin_m, "altitude", "standard atmosphere"));
-    rows.push(q("Lowest pressure p_min", p.min_MPa ?? 0, "pressure", p.min_MPa === undefined ? "default" : ""));
+    rows.push(input("pressure.fromAltitude.flight_m", p.fromAltitude.flight_m, "standard atmosphere"));
+    rows.push(input("pressure.fromAltitude.cabin_m", p.fromAltitude.cabin_m, "standard atmosphere"));
+    rows.push(input("pressure.min_MPa", p.min_MPa ?? 0, p.min_MPa === undefined ? "default" : ""));
   } else if (p.history_MPa) {
     const h = p.history_MPa;
     let lo = Infinity;

@@ -8,7 +8,12 @@ import { FATIGUE_CURVES, SERVICES, STATIC_BASES, WELD_DETAILS } from "./service.
  * types come from it with z.infer. Units are in the key names (mm, MPa, cycles).
  */
 
-const num = (what: string) => z.number({ error: `${what} must be a number` });
+/**
+ * A number input. `what` is the input's name in words ("the wall thickness"): the error messages
+ * say it, and the same words, kept as the schema's metadata, give the label the form and the sheet
+ * show (src/schema/inputs.ts), so the three cannot drift apart.
+ */
+const num = (what: string) => z.number({ error: `${what} must be a number` }).meta({ words: what });
 
 /**
  * Smallest magnitudes the check takes. No real shell, material or test comes near them; below
@@ -31,7 +36,7 @@ const positive = (what: string, max: number, floor?: Floor) => {
   const p = num(what)
     .positive({ error: `${what} must be greater than 0` })
     .max(max, { error: `${what} must be at most ${max}` });
-  return floor ? p.refine((x) => x <= 0 || x >= floor.min, { error: `${what} must be at least ${floor.words}` }) : p;
+  return floor ? p.refine((x) => x <= 0 || x >= floor.min, { error: `${what} must be at least ${floor.words}` }).meta({ words: what }) : p;
 };
 /** A probability for a lower bound: below one half it would bound the better half of the items, not the weaker. */
 const fraction = (what: string) =>
@@ -62,7 +67,7 @@ export const shellSchema = z
     form: z.enum(["cylinder", "sphere"], { error: 'shell form must be "cylinder" or "sphere"' }),
     radius_mm: positive("the radius", 1e5, FLOORS.length).describe("Shell radius in mm, measured where radiusAt says"),
     radiusAt: z.enum(["inner", "mean", "outer"], { error: 'radiusAt must be "inner", "mean" or "outer"' }).default("mean"),
-    thickness_mm: positive("the wall thickness", 1e4, FLOORS.length).describe("Skin or wall thickness in mm"),
+    thickness_mm: positive("the wall thickness", 1e4, FLOORS.length).meta({ symbol: "t" }).describe("Skin or wall thickness in mm"),
     theory: z
       .enum(["auto", "thin", "thick"], { error: 'theory must be "auto", "thin" or "thick"' })
       .default("auto")
@@ -116,8 +121,8 @@ const blockSchema = z
 
 export const pressureSchema = z
   .strictObject({
-    max_MPa: signedStress("the maximum pressure").optional(),
-    min_MPa: signedStress("the minimum pressure").optional(),
+    max_MPa: signedStress("the highest pressure").meta({ symbol: "p_max" }).optional(),
+    min_MPa: signedStress("the lowest pressure").meta({ symbol: "p_min" }).optional(),
     fromAltitude: altitudeSchema.optional(),
     history_MPa: z
       .array(signedStress("each pressure in the history"), { error: "the pressure history must be a list of numbers" })
@@ -154,18 +159,18 @@ export const pressureSchema = z
         code: "custom",
         path: ["max_MPa"],
         message:
-          "the maximum pressure must be greater than 0 (inside above outside): a shell under outside pressure alone needs a buckling check to the governing code, which this tool does not make; a vacuum part of a cycle is taken (min_MPa below 0) and refers the check",
+          "the highest pressure must be greater than 0 (inside above outside): a shell under outside pressure alone needs a buckling check to the governing code, which this tool does not make; a vacuum part of a cycle is taken (min_MPa below 0) and refers the check",
       });
     } else if (p.max_MPa !== undefined && p.max_MPa < FLOORS.pressure_MPa) {
       ctx.addIssue({
         code: "custom",
         path: ["max_MPa"],
-        message: `the maximum pressure must be at least ${FLOORS.pressure_MPa} MPa (1 Pa)`,
+        message: `the highest pressure must be at least ${FLOORS.pressure_MPa} MPa (1 Pa)`,
       });
     }
     const top = p.max_MPa ?? Infinity;
     if (p.min_MPa !== undefined && p.min_MPa > top)
-      ctx.addIssue({ code: "custom", path: ["min_MPa"], message: "the minimum pressure must not exceed the maximum" });
+      ctx.addIssue({ code: "custom", path: ["min_MPa"], message: "the lowest pressure must not exceed the highest" });
     if ((p.history_MPa || p.blocks) && p.min_MPa !== undefined) {
       ctx.addIssue({
         code: "custom",
@@ -374,8 +379,7 @@ export const fatigueSchema = z
     modifiers: z
       .strictObject({
         surface: z.enum(SURFACE_FINISHES, { error: `surface must be one of ${SURFACE_FINISHES.join(", ")}` }).optional(),
-        reliability: z
-          .number({ error: "the reliability must be a number" })
+        reliability: num("the reliability")
           .min(0.5, { error: "the reliability factor needs a reliability between 0.5 and 0.9999" })
           .max(0.9999, { error: "the reliability factor needs a reliability between 0.5 and 0.9999" })
           .optional(),
@@ -425,8 +429,8 @@ export const crackSchema = z
       .enum(INSPECTION_METHODS, { error: `detectableBy must be one of ${INSPECTION_METHODS.join(", ")}` })
       .optional()
       .describe("Take the detectable size as the typical value of an inspection method (typical: verify against a qualified procedure)"),
-    width_mm: positive("the panel width", 1e5, FLOORS.length).optional(),
-    holeRadius_mm: positive("the hole radius", 1e4, FLOORS.length).optional(),
+    width_mm: positive("the panel width", 1e5, FLOORS.length).meta({ symbol: "W" }).optional(),
+    holeRadius_mm: positive("the hole radius", 1e4, FLOORS.length).meta({ symbol: "R" }).optional(),
     cracksAtHole: z
       .union([z.literal(1), z.literal(2)], { error: "cracksAtHole must be 1 or 2" })
       .default(2)
@@ -475,8 +479,7 @@ export const crackSchema = z
   });
 
 export const fleetSchema = z.strictObject({
-  size: z
-    .number({ error: "the fleet size must be a number" })
+  size: num("the fleet size")
     .int({ error: "the fleet size must be a whole number" })
     .min(1, { error: "the fleet size must be at least 1" })
     .max(1e7, { error: "the fleet size must be at most 10 000 000" }),

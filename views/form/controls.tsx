@@ -48,7 +48,15 @@ interface FieldProps {
 }
 
 /** A number in the chosen units. Plain text with a decimal keypad: a browser's number box would drop what it cannot read, and the user would see "is required" instead of what is wrong. */
-export function NumberInput({ s, name, label, hint, placeholder, unit }: FieldProps & { name: NumberFieldName; unit?: string }) {
+/** A number field; its label is the format's own words for the input unless the form's context asks for other words. */
+export function NumberInput({
+  s,
+  name,
+  label = NUMBER_FIELDS[name].label,
+  hint,
+  placeholder,
+  unit,
+}: Omit<FieldProps, "label"> & { label?: Child; name: NumberFieldName; unit?: string }) {
   const errs = s.errors.get(name);
   const shownUnit = unit ?? unitLabel(NUMBER_FIELDS[name].quantity, s.units);
   return (

@@ -28,9 +28,9 @@ export function CrackSection({ s }: { s: FormState }) {
             label="Initial size"
             hint="Half-length for a crack in open skin; length from the edge or hole otherwise."
           />
-          <NumberInput s={s} name="crack.width" label="Panel width" hint="Optional: finite-width correction." />
+          <NumberInput s={s} name="crack.width" hint="Optional: finite-width correction." />
           <div class="when-hole">
-            <NumberInput s={s} name="crack.holeRadius" label="Hole radius" />
+            <NumberInput s={s} name="crack.holeRadius" />
           </div>
           <div class="when-hole">
             <Select

@@ -40,7 +40,7 @@ export function CutoutSection({ s }: { s: FormState }) {
         <div class="grid">
           <NumberInput s={s} name="rect.hoop" label="Half-width around the shell (hoop direction)" />
           <NumberInput s={s} name="rect.axial" label="Half-length along the axis" />
-          <NumberInput s={s} name="rect.corner" label="Corner radius" hint="At most the smaller half-size." />
+          <NumberInput s={s} name="rect.corner" hint="At most the smaller half-size." />
         </div>
         <p class="hint">Fastener holes and a reinforcement given in a check file ride along with it.</p>
       </Panel>

@@ -28,7 +28,7 @@ export function EvidenceSection({ s }: { s: FormState }) {
             <ErrorSlot name={name} messages={errs} />
           </div>
           <NumberInput s={s} name="evidence.reliability" label="Proportion surviving (reliability)" placeholder="0.9" />
-          <NumberInput s={s} name="evidence.confidence" label="Confidence" placeholder="0.95" />
+          <NumberInput s={s} name="evidence.confidence" placeholder="0.95" />
           <NumberInput
             s={s}
             name="evidence.logStdDev"

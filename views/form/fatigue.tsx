@@ -20,9 +20,9 @@ export function FatigueSection({ s }: { s: FormState }) {
           options={MEAN_STRESS_CRITERIA.map((c) => ({ value: c, label: CRITERION_LABEL[c] }))}
         />
         <div class="when-walker">
-          <NumberInput s={s} name="fatigue.walkerGamma" label="Walker exponent γ" placeholder="0.5" />
+          <NumberInput s={s} name="fatigue.walkerGamma" placeholder="0.5" />
         </div>
-        <NumberInput s={s} name="fatigue.designLife" label="Design life" unit="cycles, or passes of a history or block set" />
+        <NumberInput s={s} name="fatigue.designLife" unit="cycles, or passes of a history or block set" />
         <NumberInput
           s={s}
           name="fatigue.scatterFactor"

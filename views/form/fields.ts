@@ -1,75 +1,88 @@
+import { inputAt } from "../../src/schema/inputs.ts";
 import type { Quantity } from "../../src/schema/units.ts";
 
 /**
- * The form's number fields: each field's name on the page, where its value lands in the check
- * document, and what it measures (so it is shown and read in the chosen units).
- * The names carry no unit because the unit follows the user's choice.
+ * The form's number fields: each field's name on the page and where its value lands in the check
+ * document; what it measures (so it is shown and read in the chosen units) and its label come
+ * from the format's registry (src/schema/inputs.ts). The names carry no unit because the unit
+ * follows the user's choice.
  */
 export interface NumberField {
   path: string;
+  /** What it measures, from the format's registry (the unit in the key's name). */
   quantity: Quantity;
+  /** The label the sheet shows too, from the schema's words for it. */
+  label: string;
 }
 
-export const NUMBER_FIELDS = {
-  "shell.radius": { path: "shell.radius_mm", quantity: "length" },
-  "shell.thickness": { path: "shell.thickness_mm", quantity: "length" },
-  "pressure.max": { path: "pressure.max_MPa", quantity: "pressure" },
-  "pressure.min": { path: "pressure.min_MPa", quantity: "pressure" },
-  "altitude.flight": { path: "pressure.fromAltitude.flight_m", quantity: "altitude" },
-  "altitude.cabin": { path: "pressure.fromAltitude.cabin_m", quantity: "altitude" },
-  "altitude.min": { path: "pressure.min_MPa", quantity: "pressure" },
-  "axial.max": { path: "axialExtra.max_MPa", quantity: "stress" },
-  "axial.min": { path: "axialExtra.min_MPa", quantity: "stress" },
-  "circle.radius": { path: "cutout.radius_mm", quantity: "length" },
-  "ellipse.hoop": { path: "cutout.halfAxisAlongHoop_mm", quantity: "length" },
-  "ellipse.axial": { path: "cutout.halfAxisAlongAxial_mm", quantity: "length" },
-  "rect.hoop": { path: "cutout.halfWidthAlongHoop_mm", quantity: "length" },
-  "rect.axial": { path: "cutout.halfLengthAlongAxial_mm", quantity: "length" },
-  "rect.corner": { path: "cutout.cornerRadius_mm", quantity: "length" },
-  "given.kt": { path: "cutout.kt", quantity: "plain" },
-  "given.rootRadius": { path: "cutout.rootRadius_mm", quantity: "length" },
-  "material.ultimate": { path: "material.ultimate_MPa", quantity: "stress" },
-  "material.yield": { path: "material.yield_MPa", quantity: "stress" },
-  "material.modulus": { path: "material.modulus_MPa", quantity: "stress" },
-  "material.sigmaF": { path: "material.fatigueStrengthCoefficient_MPa", quantity: "stress" },
-  "material.b": { path: "material.fatigueStrengthExponent", quantity: "plain" },
-  "material.endurance": { path: "material.enduranceLimit_MPa", quantity: "stress" },
-  "material.toughness": { path: "material.toughness_MPaSqrtM", quantity: "toughness" },
-  "material.parisC": { path: "material.parisC", quantity: "plain" },
-  "material.parisM": { path: "material.parisM", quantity: "plain" },
-  "fatigue.walkerGamma": { path: "fatigue.walkerGamma", quantity: "plain" },
-  "fatigue.q": { path: "fatigue.notchSensitivity", quantity: "plain" },
-  "fatigue.designLife": { path: "fatigue.designLife_cycles", quantity: "plain" },
-  "fatigue.scatterFactor": { path: "fatigue.scatterFactor", quantity: "plain" },
-  "fatigue.detailCategory": { path: "fatigue.detailCategory_MPa", quantity: "stress" },
-  "fatigue.gammaMf": { path: "fatigue.gammaMf", quantity: "plain" },
-  "fatigue.reliability": { path: "fatigue.modifiers.reliability", quantity: "plain" },
-  "fatigue.size": { path: "fatigue.modifiers.sizeDiameter_mm", quantity: "length" },
-  "static.yieldFactor": { path: "static.yieldFactor", quantity: "plain" },
-  "static.allowableStress": { path: "static.allowableStress_MPa", quantity: "stress" },
-  "static.jointEfficiency": { path: "static.jointEfficiency", quantity: "plain" },
-  "static.corrosionAllowance": { path: "static.corrosionAllowance_mm", quantity: "length" },
-  "static.thicknessTolerance": { path: "static.thicknessTolerance_mm", quantity: "length" },
-  "static.minimumGauge": { path: "static.minimumGauge_mm", quantity: "length" },
-  "static.limitFactor": { path: "static.limitFactor", quantity: "plain" },
-  "static.ultimateFactor": { path: "static.ultimateFactor", quantity: "plain" },
-  "fatigue.temperature": { path: "fatigue.temperature_C", quantity: "plain" },
-  "fatigue.roughness": { path: "fatigue.roughnessRz_um", quantity: "plain" },
-  "crack.initial": { path: "crack.initial_mm", quantity: "length" },
-  "crack.width": { path: "crack.width_mm", quantity: "length" },
-  "crack.holeRadius": { path: "crack.holeRadius_mm", quantity: "length" },
-  "crack.inspectionFactor": { path: "crack.inspectionFactor", quantity: "plain" },
-  "crack.detectable": { path: "crack.detectable_mm", quantity: "length" },
-  "crack.openingDistance": { path: "crack.openingDistance_mm", quantity: "length" },
-  "crack.minimumInterval": { path: "crack.minimumInterval_cycles", quantity: "plain" },
-  "fleet.size": { path: "fleet.size", quantity: "plain" },
-  "fleet.logStdDev": { path: "fleet.logStdDev", quantity: "plain" },
-  "evidence.reliability": { path: "evidence.reliability", quantity: "plain" },
-  "evidence.confidence": { path: "evidence.confidence", quantity: "plain" },
-  "evidence.logStdDev": { path: "evidence.assumedLogStdDev", quantity: "plain" },
-} as const satisfies Record<string, NumberField>;
+/** Each number field's name on the page and where its value lands in the check document. */
+const FIELD_PATHS = {
+  "shell.radius": "shell.radius_mm",
+  "shell.thickness": "shell.thickness_mm",
+  "pressure.max": "pressure.max_MPa",
+  "pressure.min": "pressure.min_MPa",
+  "altitude.flight": "pressure.fromAltitude.flight_m",
+  "altitude.cabin": "pressure.fromAltitude.cabin_m",
+  "altitude.min": "pressure.min_MPa",
+  "axial.max": "axialExtra.max_MPa",
+  "axial.min": "axialExtra.min_MPa",
+  "circle.radius": "cutout.radius_mm",
+  "ellipse.hoop": "cutout.halfAxisAlongHoop_mm",
+  "ellipse.axial": "cutout.halfAxisAlongAxial_mm",
+  "rect.hoop": "cutout.halfWidthAlongHoop_mm",
+  "rect.axial": "cutout.halfLengthAlongAxial_mm",
+  "rect.corner": "cutout.cornerRadius_mm",
+  "given.kt": "cutout.kt",
+  "given.rootRadius": "cutout.rootRadius_mm",
+  "material.ultimate": "material.ultimate_MPa",
+  "material.yield": "material.yield_MPa",
+  "material.modulus": "material.modulus_MPa",
+  "material.sigmaF": "material.fatigueStrengthCoefficient_MPa",
+  "material.b": "material.fatigueStrengthExponent",
+  "material.endurance": "material.enduranceLimit_MPa",
+  "material.toughness": "material.toughness_MPaSqrtM",
+  "material.parisC": "material.parisC",
+  "material.parisM": "material.parisM",
+  "fatigue.walkerGamma": "fatigue.walkerGamma",
+  "fatigue.q": "fatigue.notchSensitivity",
+  "fatigue.designLife": "fatigue.designLife_cycles",
+  "fatigue.scatterFactor": "fatigue.scatterFactor",
+  "fatigue.detailCategory": "fatigue.detailCategory_MPa",
+  "fatigue.gammaMf": "fatigue.gammaMf",
+  "fatigue.reliability": "fatigue.modifiers.reliability",
+  "fatigue.size": "fatigue.modifiers.sizeDiameter_mm",
+  "static.yieldFactor": "static.yieldFactor",
+  "static.allowableStress": "static.allowableStress_MPa",
+  "static.jointEfficiency": "static.jointEfficiency",
+  "static.corrosionAllowance": "static.corrosionAllowance_mm",
+  "static.thicknessTolerance": "static.thicknessTolerance_mm",
+  "static.minimumGauge": "static.minimumGauge_mm",
+  "static.limitFactor": "static.limitFactor",
+  "static.ultimateFactor": "static.ultimateFactor",
+  "fatigue.temperature": "fatigue.temperature_C",
+  "fatigue.roughness": "fatigue.roughnessRz_um",
+  "crack.initial": "crack.initial_mm",
+  "crack.width": "crack.width_mm",
+  "crack.holeRadius": "crack.holeRadius_mm",
+  "crack.inspectionFactor": "crack.inspectionFactor",
+  "crack.detectable": "crack.detectable_mm",
+  "crack.openingDistance": "crack.openingDistance_mm",
+  "crack.minimumInterval": "crack.minimumInterval_cycles",
+  "fleet.size": "fleet.size",
+  "fleet.logStdDev": "fleet.logStdDev",
+  "evidence.reliability": "evidence.reliability",
+  "evidence.confidence": "evidence.confidence",
+  "evidence.logStdDev": "evidence.assumedLogStdDev",
+} as const;
 
-export type NumberFieldName = keyof typeof NUMBER_FIELDS;
+export type NumberFieldName = keyof typeof FIELD_PATHS;
+
+export const NUMBER_FIELDS = Object.fromEntries(
+  Object.entries(FIELD_PATHS).map(([name, path]) => {
+    const input = inputAt(path);
+    return [name, { path, quantity: input.quantity, label: input.label }];
+  }),
+) as Record<NumberFieldName, NumberField>;
 
 /** Material values a library entry supplies; a blank field keeps the library's value. */
 export const MATERIAL_VALUE_FIELDS = [

@@ -56,7 +56,7 @@ export function OptionsSection({ s }: { s: FormState }) {
             ]}
           />
           <NumberInput s={s} name="fatigue.reliability" label="Reliability (0.5 to 0.9999)" />
-          <NumberInput s={s} name="fatigue.size" label="Effective size" />
+          <NumberInput s={s} name="fatigue.size" />
         </div>
       </fieldset>
     </details>

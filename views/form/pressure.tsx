@@ -30,8 +30,8 @@ export function PressureSection({ s }: { s: FormState }) {
       </Panel>
       <Panel name="pressure.mode" value="altitude">
         <div class="grid">
-          <NumberInput s={s} name="altitude.flight" label="Flight altitude" />
-          <NumberInput s={s} name="altitude.cabin" label="Cabin altitude" />
+          <NumberInput s={s} name="altitude.flight" />
+          <NumberInput s={s} name="altitude.cabin" />
           <NumberInput s={s} name="altitude.min" label="Lowest pressure on the ground" placeholder="0" />
         </div>
         <p class="hint">The highest pressure is the standard-atmosphere pressure at the cabin altitude less that at the flight altitude.</p>

@@ -15,7 +15,7 @@ export function ShellSection({ s }: { s: FormState }) {
             { value: "sphere", label: "Sphere (dome, spherical tank)" },
           ]}
         />
-        <NumberInput s={s} name="shell.radius" label="Radius" />
+        <NumberInput s={s} name="shell.radius" />
         <Select
           s={s}
           name="shell.radiusAt"
@@ -27,7 +27,7 @@ export function ShellSection({ s }: { s: FormState }) {
             { value: "outer", label: "the outside surface" },
           ]}
         />
-        <NumberInput s={s} name="shell.thickness" label="Wall thickness" />
+        <NumberInput s={s} name="shell.thickness" />
         <Select
           s={s}
           name="shell.theory"
