@@ -30,10 +30,11 @@ describe("the input difference", () => {
     const { changes, more } = diffInputs(receiver, after);
     expect(more).toBe(0);
     expect(changes).toEqual([
-      { path: "shell.thickness_mm", kind: "changed", before: 5, after: 6, unit: "mm" },
-      { path: "pressure.blocks.1.max_MPa", kind: "removed", before: 1.1, unit: "MPa" },
-      { path: "pressure.blocks.1.min_MPa", kind: "removed", before: 0.8, unit: "MPa" },
-      { path: "pressure.blocks.1.cycles", kind: "removed", before: 20000, unit: "cycles" },
+      // Each number input carries the label the form and the sheet show (the schema's words for it).
+      { path: "shell.thickness_mm", kind: "changed", before: 5, after: 6, unit: "mm", label: "Wall thickness" },
+      { path: "pressure.blocks.1.max_MPa", kind: "removed", before: 1.1, unit: "MPa", label: "Block's maximum pressure" },
+      { path: "pressure.blocks.1.min_MPa", kind: "removed", before: 0.8, unit: "MPa", label: "Block's minimum pressure" },
+      { path: "pressure.blocks.1.cycles", kind: "removed", before: 20000, unit: "cycles", label: "Block's cycle count" },
       { path: "evidence.lives_cycles", kind: "added", after: [52000, 61000], unit: "cycles" },
     ]);
   });

@@ -24,8 +24,8 @@ export function PressureSection({ s }: { s: FormState }) {
       />
       <Panel name="pressure.mode" value="direct">
         <div class="grid">
-          <NumberInput s={s} name="pressure.max" label="Highest pressure" />
-          <NumberInput s={s} name="pressure.min" label="Lowest pressure" placeholder="0" />
+          <NumberInput s={s} name="pressure.max" />
+          <NumberInput s={s} name="pressure.min" placeholder="0" />
         </div>
       </Panel>
       <Panel name="pressure.mode" value="altitude">

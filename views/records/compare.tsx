@@ -93,6 +93,7 @@ function InputTable({ a, b, diff }: { a: number; b: number; diff: InputDiff }) {
           {diff.changes.map((c) => (
             <tr class={`diff-${c.kind}`} data-path={c.path}>
               <th scope="row">
+                {c.label ? <span class="diff-label">{c.label} </span> : null}
                 <code>{c.path}</code>
               </th>
               <td>{c.unit ?? ""}</td>

@@ -5,6 +5,8 @@
  * a history of thousands of points is compared whole and summarised, not listed point by point.
  */
 
+import { NUMBER_INPUTS } from "../../../schema/inputs.ts";
+
 export type ChangeKind = "changed" | "added" | "removed";
 
 export interface InputChange {
@@ -15,6 +17,8 @@ export interface InputChange {
   /** Absent when the key was removed. */
   after?: unknown;
   unit?: string;
+  /** The input's label as the form and the sheet show it, where the key is a number input of the format. */
+  label?: string;
 }
 
 export interface InputDiff {
@@ -47,9 +51,11 @@ export function diffInputs(before: unknown, after: unknown): InputDiff {
   const changes: InputChange[] = [];
   for (const path of paths) {
     const unit = unitOf(path);
-    if (!b.has(path)) changes.push({ path, kind: "removed", before: a.get(path), unit });
-    else if (!a.has(path)) changes.push({ path, kind: "added", after: b.get(path), unit });
-    else if (!same(a.get(path), b.get(path))) changes.push({ path, kind: "changed", before: a.get(path), after: b.get(path), unit });
+    const label = NUMBER_INPUTS.get(path.replace(/\.\d+(?=\.|$)/g, "[]"))?.label;
+    const named = { path, unit, ...(label ? { label } : {}) };
+    if (!b.has(path)) changes.push({ ...named, kind: "removed", before: a.get(path) });
+    else if (!a.has(path)) changes.push({ ...named, kind: "added", after: b.get(path) });
+    else if (!same(a.get(path), b.get(path))) changes.push({ ...named, kind: "changed", before: a.get(path), after: b.get(path) });
   }
   return { changes: changes.slice(0, MAX_LISTED), more: Math.max(0, changes.length - MAX_LISTED) };
 }
