@@ -13,6 +13,7 @@
  * μ and σ are taken as known: their own uncertainty from few tests is what the tolerance bound of
  * the evidence covers, not this view.
  */
+import type { CheckResult } from "./result.ts";
 import { normalCdf, normalQuantile } from "./special.ts";
 import { fmt, step, type Step } from "./step.ts";
 
@@ -26,25 +27,8 @@ export interface FleetInput {
   testLives_cycles: number[];
 }
 
-export interface FleetResult {
-  size: number;
-  basis: "test evidence" | "computed life";
-  logMean: number;
-  logStdDev: number;
-  median_cycles: number;
-  /** Median life of the weakest of the fleet (first order statistic). */
-  firstFailure_cycles: number;
-  probabilityAnyFailsBeforeDesignLife: number;
-  percentile5_cycles: number;
-  /** Probability that one item fails before the design life. */
-  probabilityOneFailsBeforeDesignLife: number;
-  /** Densities per decade of life (per unit of log10 N) of one item's life and of the fleet's first failure, for the plot. */
-  density: { life_cycles: number; one: number; first: number }[];
-  /** What the test evidence can and cannot show about the fleet, in plain words. */
-  statement: string;
-  designLife_cycles: number;
-  testLives_cycles: number[];
-}
+/** The fleet view as the result carries it (its definition: src/schema/result.ts). */
+export type FleetResult = NonNullable<CheckResult["fleet"]>;
 
 const ORDER =
   "First order statistic of n independent lognormal lives (order statistics, e.g. David & Nagaraja, Order Statistics; from memory)";

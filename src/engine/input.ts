@@ -51,14 +51,14 @@ export interface ResolvedStatic {
   minimumGauge_mm: number;
   limitFactor: number;
   ultimateFactor: number;
-  defaults: Partial<Record<string, string>>;
+  defaults: Record<string, string>;
 }
 
 export type ResolvedFatigue = Omit<ParsedCheck["fatigue"], "curve"> & {
   curve: FatigueCurve;
   temperature_C: number;
   roughnessRz_um: number;
-  defaults: Partial<Record<string, string>>;
+  defaults: Record<string, string>;
 };
 
 /** The parsed document (defaults filled in) is kept beside the resolved values: it is what gets fingerprinted. */
@@ -75,7 +75,7 @@ function resolveStatic(parsed: ParsedCheck): ResolvedStatic {
   const service: Service = parsed.shell.service;
   const sd = SERVICE_DEFAULTS[service];
   const given = parsed.static;
-  const defaults: Partial<Record<string, string>> = {};
+  const defaults: Record<string, string> = {};
   const pick = <T>(key: string, value: T | undefined, d: { value: T; why: string }): T => {
     if (value !== undefined) return value;
     defaults[key] = d.why;
@@ -108,7 +108,7 @@ function resolveStatic(parsed: ParsedCheck): ResolvedStatic {
 function resolveFatigue(parsed: ParsedCheck, family: MaterialFamily, errors: FieldError[]): ResolvedFatigue {
   const f = parsed.fatigue;
   const sd = SERVICE_DEFAULTS[parsed.shell.service];
-  const defaults: Partial<Record<string, string>> = {};
+  const defaults: Record<string, string> = {};
   const steel = STEEL_FAMILIES.includes(family);
   let curve: FatigueCurve;
   if (f.curve !== undefined) curve = f.curve;

@@ -1,26 +1,15 @@
-import type { Step } from "./step.ts";
-
 /**
  * @module engine/sections
  * The sections of the calculation, in the order the sheet prints them and a checker redoes
  * them: load, membrane stresses, static strength, the opening, the notch, the curve, fatigue,
- * crack growth, test evidence, the fleet view, the solution. The engine decides which section each step belongs
- * to, so no face keeps its own list; a step that is worked early (the Marin factors of the
- * fatigue curve, the coupon fit) still prints under its own heading, after the membrane stresses.
+ * crack growth, test evidence, the fleet view, the solution. The headings are the format's
+ * (src/schema/result.ts); the engine decides which section each step belongs to, so no face keeps
+ * its own list; a step that is worked early (the Marin factors of the fatigue curve, the coupon
+ * fit) still prints under its own heading, after the membrane stresses.
  */
-export const SECTIONS = [
-  "Load",
-  "Membrane stresses",
-  "Static strength",
-  "Stress concentration at the opening",
-  "Local stresses at the notch",
-  "S-N curve from the coupons",
-  "Fatigue life",
-  "Crack growth",
-  "Test evidence",
-  "Fleet view",
-  "Solution",
-] as const;
+import { SECTION_HEADINGS as SECTIONS } from "../schema/result.ts";
+import type { CheckResult } from "./result.ts";
+import type { Step } from "./step.ts";
 
 export type SectionHeading = (typeof SECTIONS)[number];
 
@@ -65,10 +54,7 @@ const HEADING_OF: Record<string, SectionHeading> = {
 };
 
 /** One section of the calculation: its heading and how many of the (reordered) steps it holds. */
-export interface Section {
-  heading: SectionHeading;
-  steps: number;
-}
+export type Section = CheckResult["sections"][number];
 
 /** The steps in sheet order (stable within a section) and the sections they fall into. */
 export function inSheetOrder(steps: readonly Step[]): { steps: Step[]; sections: Section[] } {

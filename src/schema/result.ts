@@ -9,6 +9,7 @@
  */
 import { z } from "zod";
 import { MEAN_STRESS_CRITERIA } from "./check.ts";
+import { FATIGUE_CURVES, SERVICES, STATIC_BASES, WELD_DETAILS } from "./service.ts";
 
 const num = z.number();
 const nullableNum = z.number().nullable();
@@ -29,7 +30,25 @@ export const stepSchema = z.strictObject({
   source: z.string(),
 });
 
-export const sectionSchema = z.strictObject({ heading: z.string(), steps: z.number().int().nonnegative() });
+/**
+ * The sections of the calculation, in the order the sheet prints them and a checker redoes them;
+ * the engine decides which section each step belongs to (src/engine/sections.ts).
+ */
+export const SECTION_HEADINGS = [
+  "Load",
+  "Membrane stresses",
+  "Static strength",
+  "Stress concentration at the opening",
+  "Local stresses at the notch",
+  "S-N curve from the coupons",
+  "Fatigue life",
+  "Crack growth",
+  "Test evidence",
+  "Fleet view",
+  "Solution",
+] as const;
+
+export const sectionSchema = z.strictObject({ heading: z.enum(SECTION_HEADINGS), steps: z.number().int().nonnegative() });
 
 export const VERDICTS = ["pass", "fail", "refer"] as const;
 /** "refer": outside what this screening can judge, it needs an analysis beyond it. */
@@ -191,7 +210,37 @@ export const resultSchema = z.strictObject({
     radialMax_MPa: num,
     vonMisesMax_MPa: num,
   }),
-  static: z.strictObject({ yieldFactor: num, allowable_MPa: num, vonMisesMax_MPa: num, margin: num, pass: z.boolean() }),
+  static: z.strictObject({
+    basis: z.enum(STATIC_BASES),
+    service: z.enum(SERVICES),
+    yieldFactor: num,
+    /** f (EN 13445-3), S (ASME VIII-1), Sy (aircraft, at limit) or Sy/n (yield). */
+    allowable_MPa: num,
+    vonMisesMax_MPa: num,
+    /** Capacity over demand less 1: the wall over the formula's wall for the code bases, stresses otherwise. */
+    margin: num,
+    pass: z.boolean(),
+    /** Why the static basis cannot judge the shell (refer), or null. */
+    refer: z.string().nullable(),
+    /** Which check of the basis governs, in words. */
+    governs: z.string(),
+    jointEfficiency: num,
+    corrosionAllowance_mm: num,
+    thicknessTolerance_mm: num,
+    minimumGauge_mm: num,
+    /** Ordered wall less corrosion allowance and minus tolerance: the wall every stress is worked on. */
+    analysisThickness_mm: num,
+    /** The code formula's wall without allowances (code bases only). */
+    formulaThickness_mm: nullableNum,
+    /** The ordered wall the static basis alone asks for, allowances and gauge included. */
+    requiredThickness_mm: nullableNum,
+    limitFactor: nullableNum,
+    ultimateFactor: nullableNum,
+    /** The plain statement of what the basis's check is and is not. */
+    statement: z.string().nullable(),
+    /** Keys filled by a default of the service or basis, with the reason. */
+    defaults: z.record(z.string(), z.string()),
+  }),
   notch: z.strictObject({
     kt: num,
     ktGoverns: z.string(),
@@ -222,7 +271,7 @@ export const resultSchema = z.strictObject({
   }),
   fatigue: z.strictObject({
     criterion: z.enum(MEAN_STRESS_CRITERIA),
-    curve: z.enum(["basquin", "welded"]),
+    curve: z.enum(FATIGUE_CURVES),
     amplitude_MPa: num,
     mean_MPa: num,
     equivalentAmplitude_MPa: nullableNum,
@@ -238,6 +287,22 @@ export const resultSchema = z.strictObject({
     curveUsed: z.strictObject({ fatigueStrengthCoefficient_MPa: num, fatigueStrengthExponent: num, enduranceLimit_MPa: nullableNum }),
     criteria: z.array(criterionRowSchema),
     pass: z.boolean(),
+    /** The welded class or detail category in use (MPa at 2·10⁶ cycles), or null. */
+    detailCategory_MPa: nullableNum,
+    weldDetail: z.enum(WELD_DETAILS).nullable(),
+    temperature_C: num,
+    /** Keys filled by a default of the service, with the reason. */
+    defaults: z.record(z.string(), z.string()),
+    /** The largest cycle on a welded class curve (range after the route's corrections) for the S-N plot; null otherwise. */
+    weldedPoint: z
+      .strictObject({
+        curveName: z.string(),
+        class_MPa: num,
+        range_MPa: num,
+        life_cycles: nullableNum,
+        variableAmplitude: z.boolean(),
+      })
+      .nullable(),
   }),
   crack: crackSchema.optional(),
   fleet: fleetSchema.optional(),

@@ -22,7 +22,7 @@ describe.skipIf(!PG_URL)(`two servers on one PostgreSQL database${PG_URL ? "" : 
     const keyPath = join(tempDir(), "records.signing-key.pem");
     const setup: OpenedStore = await openStore({ databaseUrl: PG_URL, pgSchema: schema, keyPath, passphraseCost: FAST_SCRYPT });
     closeFirst.push(setup);
-    const people = await registerPeople(setup);
+    await registerPeople(setup);
     // An invented demo check, each revision a thicker skin.
     const demo = DEMOS[0].document;
     const input = (t: number) => ({ ...demo, calcNumber: "HW-TWO-1", shell: { ...demo.shell, thickness_mm: t } });

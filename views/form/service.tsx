@@ -46,33 +46,32 @@ export function ServiceSection({ s }: { s: FormState }) {
         />
       </div>
       <div class="grid">
-        <>
-          <NumberInput
-            s={s}
-            name="static.jointEfficiency"
-            label={
-              basis === "en13445-3"
-                ? "Weld joint coefficient z"
-                : basis === "asme-viii-1"
-                  ? "Joint efficiency E"
-                  : "Joint coefficient z or E (vessel bases only)"
-            }
-            placeholder={code ? num(BASIS_DEFAULTS.jointEfficiency.value) : "1"}
-            hint={`Default ${BASIS_DEFAULTS.jointEfficiency.value}: no volumetric testing (conservative).`}
-          />
-          <NumberInput
-            s={s}
-            name="static.allowableStress"
-            label={basis === "asme-viii-1" ? "Allowable stress S from the code (optional)" : "Design stress f from the code (optional)"}
-            hint={
-              basis === "en13445-3"
-                ? "Blank: f = min(Rp0.2/1.5, Rm/2.4)."
-                : basis === "asme-viii-1"
-                  ? "Blank: S = min(Su/3.5, 2Sy/3) at room temperature."
-                  : "Vessel bases only."
-            }
-          />
-        </>
+        <NumberInput
+          s={s}
+          name="static.jointEfficiency"
+          label={
+            basis === "en13445-3"
+              ? "Weld joint coefficient z"
+              : basis === "asme-viii-1"
+                ? "Joint efficiency E"
+                : "Joint coefficient z or E (vessel bases only)"
+          }
+          placeholder={code ? num(BASIS_DEFAULTS.jointEfficiency.value) : "1"}
+          hint={`Default ${BASIS_DEFAULTS.jointEfficiency.value}: no volumetric testing (conservative).`}
+        />
+        <NumberInput
+          s={s}
+          name="static.allowableStress"
+          label={basis === "asme-viii-1" ? "Allowable stress S from the code (optional)" : "Design stress f from the code (optional)"}
+          hint={
+            basis === "en13445-3"
+              ? "Blank: f = min(Rp0.2/1.5, Rm/2.4)."
+              : basis === "asme-viii-1"
+                ? "Blank: S = min(Su/3.5, 2Sy/3) at room temperature."
+                : "Vessel bases only."
+          }
+        />
+
         <NumberInput
           s={s}
           name="static.limitFactor"

@@ -1,4 +1,5 @@
 import type { ParsedCheck } from "../../schema/check.ts";
+import type { CheckResult } from "../result.ts";
 import type { Concentration } from "../concentration.ts";
 import { InputError } from "../errors.ts";
 import { fmt, step, type Step } from "../step.ts";
@@ -14,14 +15,8 @@ export interface OpeningExtras {
   picture?: OpeningPictureResult;
 }
 
-/** The numbers the opening's picture draws, at the biaxial ratio of maximum pressure (per unit hoop stress). */
-export interface OpeningPictureResult {
-  /** Edge points [hoop_mm, axial_mm, arc length mm, edge stress per unit σθ]. */
-  edge: [number, number, number, number][];
-  governing: { hoop_mm: number; axial_mm: number; kt: number; at: "opening" | "fastener"; index?: number };
-  fasteners: { hoop_mm: number; axial_mm: number; radius_mm: number; kt: number; solvedWithOpening: boolean }[];
-  curvature: { rho: number; beta: number; limit: number; within: boolean } | null;
-}
+/** The numbers the opening's picture draws (its definition: src/schema/result.ts). */
+export type OpeningPictureResult = NonNullable<CheckResult["notch"]["opening"]>;
 
 export type ExtendedConcentration = Concentration & Partial<OpeningExtras>;
 
