@@ -87,7 +87,7 @@ export function historyPlot(data: HistoryPlotData, opts: HistoryPlotOptions = {}
   const parts: string[] = [];
   let pen = "M";
   for (let c = 0; c < cols; c++) {
-    if (!(min[c] === min[c])) {
+    if (Number.isNaN(min[c])) {
       pen = "M";
       continue;
     }

@@ -9,13 +9,21 @@ export function previewBench(points = 10_000_000) {
   const values = new Float64Array(points);
   for (let i = 0; i < points; i++) values[i] = 0.055 * Math.abs(Math.sin(i / 500)) + 0.0008 * Math.sin(i / 7);
   let sink = 0;
-  const sum_ms = medianMs(() => {
-    let s = 0;
-    for (let i = 0; i < values.length; i++) s += values[i];
-    sink += s;
-  }, 7, 2);
-  const draw_ms = medianMs(() => {
-    sink += historyPlot({ values, unit: "MPa" }).length;
-  }, 7, 2);
+  const sum_ms = medianMs(
+    () => {
+      let s = 0;
+      for (let i = 0; i < values.length; i++) s += values[i];
+      sink += s;
+    },
+    7,
+    2,
+  );
+  const draw_ms = medianMs(
+    () => {
+      sink += historyPlot({ values, unit: "MPa" }).length;
+    },
+    7,
+    2,
+  );
   return { points, draw_ms, sum_ms, ratio: draw_ms / sum_ms, sink };
 }

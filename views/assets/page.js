@@ -38,7 +38,7 @@ function logProgress() {
   const box = document.getElementById("log-progress");
   const file = document.getElementById("f-log-file");
   const mode = document.querySelector('input[name="pressure.mode"]:checked');
-  if (!box || !file || !file.files || file.files.length === 0 || (mode && mode.value !== "log")) return undefined;
+  if (!box || !file?.files || file.files.length === 0 || (mode && mode.value !== "log")) return undefined;
   return { box, bar: box.querySelector("progress"), text: box.querySelector(".log-progress-text") };
 }
 const megabytes = (n) => (n / 1048576).toFixed(1);
