@@ -1,3 +1,4 @@
+import { phraseText } from "../src/present/numbers.ts";
 import { VERDICT_WORDS } from "../src/engine/index.ts";
 import { CAUTION_SHORT } from "./cautions.tsx";
 import { isoDate } from "./format.ts";
@@ -51,7 +52,7 @@ export function Front({ m }: { m: SheetModel }) {
       <div class="outcome">
         <div class={`verdict ${r.verdict}`}>Screening outcome: {VERDICT_WORDS[r.verdict].outcome}</div>
         <div class="governs">
-          <b>Governing check:</b> {typeset(r.governing.text)}.
+          <b>Governing check:</b> {typeset(phraseText(r.governing.parts, m.units))}.
         </div>
         {r.warnings.length > 0 ? (
           <div class="governs">

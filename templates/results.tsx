@@ -1,3 +1,5 @@
+import { phraseText } from "../src/present/numbers.ts";
+import type { Units } from "../src/schema/units.ts";
 import { VERDICT_WORDS, type CheckResult, type VerdictRow } from "../src/engine/index.ts";
 import { capitalise, life, margin, sig } from "./format.ts";
 import { typeset } from "./math.tsx";
@@ -18,7 +20,7 @@ export function Results({ m, num }: { m: SheetModel; num: number }) {
         <h3>
           {num}.1 Verdict: {VERDICT_WORDS[r.verdict].meaning}
         </h3>
-        <VerdictTable r={r} />
+        <VerdictTable r={r} units={m.units} />
       </div>
       <PrincipalResults m={m} num={`${num}.2`} />
       {r.fatigue.criteria.length > 0 ? <CriteriaTable m={m} num={`${num}.3`} /> : <NoCriteria m={m} num={`${num}.3`} />}
@@ -32,7 +34,7 @@ function governs(r: CheckResult, row: VerdictRow): boolean {
   return r.governing.rowId === row.id;
 }
 
-export function VerdictTable({ r }: { r: CheckResult }) {
+export function VerdictTable({ r, units }: { r: CheckResult; units: Units }) {
   return (
     <table class="verdict">
       <colgroup>
@@ -58,7 +60,7 @@ export function VerdictTable({ r }: { r: CheckResult }) {
                 {typeset(row.title)}
                 {gov ? <span class="flag">GOVERNS</span> : null}
               </td>
-              <td>{typeset(row.detail)}</td>
+              <td>{typeset(phraseText(row.detailParts, units))}</td>
               <td class="n">{margin(row.margin)}</td>
               <td class={`status-${row.status}`}>{STATUS_WORDS[row.status]}</td>
             </tr>

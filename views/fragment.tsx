@@ -21,7 +21,7 @@ export function Fragment({ s, o, inlinePlots }: { s: FormState; o: Outcome; inli
       {v ? <ResultTop v={v} canUsePressure={o.canUsePressure} /> : null}
       {v ? (
         <div id="verdict" hx-swap-oob="innerHTML">
-          <VerdictSummary result={v.result} />
+          <VerdictSummary result={v.result} units={v.units} />
         </div>
       ) : null}
       {v ? (

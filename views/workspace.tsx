@@ -36,7 +36,7 @@ export function Workspace({ s, o }: { s: FormState; o: Outcome }) {
             <StatusNote errors={o.errorCount} general={o.general} hadResult={false} beside={s.errors} />
           </div>
           <div id="verdict" aria-live="polite" aria-atomic="true">
-            {o.view ? <VerdictSummary result={o.view.result} /> : null}
+            {o.view ? <VerdictSummary result={o.view.result} units={o.view.units} /> : null}
           </div>
           <CautionStrip />
           <OutcomeActions s={s} />

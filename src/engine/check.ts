@@ -184,7 +184,7 @@ export function runCheck(input: ResolvedCheck): CheckResult {
     verdict: "pass",
     verdictMeaning: "",
     governs: "",
-    governing: { rowId: "static", text: "" },
+    governing: { rowId: "static", text: "", parts: [] },
     workedAt: workedAt(input, t),
     load: { pressureMax_MPa: load.max_MPa, pressureMin_MPa: load.min_MPa, source: load.source },
     membrane: {

@@ -1,4 +1,5 @@
 import type { CheckResult, Verdict, VerdictRow } from "./result.ts";
+import { joined, MPa, mm, n, type Phrase, pressure, say } from "./phrase.ts";
 import { fmt } from "./step.ts";
 
 /**
@@ -22,6 +23,11 @@ export const VERDICT_WORDS: Record<Verdict, { short: string; badge: string; outc
 
 export const EXTERNAL_PRESSURE_WORDS = "needs a buckling check to the governing code";
 
+/** A row from its phrase: the SI sentence and the same as words and amounts. */
+function row(id: VerdictRow["id"], title: string, status: VerdictRow["status"], p: Phrase, margin: number | null): VerdictRow {
+  return { id, title, status, detail: p.text, detailParts: p.parts, margin };
+}
+
 export function verdictTable(r: CheckResult): {
   rows: VerdictRow[];
   verdict: Verdict;
@@ -34,13 +40,15 @@ export function verdictTable(r: CheckResult): {
   if (s.minimumGauge_mm > 0) {
     const floor = s.minimumGauge_mm + s.corrosionAllowance_mm;
     const t = s.analysisThickness_mm + s.corrosionAllowance_mm + s.thicknessTolerance_mm;
-    rows.push({
-      id: "minimum-gauge",
-      title: "Minimum gauge",
-      status: t >= floor ? "pass" : "fail",
-      detail: `wall ${fmt(t)} mm against the minimum gauge ${fmt(s.minimumGauge_mm)} mm plus ${fmt(s.corrosionAllowance_mm)} mm corrosion allowance`,
-      margin: t / floor - 1,
-    });
+    rows.push(
+      row(
+        "minimum-gauge",
+        "Minimum gauge",
+        t >= floor ? "pass" : "fail",
+        say`wall ${mm(t)} against the minimum gauge ${mm(s.minimumGauge_mm)} plus ${mm(s.corrosionAllowance_mm)} corrosion allowance`,
+        t / floor - 1,
+      ),
+    );
   }
   const f = r.fatigue;
   const unit = f.lifeCountedIn;
@@ -50,64 +58,82 @@ export function verdictTable(r: CheckResult): {
     se !== null && f.equivalentAmplitude_MPa !== null && f.equivalentAmplitude_MPa > 0
       ? (f.modifyingFactor * se) / f.equivalentAmplitude_MPa - 1
       : null;
-  rows.push({
-    id: "fatigue",
-    title: `Fatigue life (${curveWords(f)}, scatter factor ${fmt(f.scatterFactor)})`,
-    status: f.pass ? "pass" : "fail",
-    detail:
+  const onStress =
+    unlimitedReserve === null
+      ? say``
+      : say`: the equivalent amplitude ${MPa(f.equivalentAmplitude_MPa ?? 0)} is below the corrected endurance limit ${MPa(f.modifyingFactor * (se ?? 0))}, and the reserve is on stress`;
+  rows.push(
+    row(
+      "fatigue",
+      `Fatigue life (${curveWords(f)}, scatter factor ${fmt(f.scatterFactor)})`,
+      f.pass ? "pass" : "fail",
       f.life_cycles === null
-        ? `unlimited life against a design life of ${fmt(f.designLife_cycles)} ${unit}${unlimitedReserve === null ? "" : `: the equivalent amplitude ${fmt(f.equivalentAmplitude_MPa ?? 0)} MPa is below the corrected endurance limit ${fmt(f.modifyingFactor * (f.curveUsed.enduranceLimit_MPa ?? 0))} MPa, and the reserve is on stress`}`
+        ? joined([say`unlimited life against a design life of ${n(f.designLife_cycles)} ${unit}`, onStress], "")
         : f.life_cycles === 0
-          ? "no life: the mean stress is beyond the criterion's range"
-          : `allowable ${fmt(f.allowableLife_cycles ?? 0)} ${unit} against a design life of ${fmt(f.designLife_cycles)} ${unit} (damage ${fmt(f.damage ?? Infinity, 3)})`,
-    margin: f.life_cycles === null ? unlimitedReserve : f.damage !== null && f.damage > 0 ? 1 / f.damage - 1 : -1,
-  });
+          ? say`no life: the mean stress is beyond the criterion's range`
+          : say`allowable ${n(f.allowableLife_cycles ?? 0)} ${unit} against a design life of ${n(f.designLife_cycles)} ${unit} (damage ${n(f.damage ?? Number.POSITIVE_INFINITY, 3)})`,
+      f.life_cycles === null ? unlimitedReserve : f.damage !== null && f.damage > 0 ? 1 / f.damage - 1 : -1,
+    ),
+  );
   if (r.crack) rows.push(...crackRows(r));
   if (r.evidence) {
     const ev = r.evidence;
-    rows.push({
-      id: "evidence",
-      title: "Test evidence (one-sided lower tolerance bound)",
-      status: ev.supportsDesignLife === null ? "info" : ev.supportsDesignLife ? "pass" : "fail",
-      detail:
+    rows.push(
+      row(
+        "evidence",
+        "Test evidence (one-sided lower tolerance bound)",
+        ev.supportsDesignLife === null ? "info" : ev.supportsDesignLife ? "pass" : "fail",
         ev.lowerBound_cycles === null
-          ? `no bound: ${ev.n} test life without an assumed scatter cannot bound a fleet's life`
-          : `lower bound ${fmt(ev.lowerBound_cycles)} cycles against a design life of ${fmt(ev.designLife_cycles)} cycles${f.lifeCountedIn === "passes" ? ` (${fmt(f.designLife_cycles)} passes)` : ""}`,
-      margin: ev.lowerBound_cycles === null ? null : ev.lowerBound_cycles / ev.designLife_cycles - 1,
-    });
+          ? say`no bound: ${n(ev.n)} test life without an assumed scatter cannot bound a fleet's life`
+          : joined(
+              [
+                say`lower bound ${n(ev.lowerBound_cycles)} cycles against a design life of ${n(ev.designLife_cycles)} cycles`,
+                f.lifeCountedIn === "passes" ? say` (${n(f.designLife_cycles)} passes)` : say``,
+              ],
+              "",
+            ),
+        ev.lowerBound_cycles === null ? null : ev.lowerBound_cycles / ev.designLife_cycles - 1,
+      ),
+    );
   }
   if (r.fleet) {
     const fl = r.fleet;
-    rows.push({
-      id: "fleet",
-      title: `Fleet of ${fmt(fl.size)} (${fl.basis === "test evidence" ? "from the test evidence" : "from the computed life, assumed scatter"})`,
-      status: "info",
-      detail: `the weakest of ${fmt(fl.size)} is expected to fail at about ${fmt(fl.firstFailure_cycles)} cycles; the chance that one fails before the design life of ${fmt(f.designLife_cycles)} cycles is ${fmt(fl.probabilityAnyFailsBeforeDesignLife, 2)}; 95 % of items exceed ${fmt(fl.percentile5_cycles)} cycles`,
-      margin: null,
-    });
+    rows.push(
+      row(
+        "fleet",
+        `Fleet of ${fmt(fl.size)} (${fl.basis === "test evidence" ? "from the test evidence" : "from the computed life, assumed scatter"})`,
+        "info",
+        say`the weakest of ${n(fl.size)} is expected to fail at about ${n(fl.firstFailure_cycles)} cycles; the chance that one fails before the design life of ${n(f.designLife_cycles)} cycles is ${n(fl.probabilityAnyFailsBeforeDesignLife, 2)}; 95 % of items exceed ${n(fl.percentile5_cycles)} cycles`,
+        null,
+      ),
+    );
   }
-  const n = r.notch;
-  if (n.refer?.length || n.opening?.curvature) {
-    const c = n.opening?.curvature;
-    rows.push({
-      id: "opening",
-      title: "Opening within the membrane screening's range (curvature, reinforcement)",
-      status: n.refer?.length ? "refer" : "pass",
-      detail: n.refer?.length
-        ? n.refer.join("; ")
-        : `curvature parameter β = ${fmt(c?.beta ?? 0, 3)} within the small-curvature range (β ≤ ${fmt(c?.limit ?? 0)})`,
-      // The reserve on the curvature range, limit ÷ β − 1 (negative when β is beyond it).
-      margin: c && c.beta > 0 ? c.limit / c.beta - 1 : null,
-    });
+  const notch = r.notch;
+  if (notch.refer?.length || notch.opening?.curvature) {
+    const c = notch.opening?.curvature;
+    rows.push(
+      row(
+        "opening",
+        "Opening within the membrane screening's range (curvature, reinforcement)",
+        notch.refer?.length ? "refer" : "pass",
+        notch.refer?.length
+          ? say`${notch.refer.join("; ")}`
+          : say`curvature parameter β = ${n(c?.beta ?? 0, 3)} within the small-curvature range (β ≤ ${n(c?.limit ?? 0)})`,
+        // The reserve on the curvature range, limit ÷ β − 1 (negative when β is beyond it).
+        c && c.beta > 0 ? c.limit / c.beta - 1 : null,
+      ),
+    );
   }
   if (r.load.pressureMin_MPa < 0) {
-    rows.push({
-      id: "external-pressure",
-      title: "External pressure (buckling)",
-      status: "refer",
-      detail: `the differential pressure falls to ${fmt(r.load.pressureMin_MPa)} MPa (outside above inside): the shell ${EXTERNAL_PRESSURE_WORDS}, which this tool does not make`,
-      margin: null,
-    });
+    rows.push(
+      row(
+        "external-pressure",
+        "External pressure (buckling)",
+        "refer",
+        say`the differential pressure falls to ${pressure(r.load.pressureMin_MPa)} (outside above inside): the shell ${EXTERNAL_PRESSURE_WORDS}, which this tool does not make`,
+        null,
+      ),
+    );
   }
   return decide(rows);
 }
@@ -124,7 +150,7 @@ export function decide(rows: VerdictRow[]): { rows: VerdictRow[]; verdict: Verdi
   const gov = failing[0] ?? referring[0] ?? least ?? rows[0];
   const verdict: Verdict = failing.length ? "fail" : referring.length ? "refer" : "pass";
   const text = `${gov.title}: ${gov.detail}`;
-  return { rows, verdict, governs: text, governing: { rowId: gov.id, text } };
+  return { rows, verdict, governs: text, governing: { rowId: gov.id, text, parts: [`${gov.title}: `, ...gov.detailParts] } };
 }
 
 /**
@@ -147,49 +173,90 @@ function crackRows(r: CheckResult): VerdictRow[] {
   const lbb = c.leakBeforeBreak;
   const leakDecides = c.leakBeforeBreakDecides && lbb !== null;
   const which = c.orientation === "both" ? ` (${c.governingOrientation} crack governs)` : "";
-  const critical = `critical ${fmt(c.critical_mm)} mm, set by ${c.criticalBy}`;
+  const critical = say`critical ${mm(c.critical_mm)}, set by ${c.criticalBy}`;
+  const th = n(threshold ?? 0);
   let status: VerdictRow["status"];
-  let detail: string;
+  let detail: Phrase;
   let margin: number | null = null;
   if (c.cycles === null || threshold === null) {
     status = "pass";
-    detail = `the pressure does not cycle, so the crack does not grow (${critical})`;
+    detail = joined([say`the pressure does not cycle, so the crack does not grow (`, critical, say`)`], "");
   } else if (threshold >= life) {
     status = "pass";
-    detail = `the threshold of ${fmt(threshold)} ${unit} covers the design life of ${fmt(life)} ${unit}: no inspection needed within it (${critical})`;
+    detail = joined(
+      [
+        say`the threshold of ${th} ${unit} covers the design life of ${n(life)} ${unit}: no inspection needed within it (`,
+        critical,
+        say`)`,
+      ],
+      "",
+    );
     margin = threshold / life - 1;
   } else if (leakDecides && lbb.leakBeforeBreak) {
     status = "pass";
-    detail = `the threshold of ${fmt(threshold)} ${unit} is short of the design life, but the shell leaks before it breaks, which decides as asked (${critical})`;
+    detail = joined(
+      [
+        say`the threshold of ${th} ${unit} is short of the design life, but the shell leaks before it breaks, which decides as asked (`,
+        critical,
+        say`)`,
+      ],
+      "",
+    );
   } else if (repeat === null) {
     status = "fail";
-    detail = `the threshold of ${fmt(threshold)} ${unit} is short of the design life of ${fmt(life)} ${unit}, and without a detectable crack size no repeat inspection interval can be set (${critical})`;
+    detail = joined(
+      [
+        say`the threshold of ${th} ${unit} is short of the design life of ${n(life)} ${unit}, and without a detectable crack size no repeat inspection interval can be set (`,
+        critical,
+        say`)`,
+      ],
+      "",
+    );
     margin = threshold / life - 1;
   } else if (repeat <= 0) {
     status = "fail";
-    detail = `the threshold of ${fmt(threshold)} ${unit} is short of the design life, and the detectable size ${fmt(c.detectable_mm ?? 0)} mm is already critical: no inspection can find the crack in time (${critical})`;
+    detail = joined(
+      [
+        say`the threshold of ${th} ${unit} is short of the design life, and the detectable size ${mm(c.detectable_mm ?? 0)} is already critical: no inspection can find the crack in time (`,
+        critical,
+        say`)`,
+      ],
+      "",
+    );
     margin = threshold / life - 1;
   } else if (minimum !== null && repeatCycles !== null && repeatCycles < minimum) {
     status = "fail";
-    detail = `the threshold of ${fmt(threshold)} ${unit} is short of the design life, and the repeat interval of ${fmt(repeatCycles)} cycles is shorter than the practical minimum of ${fmt(minimum)} cycles (${critical})`;
+    detail = joined(
+      [
+        say`the threshold of ${th} ${unit} is short of the design life, and the repeat interval of ${n(repeatCycles)} cycles is shorter than the practical minimum of ${n(minimum)} cycles (`,
+        critical,
+        say`)`,
+      ],
+      "",
+    );
     margin = repeatCycles / minimum - 1;
   } else {
     status = "pass";
-    detail = `inspect from ${fmt(threshold)} ${unit} and then every ${fmt(repeat)} ${unit} (detectable ${fmt(c.detectable_mm ?? 0)} mm, ${critical})`;
+    detail = joined(
+      [say`inspect from ${th} ${unit} and then every ${n(repeat)} ${unit} (detectable ${mm(c.detectable_mm ?? 0)}, `, critical, say`)`],
+      "",
+    );
     margin = minimum !== null && repeatCycles !== null ? repeatCycles / minimum - 1 : null;
   }
-  rows.push({ id: "crack", title: `Damage tolerance: crack growth and inspections${which}`, status, detail, margin });
+  rows.push(row("crack", `Damage tolerance: crack growth and inspections${which}`, status, detail, margin));
   if (lbb) {
     const words = lbb.leakBeforeBreak
-      ? `yes: a through-wall crack of half-length ${fmt(lbb.throughWallHalfLength_mm)} mm is below the critical half-length ${fmt(lbb.criticalHalfLength_mm)} mm, so the shell should leak before it breaks`
-      : `no: a through-wall crack of half-length ${fmt(lbb.throughWallHalfLength_mm)} mm exceeds the critical half-length ${fmt(lbb.criticalHalfLength_mm)} mm, so the shell may break without warning`;
-    rows.push({
-      id: "leak-before-break",
-      title: `Leak before break (through-wall crack of length 2t)${c.leakBeforeBreakDecides ? ", asked to decide" : ""}`,
-      status: c.leakBeforeBreakDecides ? (lbb.leakBeforeBreak ? "pass" : "fail") : "info",
-      detail: words,
-      margin: lbb.criticalHalfLength_mm / lbb.throughWallHalfLength_mm - 1,
-    });
+      ? say`yes: a through-wall crack of half-length ${mm(lbb.throughWallHalfLength_mm)} is below the critical half-length ${mm(lbb.criticalHalfLength_mm)}, so the shell should leak before it breaks`
+      : say`no: a through-wall crack of half-length ${mm(lbb.throughWallHalfLength_mm)} exceeds the critical half-length ${mm(lbb.criticalHalfLength_mm)}, so the shell may break without warning`;
+    rows.push(
+      row(
+        "leak-before-break",
+        `Leak before break (through-wall crack of length 2t)${c.leakBeforeBreakDecides ? ", asked to decide" : ""}`,
+        c.leakBeforeBreakDecides ? (lbb.leakBeforeBreak ? "pass" : "fail") : "info",
+        words,
+        lbb.criticalHalfLength_mm / lbb.throughWallHalfLength_mm - 1,
+      ),
+    );
   }
   return rows;
 }
@@ -205,17 +272,17 @@ function staticRow(r: CheckResult): VerdictRow {
   const s = r.static;
   const title = BASIS_TITLE[s.basis];
   const status = s.refer ? "refer" : s.margin >= 0 ? "pass" : "fail";
-  let detail: string;
+  let detail: Phrase;
   if (s.basis === "en13445-3" || s.basis === "asme-viii-1") {
     const sym = s.basis === "en13445-3" ? "f" : "S";
-    detail = `analysis wall ${fmt(s.analysisThickness_mm)} mm against ${fmt(s.formulaThickness_mm ?? Infinity)} mm from the formula (${s.governs}, ${sym} = ${fmt(s.allowable_MPa)} MPa, ${s.basis === "en13445-3" ? "z" : "E"} = ${fmt(s.jointEfficiency)}); ordered wall needed ${fmt(s.requiredThickness_mm ?? Infinity)} mm`;
+    detail = say`analysis wall ${mm(s.analysisThickness_mm)} against ${mm(s.formulaThickness_mm ?? Number.POSITIVE_INFINITY)} from the formula (${s.governs}, ${sym} = ${MPa(s.allowable_MPa)}, ${s.basis === "en13445-3" ? "z" : "E"} = ${n(s.jointEfficiency)}); ordered wall needed ${mm(s.requiredThickness_mm ?? Number.POSITIVE_INFINITY)}`;
   } else if (s.basis === "aircraft") {
-    detail = `${s.governs}: factors ${fmt(s.limitFactor ?? 0)} (limit) and ${fmt(s.ultimateFactor ?? 0)} (ultimate) on the differential`;
+    detail = say`${s.governs}: factors ${n(s.limitFactor ?? 0)} (limit) and ${n(s.ultimateFactor ?? 0)} (ultimate) on the differential`;
   } else {
-    detail = `σvm = ${fmt(s.vonMisesMax_MPa)} MPa against Sy/${fmt(s.yieldFactor)} = ${fmt(s.allowable_MPa)} MPa`;
+    detail = say`σvm = ${MPa(s.vonMisesMax_MPa)} against Sy/${n(s.yieldFactor)} = ${MPa(s.allowable_MPa)}`;
   }
-  if (s.refer) detail = `${s.refer}; ${detail}`;
-  return { id: "static", title, status, detail, margin: s.margin };
+  if (s.refer) detail = joined([say`${s.refer}`, detail], "; ");
+  return row("static", title, status, detail, s.margin);
 }
 
 function curveWords(f: CheckResult["fatigue"]): string {

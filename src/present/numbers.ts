@@ -6,6 +6,7 @@
  * digits are single characters, so a value stays on one text line for anyone copying it out.
  * One way to show a reserve: a signed percentage.
  */
+import type { Phrase } from "../schema/result.ts";
 import { fromSI, type Quantity, type Units, unitLabel } from "../schema/units.ts";
 
 const SUPERSCRIPT: Record<string, string> = {
@@ -107,6 +108,22 @@ export function numberList(xs: readonly number[], max = 12, digits = 4): string 
  */
 export function engineText(text: string): string {
   return text.replace(/×10\^([-−]?\d+)/g, (_m, e: string) => ` × 10${superscript(e)}`);
+}
+
+/**
+ * An engine phrase in the reader's units: its words as they are, each amount converted from SI and
+ * written with the one number formatter, so no face reads a number back out of a sentence.
+ */
+export function phraseText(parts: Phrase["parts"], units: Units): string {
+  return parts
+    .map((p) =>
+      typeof p === "string"
+        ? engineText(p)
+        : p.quantity === "plain"
+          ? sig(p.value ?? Number.POSITIVE_INFINITY, p.digits)
+          : quantity(p.value ?? Number.POSITIVE_INFINITY, p.quantity, units, p.digits),
+    )
+    .join("");
 }
 
 /** Engine sentences start in lower case so they can be embedded; a list item starts a sentence. */

@@ -16,12 +16,8 @@ export const STATUS_WORDS: Record<VerdictRow["status"] | "refer", string> = {
   info: "for information",
 };
 
-/** The overall verdict in words. */
-export const VERDICT_WORDS: Record<"pass" | "fail" | "refer", string> = {
-  pass: "Passes",
-  fail: "Fails",
-  refer: "Refer",
-};
+/** The overall verdict in words: the engine's, the one list (src/engine/verdict.ts). */
+export { VERDICT_WORDS } from "../engine/index.ts";
 
 /** Why a criterion gives no finite life, in words ("" where it gives one). */
 export const CRITERION_STATUS_WORDS: Record<CriterionRow["status"], string> = {

@@ -10,6 +10,7 @@
 import { z } from "zod";
 import { MEAN_STRESS_CRITERIA } from "./check.ts";
 import { FATIGUE_CURVES, SERVICES, STATIC_BASES, WELD_DETAILS } from "./service.ts";
+import { QUANTITIES } from "./units.ts";
 
 const num = z.number();
 const nullableNum = z.number().nullable();
@@ -55,12 +56,26 @@ export const VERDICTS = ["pass", "fail", "refer"] as const;
 export const verdictSchema = z.enum(VERDICTS);
 export const ROW_STATUSES = ["pass", "fail", "info", "refer"] as const;
 
+/** A number in a sentence: its value in SI and what it measures, so a face can show it in the reader's units. */
+export const phraseAmountSchema = z.strictObject({
+  /** null where the amount is unbounded. */
+  value: nullableNum,
+  quantity: z.enum(QUANTITIES),
+  digits: z.number().int().positive().optional(),
+});
+export type PhraseAmount = z.infer<typeof phraseAmountSchema>;
+/** A sentence in SI (`text`) and the same as words and amounts (`parts`). */
+export const phraseSchema = z.strictObject({ text: z.string(), parts: z.array(z.union([z.string(), phraseAmountSchema])) });
+export type Phrase = z.infer<typeof phraseSchema>;
+
 export const verdictRowSchema = z.strictObject({
   id: z.string(),
   title: z.string(),
   status: z.enum(ROW_STATUSES),
-  /** Plain-words statement of the demand against the capacity. */
+  /** Plain-words statement of the demand against the capacity, in SI. */
   detail: z.string(),
+  /** The same as words and amounts, for a face that shows other units. */
+  detailParts: phraseSchema.shape.parts,
   /** Reserve: capacity / demand − 1 where it means something. */
   margin: nullableNum,
 });
@@ -180,7 +195,7 @@ export const resultSchema = z.strictObject({
   /** What governs, in words: the governing row's title and detail. */
   governs: z.string(),
   /** The same as a structure, so no face has to find the row by matching the sentence. */
-  governing: z.strictObject({ rowId: z.string(), text: z.string() }),
+  governing: z.strictObject({ rowId: z.string(), text: z.string(), parts: phraseSchema.shape.parts }),
   /** What the check was worked at, for the faces' plots and the picture of the shell. */
   workedAt: z.strictObject({
     form: z.enum(["cylinder", "sphere"]),

@@ -35,7 +35,8 @@ const MPA_SQRT_M_PER_KSI_SQRT_IN = 6.894757293168 * Math.sqrt(0.0254);
  * What a form number measures. "toughness" follows the stress system: ksi·√in beside psi or ksi,
  * MPa·√m otherwise. "plain" numbers (counts, ratios, exponents, Paris C) are never converted.
  */
-export type Quantity = "length" | "stress" | "pressure" | "altitude" | "toughness" | "plain";
+export const QUANTITIES = ["length", "stress", "pressure", "altitude", "toughness", "plain"] as const;
+export type Quantity = (typeof QUANTITIES)[number];
 
 function usToughness(u: Units): boolean {
   return u.stress === "psi" || u.stress === "ksi";

@@ -52,10 +52,14 @@ describe("page and sheet agree", () => {
     const run = checkDocument(findDemo("cabin")!.document);
     if (!run.ok) throw new Error("cabin demo must run");
     // A paraphrased sentence must not move the mark: only governing.rowId decides it.
-    const r: CheckResult = { ...run.result, governs: "something else entirely", governing: { rowId: "static", text: "Static strength" } };
-    const onSheet = String(VerdictTable({ r }));
+    const r: CheckResult = {
+      ...run.result,
+      governs: "something else entirely",
+      governing: { rowId: "static", text: "Static strength", parts: ["Static strength"] },
+    };
+    const onSheet = String(VerdictTable({ r, units: SI_UNITS }));
     expect(/<tr class="governs"><td>([^<]*)/.exec(onSheet)?.[1]).toMatch(/^Static strength/);
-    const onPage = String(VerdictSummary({ result: r }));
+    const onPage = String(VerdictSummary({ result: r, units: SI_UNITS }));
     // The page's headline gives the governing row's reserve: the static one.
     expect(onPage).toContain(`reserve +${Math.round(r.static.margin * 100)}`);
   });

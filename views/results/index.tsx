@@ -20,7 +20,7 @@ export function ResultTop({ v, canUsePressure }: { v: ResultView; canUsePressure
     <>
       <Solution result={v.result} units={v.units} canUsePressure={canUsePressure} />
       <Warnings result={v.result} />
-      <VerdictTable result={v.result} />
+      <VerdictTable result={v.result} units={v.units} />
       <KeyFigures result={v.result} units={v.units} />
     </>
   );

@@ -1,10 +1,11 @@
 import type { CheckResult } from "../../src/engine/index.ts";
-import { engineText } from "../../src/present/numbers.ts";
+import { phraseText } from "../../src/present/numbers.ts";
+import type { Units } from "../../src/schema/units.ts";
 import { STATUS_WORDS } from "../../src/present/words.ts";
 import { margin } from "../format.ts";
 
 /** Every check the verdict weighs, with its demand against capacity in words. */
-export function VerdictTable({ result }: { result: CheckResult }) {
+export function VerdictTable({ result, units }: { result: CheckResult; units: Units }) {
   return (
     <section class="block" aria-labelledby="h-verdict-table">
       <h3 id="h-verdict-table">Checks weighed</h3>
@@ -25,7 +26,7 @@ export function VerdictTable({ result }: { result: CheckResult }) {
                 <td>
                   <span class={`status status-${r.status}`}>{STATUS_WORDS[r.status]}</span>
                 </td>
-                <td>{engineText(r.detail)}</td>
+                <td>{phraseText(r.detailParts, units)}</td>
                 <td class="num">{margin(r.margin)}</td>
               </tr>
             ))}

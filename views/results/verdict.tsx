@@ -1,5 +1,6 @@
 import type { CheckResult, VerdictRow } from "../../src/engine/index.ts";
-import { engineText } from "../../src/present/numbers.ts";
+import { phraseText, quantity } from "../../src/present/numbers.ts";
+import type { Units } from "../../src/schema/units.ts";
 import { VERDICT_WORDS } from "../../src/present/words.ts";
 import { cycles, margin, sig } from "../format.ts";
 import { STATIC_BASIS_LABEL, WELD_DETAIL_INFO } from "../../src/schema/service.ts";
@@ -13,18 +14,18 @@ export function governingRow(result: CheckResult): VerdictRow | undefined {
  * The verdict in a few lines: pass or fail, what governs and by how much, and the fatigue
  * life against the design life. Read out by screen readers whenever it changes.
  */
-export function VerdictSummary({ result }: { result: CheckResult }) {
+export function VerdictSummary({ result, units }: { result: CheckResult; units: Units }) {
   const row = governingRow(result);
   const f = result.fatigue;
   const unit = f.lifeCountedIn === "passes" ? "passes" : "cycles";
   return (
     <div class={`verdict verdict-${result.verdict}`}>
       <p class="verdict-word">
-        <span class="badge">{VERDICT_WORDS[result.verdict]}</span>
+        <span class="badge">{VERDICT_WORDS[result.verdict].badge}</span>
         <span class="verdict-title">{result.title ?? "this check"}</span>
       </p>
       <p class="governs">
-        <strong>Governed by</strong> {engineText(result.governing.text)}
+        <strong>Governed by</strong> {phraseText(result.governing.parts, units)}
         {row && row.margin !== null ? (
           <>
             {" "}
@@ -37,7 +38,9 @@ export function VerdictSummary({ result }: { result: CheckResult }) {
       </p>
       <p class="static-basis" data-testid="static-basis">
         <strong>Static basis:</strong> {STATIC_BASIS_LABEL[result.static.basis]}
-        {result.static.requiredThickness_mm !== null ? <> — ordered wall needed {sig(result.static.requiredThickness_mm, 4)} mm</> : null}
+        {result.static.requiredThickness_mm !== null ? (
+          <> — ordered wall needed {quantity(result.static.requiredThickness_mm, "length", units)}</>
+        ) : null}
         {f.weldDetail ? (
           <>
             {" "}

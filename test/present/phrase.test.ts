@@ -1,0 +1,39 @@
+import { describe, expect, it } from "vitest";
+import { DEMOS } from "../../src/demo/index.ts";
+import { checkDocument } from "../../src/engine/index.ts";
+import { MPa, mm, n, say } from "../../src/engine/phrase.ts";
+import { phraseText } from "../../src/present/numbers.ts";
+import { SI_UNITS, type Units } from "../../src/schema/units.ts";
+import { VerdictTable } from "../../views/results/table.tsx";
+import { PARTS, SPARSE } from "../fixtures/documents.ts";
+
+const US: Units = { length: "in", stress: "ksi", pressure: "psi", altitude: "ft" };
+
+describe("numbers in the engine's sentences reach the reader's units", () => {
+  it("converts each amount of a phrase and keeps its words", () => {
+    const p = say`σ = ${MPa(100)} at a wall of ${mm(25.4)} after ${n(60000)} cycles`;
+    expect(p.text).toBe("σ = 100 MPa at a wall of 25.4 mm after 60000 cycles");
+    // 1 ksi = 6.894757 MPa and 1 in = 25.4 mm (exact by definition): 100 MPa = 14.50 ksi
+    expect(phraseText(p.parts, US)).toBe("σ = 14.5 ksi at a wall of 1 in after 60\u2009000 cycles");
+  });
+
+  it("every verdict row's parts say the same as its SI sentence", () => {
+    for (const [name, doc] of [...SPARSE, ...PARTS, ...DEMOS.map((d) => [d.id, d.document] as const)]) {
+      const out = checkDocument(doc);
+      if (!out.ok) throw new Error(name);
+      for (const row of out.result.verdictTable) {
+        // Numbers are written by two formatters (the engine's fmt and the faces' sig), so compare the words only.
+        const words = (s: string) => s.replace(/[−-]?[\d.,\u2009 ]*\d(×10\^[−-]?\d+| × 10[⁰¹²³⁴⁵⁶⁷⁸⁹⁻]+)?|∞/g, "#");
+        expect(words(phraseText(row.detailParts, SI_UNITS)), `${name} ${row.id}`).toBe(words(row.detail));
+      }
+    }
+  });
+
+  it("the cabin demo's verdict table in US units shows no SI unit", () => {
+    const out = checkDocument(DEMOS[0].document);
+    if (!out.ok) throw new Error("the cabin demo must run");
+    const html = String(VerdictTable({ result: out.result, units: US }));
+    expect(html).not.toMatch(/\bMPa\b|\d mm\b/);
+    expect(html).toMatch(/\d in\b/);
+  });
+});
