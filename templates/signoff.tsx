@@ -1,5 +1,4 @@
-import { INPUT_ATTACHMENT } from "../src/sheet/attach.ts";
-import { SIGNOFFS_ATTACHMENT } from "../src/sheet/signatures.ts";
+import { INPUT_ATTACHMENT, SIGNOFFS_ATTACHMENT } from "../src/schema/attachments.ts";
 import { ROLES } from "../src/schema/signoff.ts";
 import { signedAtText } from "./format.ts";
 import type { SheetModel, SignOffRole } from "./model.ts";

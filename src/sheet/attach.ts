@@ -14,6 +14,7 @@
  * /AFRelationship /Source: it is the data the document was made from. Viewers show it as an
  * attachment; poppler's `pdfdetach -list` lists it.
  */
+import { INPUT_ATTACHMENT } from "../schema/attachments.ts";
 import { inflateSync } from "node:zlib";
 import {
   AFRelationship,
@@ -27,9 +28,6 @@ import {
   PDFString,
   type PDFObject,
 } from "pdf-lib";
-
-/** Name of the attached input file. */
-export const INPUT_ATTACHMENT = "hoopwise-input.json";
 
 export interface SheetInfo {
   /** Document title: the check's title. */

@@ -8,9 +8,9 @@ import { createHash, createPublicKey, verify } from "node:crypto";
 import { AFRelationship, type PDFDocument } from "pdf-lib";
 import { fingerprint as fingerprintOf } from "../engine/fingerprint.ts";
 import { isRole, signoffMessage, type Role } from "../schema/signoff.ts";
+import { SIGNOFFS_ATTACHMENT } from "../schema/attachments.ts";
 import { extractAttachment } from "./attach.ts";
 
-export const SIGNOFFS_ATTACHMENT = "hoopwise-signoffs.json";
 export const SIGNOFFS_FORMAT = "hoopwise.sheet-signoffs/1";
 
 export interface SheetSignoff {

@@ -25,7 +25,8 @@ import { ENGINE_VERSION, InputError, runCheck, type CheckResult, type Verdict } 
 import { fingerprint } from "../engine/fingerprint.ts";
 import { parseCheck } from "../engine/input.ts";
 import type { FieldError } from "../schema/errors.ts";
-import { extractAttachment, INPUT_ATTACHMENT, readSheetInfo, type SheetInfoFound } from "./attach.ts";
+import { INPUT_ATTACHMENT } from "../schema/attachments.ts";
+import { extractAttachment, readSheetInfo, type SheetInfoFound } from "./attach.ts";
 import { compareRecords, readRecord, recordOf, RESULT_ATTACHMENT, type Difference, type SheetRecord } from "./record.ts";
 import { checkSignoffs, publicKeyFrom, readSignoffs, type SheetSignoffs, type SignoffCheck } from "./signatures.ts";
 

@@ -1,7 +1,8 @@
 import { afterAll, describe, expect, it } from "vitest";
 import { PDFDict, PDFDocument, PDFHexString, PDFName, PDFString, type PDFRef } from "pdf-lib";
 import { ENGINE_VERSION } from "../../src/engine/version.ts";
-import { attachInput, extractAttachment, INPUT_ATTACHMENT, readSheetInfo } from "../../src/sheet/attach.ts";
+import { INPUT_ATTACHMENT } from "../../src/schema/attachments.ts";
+import { attachInput, extractAttachment, readSheetInfo } from "../../src/sheet/attach.ts";
 import { createBrowserPool } from "../../src/pdf/browser.ts";
 import { renderPdf } from "../../src/pdf/pdf.ts";
 import { fingerprint } from "../../src/engine/fingerprint.ts";

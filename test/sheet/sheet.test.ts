@@ -2,7 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { PDFArray, PDFDict, PDFDocument, PDFHexString, PDFName, PDFString } from "pdf-lib";
 import { DEMOS } from "../../src/demo/index.ts";
 import { checkDocument } from "../../src/engine/index.ts";
-import { INPUT_ATTACHMENT } from "../../src/sheet/attach.ts";
+import { INPUT_ATTACHMENT } from "../../src/schema/attachments.ts";
 import { createBrowserPool } from "../../src/pdf/browser.ts";
 import type { RequestRecord } from "../../src/pdf/pdf.ts";
 import { RESULT_ATTACHMENT } from "../../src/sheet/record.ts";

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { findDemo } from "../../src/demo/index.ts";
-import { diffInputs, flatten, unitOf } from "../../src/web/records/history/diff.ts";
-import { relativeChange, workRevision } from "../../src/web/records/history/figures.ts";
+import { diffInputs, flatten, unitOf } from "../../src/present/revisions/diff.ts";
+import { relativeChange, workRevision } from "../../src/present/revisions/figures.ts";
 
 const receiver = findDemo("receiver")!.document;
 

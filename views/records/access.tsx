@@ -1,5 +1,5 @@
 import { MIN_PASSPHRASE_LENGTH } from "../../src/store/index.ts";
-import type { FormErrors } from "../../src/web/records/forms.ts";
+import type { FormErrors } from "../../src/present/formErrors.ts";
 import { FormProblems, PassphraseField, TextField } from "./fields.tsx";
 import { SETUP_PATH, SIGNIN_PATH } from "./paths.ts";
 

@@ -1,7 +1,7 @@
 import { VERDICT_WORDS, type Verdict } from "../../src/engine/index.ts";
 import type { CheckRecord, RevisionRecord } from "../../src/store/index.ts";
-import type { InputChange, InputDiff } from "../../src/web/records/history/diff.ts";
-import { relativeChange, type Figure, type WorkedRevision } from "../../src/web/records/history/figures.ts";
+import type { InputChange, InputDiff } from "../../src/present/revisions/diff.ts";
+import { relativeChange, type Figure, type WorkedRevision } from "../../src/present/revisions/figures.ts";
 import { cycles, sig } from "../format.ts";
 import { SelectField } from "./fields.tsx";
 import { checkPath, comparePath } from "./paths.ts";

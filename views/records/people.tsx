@@ -6,7 +6,7 @@ import {
   type TrustedKey,
   type UserRecord,
 } from "../../src/store/index.ts";
-import type { FormErrors } from "../../src/web/records/forms.ts";
+import type { FormErrors } from "../../src/present/formErrors.ts";
 import { FormProblems, PassphraseField, SelectField, TextField } from "./fields.tsx";
 import { PEOPLE_PATH } from "./paths.ts";
 import { When } from "./state.tsx";

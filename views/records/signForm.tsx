@@ -1,5 +1,5 @@
 import { ROLES, type Actor, type CheckRecord, type Role } from "../../src/store/index.ts";
-import type { FormErrors } from "../../src/web/records/forms.ts";
+import type { FormErrors } from "../../src/present/formErrors.ts";
 import { FormProblems, PassphraseField, SelectField } from "./fields.tsx";
 import { signPath } from "./paths.ts";
 import { ROLE_WORDS } from "./state.tsx";

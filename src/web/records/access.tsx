@@ -4,7 +4,8 @@ import { RecordError, SlowDownError, type Store } from "../../store/index.ts";
 import { SETUP_FIELDS, SetupView, SIGNIN_FIELDS } from "../../../views/records/access.tsx";
 import { SETUP_PATH, SIGNIN_PATH, SIGNOUT_PATH } from "../../../views/records/paths.ts";
 import { clearSessionCookie, isLocalRequest, noStore, setSessionCookie, sourceOf, tokenOf } from "./auth.ts";
-import { formErrors, NO_ERRORS, postedFields } from "./forms.ts";
+import { formErrors, NO_ERRORS } from "../../present/formErrors.ts";
+import { postedFields } from "./forms.ts";
 import { statusOf } from "./http.ts";
 import { page, signInPage } from "./pages.tsx";
 

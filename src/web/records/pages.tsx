@@ -22,12 +22,13 @@ import { SignInView } from "../../../views/records/access.tsx";
 import { ADD_USER_FIELDS, OWN_PASSPHRASE_FIELDS, PeopleView, TRUST_FIELDS, type PeopleForms } from "../../../views/records/people.tsx";
 import { checkPath, inputPath, PEOPLE_PATH } from "../../../views/records/paths.ts";
 import { SIGN_FIELDS, type SignFormState } from "../../../views/records/signForm.tsx";
-import { diffInputs } from "./history/diff.ts";
-import { workRevision } from "./history/figures.ts";
+import { diffInputs } from "../../present/revisions/diff.ts";
+import { workRevision } from "../../present/revisions/figures.ts";
 import { encodeCheck, MAX_LINK_CHARS } from "../link.ts";
 import { noStore, requireUser, sourceOf, type RecordsEnv } from "./auth.ts";
 import { isDatabaseBusy, statusOf, type RefusalStatus } from "./http.ts";
-import { formErrors, NO_ERRORS, postedFields, type FormErrors } from "./forms.ts";
+import { type FormErrors, formErrors, NO_ERRORS } from "../../present/formErrors.ts";
+import { postedFields } from "./forms.ts";
 import { saveRoutes } from "./save.tsx";
 
 type Status = RefusalStatus | 200;

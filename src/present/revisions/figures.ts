@@ -1,4 +1,4 @@
-import { checkDocument, type CheckResult, type FieldError } from "../../../engine/index.ts";
+import { checkDocument, type CheckResult, type FieldError } from "../../engine/index.ts";
 
 /**
  * The key results of a saved revision, worked out again by the running engine, so two revisions

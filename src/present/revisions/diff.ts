@@ -5,7 +5,7 @@
  * a history of thousands of points is compared whole and summarised, not listed point by point.
  */
 
-import { NUMBER_INPUTS } from "../../../schema/inputs.ts";
+import { NUMBER_INPUTS } from "../../schema/inputs.ts";
 
 export type ChangeKind = "changed" | "added" | "removed";
 
