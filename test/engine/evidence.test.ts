@@ -4,23 +4,7 @@ import * as ss from "simple-statistics";
 import { evaluateEvidence, toleranceFactorKnownSigma, toleranceFactorSample } from "../../src/engine/evidence.ts";
 import { InputError } from "../../src/engine/errors.ts";
 import { normalQuantile } from "../../src/engine/special.ts";
-
-/** Small seeded generator (mulberry32) so the Monte Carlo checks repeat exactly. */
-function seeded(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
-
-/** Standard normal deviates by the Box–Muller transform. */
-function normals(rand: () => number): () => number {
-  return () => Math.sqrt(-2 * Math.log(1 - rand())) * Math.cos(2 * Math.PI * rand());
-}
+import { normals, seeded } from "./random.ts";
 
 describe("one-sided tolerance factors", () => {
   // One-sided normal tolerance factors, B-basis (90 % of the population, 95 % confidence) and

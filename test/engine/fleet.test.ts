@@ -1,26 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { anyOf, firstFailureMedian, fleetView } from "../../src/engine/fleet.ts";
-
-/** Mulberry32: a small seeded generator, so the Monte Carlo is the same on every run. */
-function mulberry32(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
-
-/** Standard normal draws by Box–Muller. */
-function normals(rand: () => number): () => number {
-  return () => {
-    const u = 1 - rand();
-    const v = rand();
-    return Math.sqrt(-2 * Math.log(u)) * Math.cos(2 * Math.PI * v);
-  };
-}
+import { normals, seeded } from "./random.ts";
 
 function median(xs: number[]): number {
   const s = [...xs].sort((a, b) => a - b);
@@ -33,7 +13,7 @@ describe("fleet figures against a seeded Monte Carlo of the lognormal", () => {
   const sigma = 0.18;
   const n = 40;
   const design = 10 ** 4.85;
-  const z = normals(mulberry32(20261201));
+  const z = normals(seeded(20261201));
   const fleets = 6000;
   const mins: number[] = [];
   let anyEarly = 0;

@@ -145,3 +145,16 @@ export async function registerPeople(store: Pick<OpenedStore, "addUser">): Promi
   const actor = (u: Actor): Actor => ({ id: u.id, name: u.name, role: u.role });
   return { ana: actor(ana), bo: actor(bo), cy: actor(cy) };
 }
+
+/** The tables every records database holds, on either backend (its migrations make them). */
+export const RECORD_TABLES = [
+  "attempts",
+  "checks",
+  "events",
+  "people_events",
+  "revisions",
+  "sessions",
+  "signoffs",
+  "trusted_keys",
+  "users",
+] as const;

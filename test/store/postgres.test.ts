@@ -2,7 +2,7 @@ import { join } from "node:path";
 import { describe, expect, it } from "vitest";
 import { isStorageFault, openStore, SCHEMA_VERSION, storageFaultWords } from "../../src/store/index.ts";
 import { PG_MIGRATIONS } from "../../src/store/pgMigrations.ts";
-import { fakeValidate, PG_URL, POSTGRES, sampleInput, tempDir } from "./helpers.ts";
+import { fakeValidate, PG_URL, POSTGRES, sampleInput, tempDir, RECORD_TABLES } from "./helpers.ts";
 
 /** What only the PostgreSQL records have: their migrations, the shared signing key, a server out of reach. */
 describe.skipIf(!PG_URL)(`the PostgreSQL records${PG_URL ? "" : " (skipped: HOOPWISE_TEST_PG_URL is not set)"}`, () => {
@@ -15,19 +15,7 @@ describe.skipIf(!PG_URL)(`the PostgreSQL records${PG_URL ? "" : " (skipped: HOOP
     const tables = await store.sql.all<{ name: string }>(
       "SELECT table_name AS name FROM information_schema.tables WHERE table_schema = current_schema() ORDER BY table_name",
     );
-    expect(tables.map((t) => t.name)).toEqual(
-      expect.arrayContaining([
-        "attempts",
-        "checks",
-        "events",
-        "people_events",
-        "revisions",
-        "sessions",
-        "signoffs",
-        "trusted_keys",
-        "users",
-      ]),
-    );
+    expect(tables.map((t) => t.name)).toEqual(expect.arrayContaining([...RECORD_TABLES]));
   });
 
   it("apply each migration once when several servers open a fresh schema together, and again change nothing", async () => {
