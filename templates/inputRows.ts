@@ -96,8 +96,8 @@ export function inputGroups(m: SheetModel): InputGroup[] {
   groups.push({ title: "Opening", rows: cutoutRows });
 
   groups.push({ title: "Material", rows: materialRows(m, q, t) });
-  groups.push({ title: "Fatigue", rows: fatigueRows(m, t, q) });
-  groups.push({ title: "Static strength", rows: staticRows(m, t, q) });
+  groups.push({ title: "Fatigue", rows: fatigueRows(m, t, q, input) });
+  groups.push({ title: "Static strength", rows: staticRows(m, t, q, input) });
 
   if (d.crack) {
     const k = d.crack;
@@ -181,8 +181,8 @@ function pressureRows(m: SheetModel, q: Q, t: T, input: I): InputRow[] {
   }
   const a = m.document.axialExtra;
   if (a && (a.max_MPa !== 0 || a.min_MPa !== 0)) {
-    rows.push(q("Extra axial stress at the highest pressure", a.max_MPa, "stress"));
-    rows.push(q("Extra axial stress at the lowest pressure", a.min_MPa, "stress"));
+    rows.push(input("axialExtra.max_MPa", a.max_MPa));
+    rows.push(input("axialExtra.min_MPa", a.min_MPa));
   }
   return rows;
 }
@@ -217,7 +217,7 @@ function materialRows(m: SheetModel, q: Q, t: T): InputRow[] {
 }
 
 /** The static basis and its values, each marked where a default of the kind of shell or of the basis filled it. */
-function staticRows(m: SheetModel, t: T, q: Q): InputRow[] {
+function staticRows(m: SheetModel, t: T, q: Q, input: I): InputRow[] {
   const s = m.result.static;
   const why = (key: string) => (s.defaults[key] ? `default: ${s.defaults[key]}` : "as entered");
   const rows: InputRow[] = [
@@ -233,13 +233,13 @@ function staticRows(m: SheetModel, t: T, q: Q): InputRow[] {
     rows.push(t("Ultimate factor", sig(s.ultimateFactor ?? 0, 3), why("ultimateFactor")));
   }
   if (s.basis === "yield") rows.push(t("Yield factor n_y", sig(s.yieldFactor, 4), m.document.static ? "" : "default"));
-  rows.push(q("Corrosion allowance c", s.corrosionAllowance_mm, "length", why("corrosionAllowance_mm")));
-  rows.push(q("Minus tolerance δ", s.thicknessTolerance_mm, "length", why("thicknessTolerance_mm")));
+  rows.push(input("static.corrosionAllowance_mm", s.corrosionAllowance_mm, why("corrosionAllowance_mm")));
+  rows.push(input("static.thicknessTolerance_mm", s.thicknessTolerance_mm, why("thicknessTolerance_mm")));
   rows.push(q("Minimum gauge (without c)", s.minimumGauge_mm, "length", why("minimumGauge_mm")));
   return rows;
 }
 
-function fatigueRows(m: SheetModel, t: T, q: Q): InputRow[] {
+function fatigueRows(m: SheetModel, t: T, q: Q, input: I): InputRow[] {
   const f = m.document.fatigue;
   const lifeUnit = m.result.fatigue.lifeCountedIn;
   const rows: InputRow[] = [
@@ -283,6 +283,6 @@ function fatigueRows(m: SheetModel, t: T, q: Q): InputRow[] {
   const mod = f.modifiers;
   if (mod?.surface) rows.push(t("Surface finish", mod.surface));
   if (mod?.reliability !== undefined) rows.push(t("Reliability asked of the Marin factor", percent(mod.reliability)));
-  if (mod?.sizeDiameter_mm !== undefined) rows.push(q("Effective size for the size factor", mod.sizeDiameter_mm, "length"));
+  if (mod?.sizeDiameter_mm !== undefined) rows.push(input("fatigue.modifiers.sizeDiameter_mm", mod.sizeDiameter_mm, "for the size factor"));
   return rows;
 }

@@ -516,8 +516,8 @@ export const checkSchema = z.strictObject({
   pressure: pressureSchema,
   axialExtra: z
     .strictObject({
-      max_MPa: signedStress("the extra axial stress at maximum").default(0),
-      min_MPa: signedStress("the extra axial stress at minimum").default(0),
+      max_MPa: signedStress("the extra axial stress at the highest pressure").default(0),
+      min_MPa: signedStress("the extra axial stress at the lowest pressure").default(0),
     })
     .optional(),
   cutout: cutoutSchema.default({ kind: "none" }),
@@ -541,8 +541,11 @@ export const checkSchema = z.strictObject({
         .max(1, { error: "the joint efficiency must be above 0 and at most 1" })
         .optional()
         .describe("Weld joint coefficient z (EN 13445-3) or joint efficiency E (ASME VIII-1)"),
-      corrosionAllowance_mm: nonNegative("the corrosion allowance", 100).optional(),
-      thicknessTolerance_mm: nonNegative("the thickness tolerance", 100).optional().describe("The plate's minus tolerance"),
+      corrosionAllowance_mm: nonNegative("the corrosion allowance", 100).meta({ symbol: "c" }).optional(),
+      thicknessTolerance_mm: nonNegative("the minus tolerance", 100)
+        .meta({ symbol: "δ" })
+        .optional()
+        .describe("The plate's minus tolerance"),
       minimumGauge_mm: nonNegative("the minimum gauge", 1000)
         .optional()
         .describe("Least wall, exclusive of the corrosion allowance; the solved wall is never below it plus the allowance"),

@@ -87,7 +87,6 @@ export function ServiceSection({ s }: { s: FormState }) {
         <NumberInput
           s={s}
           name="static.corrosionAllowance"
-          label="Corrosion allowance"
           placeholder={num(d.corrosionAllowance_mm.value)}
           hint={`Default: ${d.corrosionAllowance_mm.why}.`}
         />
