@@ -57,7 +57,7 @@ export function shellPicture(data: ShellPictureData, opts?: PlotOptions): string
     out.push(textAt(W / 2, H / 2, "no shell to draw", { anchor: "middle" }), "</svg>");
     return out.join("\n");
   }
-  out.push(...section(data, { x: 20, y: top, w: W * 0.36, h: H - top - 70 }, len));
+  out.push(...section(data, hoopHalf, { x: 20, y: top, w: W * 0.36, h: H - top - 70 }, len));
   out.push(...developed(data, outline, holes, { x: W * 0.42, y: top, w: W * 0.56, h: H - top - 70 }, u.length, u.lengthUnit, len));
   out.push("</svg>");
   return out.join("\n");
@@ -70,8 +70,8 @@ interface Box {
   h: number;
 }
 
-/** The section through the opening's centre: both wall faces at true radius, the opening's hoop extent as an arc. */
-function section(data: ShellPictureData, b: Box, len: (mm: number) => string): string[] {
+/** The section through the opening's centre: both wall faces at true radius, the opening's hoop half-width (mm) as an arc. */
+function section(data: ShellPictureData, hoopHalf: number, b: Box, len: (mm: number) => string): string[] {
   const out: string[] = [];
   const R = Math.min(b.w, b.h - 40) / 2;
   const scale = R / data.outerRadius_mm;
@@ -84,7 +84,6 @@ function section(data: ShellPictureData, b: Box, len: (mm: number) => string): s
   );
   // The opening's hoop extent: an arc at the top of the section (its half-angle is half-width / mean radius).
   const rm = (data.innerRadius_mm + data.outerRadius_mm) / 2;
-  const hoopHalf = data.outline?.length ? Math.max(...data.outline.map((p) => Math.abs(p[0]))) : 0;
   if (hoopHalf > 0) {
     const phi = Math.min(Math.PI, hoopHalf / rm);
     const r = rm * scale;
