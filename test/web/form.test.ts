@@ -5,6 +5,8 @@ import { applyCarried, unshownParts } from "../../src/web/form/carry.ts";
 import { convertValues, parseNumberList, readForm, understand, writeForm } from "../../src/web/form/index.ts";
 import { defaultAt } from "../../src/schema/defaults.ts";
 import { SI_UNITS, unitsKey, type Units } from "../../src/schema/units.ts";
+import { NUMBER_INPUTS } from "../../src/schema/inputs.ts";
+import { NUMBER_FIELDS } from "../../views/form/fields.ts";
 
 const US: Units = { length: "in", stress: "psi", pressure: "psi", altitude: "ft" };
 
@@ -122,5 +124,43 @@ describe("form ↔ check document", () => {
   it("draws block rows for what is filled in, not for the highest row number posted", () => {
     const p = understand({ "pressure.mode": "blocks", "blocks.0.max": "1", "blocks.0.cycles": "10", "blocks.9999.min": "" });
     expect(p.rows.length).toBeLessThan(10);
+  });
+});
+
+describe("the form is one table of fields over the format's registry", () => {
+  // Inputs the form has no single field for, each with where it is handled instead.
+  const NOT_A_FIELD: Record<string, string> = {
+    "pressure.history_MPa[]": "the history box (a list)",
+    "pressure.gate_MPa": "a logger's file (its gate, in the log's unit)",
+    "pressure.blocks[].max_MPa": "the block table",
+    "pressure.blocks[].min_MPa": "the block table",
+    "pressure.blocks[].cycles": "the block table",
+    "evidence.lives_cycles[]": "the test lives box (a list)",
+    "cutout.fasteners[].hoop_mm": "carried (a list the form does not edit)",
+    "cutout.fasteners[].axial_mm": "carried",
+    "cutout.fasteners[].radius_mm": "carried",
+    "cutout.reinforcement.area_mm2": "carried",
+    "cutout.reinforcement.width_mm": "carried",
+    "material.coupons[].amplitude_MPa": "carried",
+    "material.coupons[].life_cycles": "carried",
+    "crack.walkerGamma": "carried",
+    "solve.gauges_mm[]": "the solve buttons (API only)",
+    "solve.step_mm": "the solve buttons (API only)",
+  };
+
+  it("has a field for every number input of the format, or names where that input is handled", () => {
+    const onForm = new Set(Object.values(NUMBER_FIELDS).map((f) => f.path));
+    const missing = [...NUMBER_INPUTS.keys()].filter((p) => !onForm.has(p) && !(p in NOT_A_FIELD));
+    expect(missing).toEqual([]);
+    // And the list of exceptions holds nothing the form has a field for.
+    expect(Object.keys(NOT_A_FIELD).filter((p) => onForm.has(p))).toEqual([]);
+  });
+
+  it("reads back every field it writes, in other units too, for every demo", () => {
+    for (const units of [SI_UNITS, US])
+      for (const d of DEMOS) {
+        const v = writeForm(d.document, units);
+        expect(writeForm(readForm(v, units).document, units), `${d.id} ${unitsKey(units)}`).toEqual(v);
+      }
   });
 });

@@ -1,53 +1,35 @@
-import { blockField, NUMBER_FIELDS, type FormValues, type NumberFieldName } from "../../../views/form/fields.ts";
+import {
+  blockField,
+  FORM_FIELDS,
+  type FieldSpec,
+  type FormValues,
+  NUMBER_FIELDS,
+  type NumberFieldName,
+} from "../../../views/form/fields.ts";
 import { formatNumberList, parseNumber, parseNumberList } from "./lists.ts";
 import { defaultAt } from "../../schema/defaults.ts";
 import { formNumber, fromSI, toSI, type Quantity, type Units } from "../../schema/units.ts";
 
 /**
+ * @module web/form/write
  * Check document → form values in the chosen units. The document may come from a link or an
  * uploaded file and so may be incomplete or wrong: whatever is present is shown (wrong values
  * as their text), so the user sees it beside the error the schema gives.
+ *
+ * The modes are set first from what the document holds (how the pressure is given, how the
+ * notch is treated, the sections present); then the walk over the form's table
+ * (views/form/fields.ts) writes each field that applies, as the reader reads it.
  */
 export function writeForm(doc: unknown, units: Units): FormValues {
   const v: FormValues = {};
   const at = (path: string) => valueAt(doc, path);
-  const put = (name: string, path: string) => {
-    const x = at(path);
-    if (typeof x === "string" || typeof x === "number" || typeof x === "boolean") v[name] = String(x);
-  };
-  // A choice the document leaves out shows the value the schema fills in, not the list's first
-  // option: the form re-posted unchanged must be the same check as the document.
-  const choose = (name: string, path: string) => {
-    put(name, path);
-    const fallback = defaultAt(path);
-    if (v[name] === undefined && fallback !== undefined) v[name] = String(fallback);
-  };
-  const putNumber = (name: NumberFieldName) => {
-    const f = NUMBER_FIELDS[name];
-    const x = at(f.path);
-    if (x !== undefined && x !== null) v[name] = shownNumber(x, f.quantity, units);
-  };
 
-  for (const k of ["title", "project", "calcNumber", "notes"]) put(k, k);
-  choose("shell.form", "shell.form");
-  choose("shell.radiusAt", "shell.radiusAt");
-  choose("shell.theory", "shell.theory");
-  choose("shell.service", "shell.service");
-  putNumber("shell.radius");
-  putNumber("shell.thickness");
-
+  // Modes.
   const p = at("pressure");
   const has = (k: string) => p !== null && typeof p === "object" && k in p;
-  if (has("fromAltitude")) {
-    v["pressure.mode"] = "altitude";
-    putNumber("altitude.flight");
-    putNumber("altitude.cabin");
-    putNumber("altitude.min");
-  } else if (has("history_MPa")) {
-    v["pressure.mode"] = "history";
-    v["history.text"] = listText(at("pressure.history_MPa"), "pressure", units);
-  } else if (has("blocks")) {
-    v["pressure.mode"] = "blocks";
+  v["pressure.mode"] = has("fromAltitude") ? "altitude" : has("history_MPa") ? "history" : has("blocks") ? "blocks" : "direct";
+  if (v["pressure.mode"] === "history") v["history.text"] = listText(at("pressure.history_MPa"), "pressure", units);
+  if (v["pressure.mode"] === "blocks") {
     const blocks = at("pressure.blocks");
     (Array.isArray(blocks) ? blocks : []).forEach((b, row) => {
       const cell = (key: string, q: Quantity) => {
@@ -58,63 +40,29 @@ export function writeForm(doc: unknown, units: Units): FormValues {
       v[blockField(row, "min")] = cell("min_MPa", "pressure");
       v[blockField(row, "cycles")] = cell("cycles", "plain");
     });
-  } else {
-    v["pressure.mode"] = "direct";
-    putNumber("pressure.max");
-    putNumber("pressure.min");
   }
-  putNumber("axial.max");
-  putNumber("axial.min");
-
-  put("cutout.kind", "cutout.kind");
-  const kind = at("cutout.kind");
-  if (kind === "circular-hole") putNumber("circle.radius");
-  if (kind === "elliptical-hole") {
-    putNumber("ellipse.hoop");
-    putNumber("ellipse.axial");
-  }
-  if (kind === "rounded-rectangle") {
-    putNumber("rect.hoop");
-    putNumber("rect.axial");
-    putNumber("rect.corner");
-  }
-  if (kind === "given") {
-    putNumber("given.kt");
-    putNumber("given.rootRadius");
-    put("given.basis", "cutout.basis");
-  }
-
-  put("material.id", "material.id");
-  put("material.name", "material.name");
-  for (const name of Object.keys(NUMBER_FIELDS) as NumberFieldName[]) if (name.startsWith("material.")) putNumber(name);
-
-  choose("fatigue.meanStress", "fatigue.meanStress");
-  choose("fatigue.curve", "fatigue.curve");
-  choose("fatigue.localYield", "fatigue.localYield");
-  choose("fatigue.surface", "fatigue.modifiers.surface");
-  for (const name of Object.keys(NUMBER_FIELDS) as NumberFieldName[]) if (name.startsWith("fatigue.")) putNumber(name);
   const constant = at("fatigue.notchConstant");
   v["fatigue.notch"] = typeof constant === "string" ? constant : at("fatigue.notchSensitivity") !== undefined ? "q" : "kt";
-  put("static.basis", "static.basis");
-  put("fatigue.weldDetail", "fatigue.weldDetail");
-  for (const name of Object.keys(NUMBER_FIELDS) as NumberFieldName[]) if (name.startsWith("static.")) putNumber(name);
-
   if (at("crack") !== undefined) {
     v["crack.on"] = "on";
-    choose("crack.geometry", "crack.geometry");
-    choose("crack.cracksAtHole", "crack.cracksAtHole");
     if (at("crack.bulging") !== false) v["crack.bulging"] = "on";
-    choose("crack.detectableBy", "crack.detectableBy");
-    choose("crack.orientation", "crack.orientation");
-    choose("crack.leakBeforeBreak", "crack.leakBeforeBreak");
-    for (const name of Object.keys(NUMBER_FIELDS) as NumberFieldName[]) if (name.startsWith("crack.")) putNumber(name);
   }
-  putNumber("fleet.size");
-  putNumber("fleet.logStdDev");
   if (at("evidence") !== undefined) {
     v["evidence.on"] = "on";
     v["evidence.lives"] = listText(at("evidence.lives_cycles"), "plain", units);
-    for (const name of Object.keys(NUMBER_FIELDS) as NumberFieldName[]) if (name.startsWith("evidence.")) putNumber(name);
+  }
+
+  for (const [name, f] of Object.entries(FORM_FIELDS as Record<string, FieldSpec>)) {
+    if (f.when && !f.when(v)) continue;
+    const x = at(f.path);
+    if (f.kind === "number") {
+      if (x !== undefined && x !== null) v[name] = shownNumber(x, NUMBER_FIELDS[name as NumberFieldName].quantity, units);
+      continue;
+    }
+    if (typeof x === "string" || typeof x === "number" || typeof x === "boolean") v[name] = String(x);
+    // A choice the document leaves out shows the value the schema fills in, not the list's first
+    // option: the form re-posted unchanged must be the same check as the document.
+    else if (f.showsDefault && defaultAt(f.path) !== undefined) v[name] = String(defaultAt(f.path));
   }
   return v;
 }
