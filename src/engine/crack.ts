@@ -245,29 +245,37 @@ function growthCurve(rate: (a_mm: number) => number, a0: number, ac: number): { 
 }
 
 /**
- * Paris-law growth of a through-crack from its initial to its critical size, with the critical
- * size from the failure assessment diagram and the inspection programme.
- * Units: lengths in mm, stresses in MPa, toughness in MPa·√m, C with da/dN in m/cycle.
+ * What every stage of one crack's assessment shares: the input, the names it is reported under,
+ * the model, and the steps and warnings written so far (in the order the sheet shows them).
  */
-export function crackGrowth(opts: CrackInput): CrackResult {
-  validate(opts);
-  const orientation: CrackOrientation = opts.orientation ?? "axial";
-  const id = (name: string) => (orientation === "circumferential" ? `crack-circ-${name}` : `crack-${name}`);
-  const which = orientation === "circumferential" ? "circumferential crack" : "axial crack";
-  const stressName = orientation === "circumferential" ? "axial" : "hoop";
-  const shape: CrackShape = {
-    geometry: opts.geometry,
-    width_mm: opts.width_mm,
-    holeRadius_mm: opts.holeRadius_mm,
-    cracksAtHole: opts.cracksAtHole ?? 1,
-  };
-  const a0 = opts.initial_mm;
-  const sMax = opts.stressMax_MPa;
-  const Kc = opts.toughness_MPaSqrtM;
-  const { parisC: C, parisM: m } = opts;
-  const steps: Step[] = [];
-  const warnings: string[] = [];
+interface Stage {
+  opts: CrackInput;
+  orientation: CrackOrientation;
+  /** Step id in this orientation's namespace. */
+  id: (name: string) => string;
+  /** "axial crack" or "circumferential crack", for titles and warnings. */
+  which: string;
+  /** "hoop" or "axial": the nominal stress that opens the crack. */
+  stressName: string;
+  steps: Step[];
+  warnings: string[];
+}
 
+/** The bulging and gradient terms of the model, and whether bulging is on. */
+interface ModelStage {
+  model: Model;
+  bulgingOn: boolean;
+  factorM: ReturnType<typeof bulgingFactorFor>;
+}
+
+/**
+ * Stage 1, the model: geometry factor, bulging factor and stress-gradient correction as functions
+ * of the crack size, and the size the crack cannot grow past. Everything later reads K through
+ * this one model, so the diagram, the growth integral and the hand check agree on the same K.
+ */
+function crackModel(st: Stage, shape: CrackShape): ModelStage {
+  const { opts, which } = st;
+  const a0 = opts.initial_mm;
   let limit = growthLimit_mm(shape);
   if (opts.gradient) limit = Math.min(limit, opts.gradient.ligament_mm);
   if (a0 >= limit) {
@@ -278,35 +286,41 @@ export function crackGrowth(opts: CrackInput): CrackResult {
         : `The initial crack (${fmt(a0)} mm) already cuts through the ${fmt(opts.width_mm ?? 0)} mm width.`,
     );
   }
-
   // Bulging: on by default; the sphere has its own factor, the circumferential crack its own.
   const bulgingOn = opts.bulging ?? true;
-  const factorM = bulgingFactorFor(opts.form, orientation);
-  const Rt = opts.shellRadius_mm * opts.thickness_mm;
+  const factorM = bulgingFactorFor(opts.form, st.orientation);
   const M = bulgingOn
     ? (a: number) => bulgingFactor(bulgingHalfLength_mm(a, shape), opts.shellRadius_mm, opts.thickness_mm, factorM.k)
     : () => 1;
   if (!bulgingOn)
-    warnings.push(
+    st.warnings.push(
       `Bulging is switched off for the ${which}: the shell's skin bulges out at a crack under pressure, which raises the stress intensity. ` +
         "Without it the critical size and the crack-growth life read unconservatively (long), more so for long cracks.",
     );
   const gradient = opts.gradient;
   const R = shape.holeRadius_mm ?? 0;
   const beta = gradient ? (a: number) => effectiveStress(gradient.field, a, R) : () => 1;
-  const model: Model = { shape, M, beta, limit_mm: limit };
+  return { model: { shape, M, beta, limit_mm: limit }, bulgingOn, factorM };
+}
 
-  // Stress range: the compressive part of a cycle closes the crack and does not drive it.
+/**
+ * Stage 2, the driving range: the compressive part of a cycle closes a through-crack and does not
+ * drive it, so the range runs from the larger of the valley and zero; Walker's factor (when given)
+ * turns it into the equivalent range at R = 0, since Paris constants are measured near R = 0.1.
+ */
+function drivingRange(st: Stage): { range: number; sMinEff: number; walker: number } {
+  const { opts, which, stressName, orientation } = st;
+  const sMax = opts.stressMax_MPa;
   const sMinEff = Math.max(opts.stressMin_MPa, 0);
   const range = sMax - sMinEff;
   if (opts.stressMin_MPa < 0) {
-    warnings.push(
+    st.warnings.push(
       `The ${stressName} stress goes into compression (${fmt(opts.stressMin_MPa)} MPa); the compressive part is taken to close the ${which} and is left out of its range.`,
     );
   }
-  steps.push(
+  st.steps.push(
     step(
-      id("range"),
+      st.id("range"),
       `Nominal ${stressName} stress range driving the ${which}`,
       opts.stressMin_MPa < 0 ? "Δσ = σmax − 0 (compressive part left out)" : "Δσ = σmax − σmin",
       `Δσ = ${fmt(sMax)} − ${fmt(sMinEff)}`,
@@ -323,9 +337,9 @@ export function crackGrowth(opts: CrackInput): CrackResult {
   let walker = 1;
   if (opts.walkerGamma !== undefined) {
     walker = 1 / (1 - Rratio) ** (1 - opts.walkerGamma);
-    steps.push(
+    st.steps.push(
       step(
-        id("walker"),
+        st.id("walker"),
         `Walker factor for the stress ratio (${which})`,
         "ΔK_eff/ΔK = 1/(1 − R)^(1 − γ), R = σmin/σmax",
         `1/(1 − ${fmt(Rratio)})^(1 − ${fmt(opts.walkerGamma)})`,
@@ -335,16 +349,28 @@ export function crackGrowth(opts: CrackInput): CrackResult {
       ),
     );
   } else if (Rratio >= 0.5) {
-    warnings.push(
+    st.warnings.push(
       `The stress ratio R = ${fmt(Rratio)} is high; Paris constants are usually measured near R = 0.1 and cracks grow faster at high R. Consider giving Walker's exponent.`,
     );
   }
+  return { range, sMinEff, walker };
+}
 
+/**
+ * Stage 3, the factors at the initial flaw: each term of ΔK written out once where the reader can
+ * check it by hand (Y, M, β and the range they multiply), before the integrals hide them.
+ */
+function initialFactors(st: Stage, ms: ModelStage, range: number, walker: number): number {
+  const { opts, which } = st;
+  const { model, bulgingOn, factorM } = ms;
+  const { shape, M, beta } = model;
+  const a0 = opts.initial_mm;
+  const gradient = opts.gradient;
   const factor = describeFactor(shape);
   const Y0 = geometryFactor(a0, shape);
-  steps.push(
+  st.steps.push(
     step(
-      id("y-initial"),
+      st.id("y-initial"),
       `Geometry factor at the initial ${which}`,
       factor.equation,
       `Y(${fmt(a0)} mm) = ${fmt(Y0)}`,
@@ -355,9 +381,9 @@ export function crackGrowth(opts: CrackInput): CrackResult {
   );
   if (bulgingOn) {
     const c0 = bulgingHalfLength_mm(a0, shape);
-    steps.push(
+    st.steps.push(
       step(
-        id("bulging-initial"),
+        st.id("bulging-initial"),
         `Bulging factor at the initial ${which}${opts.form === "sphere" ? " (sphere)" : ""}`,
         `M = √(1 + ${factorM.k}·c²/(R·t)), c the half-length seen from afar`,
         `M = √(1 + ${factorM.k} × ${fmt(c0)}² / (${fmt(opts.shellRadius_mm)} × ${fmt(opts.thickness_mm)}))`,
@@ -368,9 +394,9 @@ export function crackGrowth(opts: CrackInput): CrackResult {
     );
   }
   if (gradient) {
-    steps.push(
+    st.steps.push(
       step(
-        id("gradient-initial"),
+        st.id("gradient-initial"),
         "Stress-gradient correction at the initial crack (the opening's field along the path)",
         "β = ∫σ(x)·k(x)·m(x,a) dx / ∫k(x)·m(x,a) dx, k the hole's Kirsch field, m the edge-crack Green's function",
         `β(${fmt(a0)} mm) = ${fmt(beta(a0))}; ligament to the opening ${fmt(gradient.ligament_mm)} mm`,
@@ -381,10 +407,10 @@ export function crackGrowth(opts: CrackInput): CrackResult {
     );
   }
   const dK0 = walker * stressIntensity(model, a0, range);
-  const parts = `${bulgingOn ? "M·" : ""}${gradient ? "β·" : ""}`;
-  steps.push(
+  const parts = termsOf(st, bulgingOn);
+  st.steps.push(
     step(
-      id("dk-initial"),
+      st.id("dk-initial"),
       `${walker !== 1 ? "Effective stress intensity range" : "Stress intensity range"} at the initial ${which}`,
       `${walker !== 1 ? "ΔK_eff" : "ΔK"} = ${parts}Y·Δσ·√(πa)${walker !== 1 ? "/(1 − R)^(1 − γ)" : ""}`,
       `${walker !== 1 ? "ΔK_eff" : "ΔK"} = ${bulgingOn ? `${fmt(M(a0))} × ` : ""}${gradient ? `${fmt(beta(a0))} × ` : ""}${fmt(Y0)} × ${fmt(range)} × √(π × ${fmt(a0 / 1000)} m)${walker !== 1 ? ` × ${fmt(walker)}` : ""}`,
@@ -393,26 +419,53 @@ export function crackGrowth(opts: CrackInput): CrackResult {
       PARIS,
     ),
   );
+  return dK0;
+}
 
-  // Critical size by the failure assessment diagram.
+/** The optional factors in front of Y, as the equations write them ("M·β·"). */
+function termsOf(st: Stage, bulgingOn: boolean): string {
+  return `${bulgingOn ? "M·" : ""}${st.opts.gradient ? "β·" : ""}`;
+}
+
+/** The failure assessment of a model from a start size: the critical size by the diagram. */
+function assess(st: Stage, mdl: Model, start: number): FadResult {
+  const { opts } = st;
+  return fadCriticalSize({
+    K: (a) => stressIntensity(mdl, a, opts.stressMax_MPa),
+    sigmaRef: (a) => referenceStress(mdl, a, opts.stressMax_MPa),
+    toughness_MPaSqrtM: opts.toughness_MPaSqrtM,
+    yield_MPa: opts.yield_MPa,
+    ultimate_MPa: opts.ultimate_MPa ?? opts.yield_MPa,
+    start_mm: start,
+    limit_mm: mdl.limit_mm,
+  });
+}
+
+/**
+ * Stage 4, the critical size by the failure assessment diagram: residual strength, not LEFM alone.
+ * Both limits of the diagram are written out (toughness at Kr = 1, collapse at Lr,max) so the
+ * reader sees which one the interaction lies near; a crack that reaches the opening first is
+ * critical by link-up. A section already at collapse without a crack, or a flaw already critical,
+ * is an input problem, not a result.
+ */
+function criticalSize(st: Stage, ms: ModelStage): { fad: FadResult; ac: number; by: CriticalBy } {
+  const { opts, which, stressName } = st;
+  const { model, bulgingOn, factorM } = ms;
+  const { shape, M, beta } = model;
+  const a0 = opts.initial_mm;
+  const sMax = opts.stressMax_MPa;
+  const Kc = opts.toughness_MPaSqrtM;
+  const gradient = opts.gradient;
+  const limit = model.limit_mm;
+  const parts = termsOf(st, bulgingOn);
   const W = opts.width_mm;
-  const fadOf = (mdl: Model, start: number) =>
-    fadCriticalSize({
-      K: (a) => stressIntensity(mdl, a, sMax),
-      sigmaRef: (a) => referenceStress(mdl, a, sMax),
-      toughness_MPaSqrtM: Kc,
-      yield_MPa: opts.yield_MPa,
-      ultimate_MPa: opts.ultimate_MPa ?? opts.yield_MPa,
-      start_mm: start,
-      limit_mm: mdl.limit_mm,
-    });
   if (referenceStress(model, 1e-9, sMax) / opts.yield_MPa >= lrCutOff(opts.yield_MPa, opts.ultimate_MPa ?? opts.yield_MPa)) {
     throw new InputError(
       "pressure.max_MPa",
       `The peak ${stressName} stress (${fmt(sMax)} MPa) already reaches the collapse limit of the section without any crack (flow stress ${fmt(((opts.ultimate_MPa ?? opts.yield_MPa) + opts.yield_MPa) / 2)} MPa).`,
     );
   }
-  const fad = fadOf(model, a0);
+  const fad = assess(st, model, a0);
   let ac = fad.critical_mm;
   let by: CriticalBy = fad.by;
   const linkUp = gradient !== undefined && ac >= gradient.ligament_mm * (1 - 1e-9);
@@ -422,9 +475,9 @@ export function crackGrowth(opts: CrackInput): CrackResult {
   }
   const Yc = geometryFactor(fad.lefm_mm, shape);
   const Mc = M(fad.lefm_mm);
-  steps.push(
+  st.steps.push(
     step(
-      id("critical-toughness"),
+      st.id("critical-toughness"),
       `LEFM limit: ${which} size at which the stress intensity reaches the toughness (Kr = 1)`,
       `a_K: ${parts}Y·σmax·√(πa) = K_mat`,
       `${bulgingOn ? `${fmt(Mc)} × ` : ""}${gradient ? `${fmt(beta(fad.lefm_mm))} × ` : ""}${fmt(Yc)} × ${fmt(sMax)} × √(π × ${fmt(fad.lefm_mm / 1000)} m) = ${fmt(Kc)}`,
@@ -433,9 +486,9 @@ export function crackGrowth(opts: CrackInput): CrackResult {
       "Irwin: K = Y·σ·√(πa) reaching K_c (Tada, Paris & Irwin); the Kr = 1 limit of the diagram",
     ),
   );
-  steps.push(
+  st.steps.push(
     step(
-      id("critical-collapse"),
+      st.id("critical-collapse"),
       `Collapse limit: ${which} size at which the reference stress reaches the flow stress (Lr = Lr,max)`,
       W === undefined
         ? "σ_ref = M·σmax = Lr,max·σy, Lr,max = (σy + σu)/(2σy)"
@@ -446,9 +499,9 @@ export function crackGrowth(opts: CrackInput): CrackResult {
       `${FAD}; reference stress of a through-wall flaw in a shell with the bulging factor (BS 7910, from memory)${W === undefined ? "" : "; net section of the strip (common practice)"}`,
     ),
   );
-  steps.push(
+  st.steps.push(
     step(
-      id("critical-fad"),
+      st.id("critical-fad"),
       `Critical ${which} size by the failure assessment diagram (set by ${fad.by === "toughness" ? "the toughness" : fad.by === "collapse" ? "collapse" : "the interaction of fracture and collapse"})`,
       "Kr = f(Lr), f = (1 + 0.5Lr²)^(−1/2)·[0.3 + 0.7·exp(−0.6Lr⁶)], Lr ≤ Lr,max",
       `at a = ${fmt(fad.critical_mm)} mm: Lr = ${fmt(fad.Lr)}, Kr = ${fmt(fad.Kr)}, f(Lr) = ${fmt(fad.Lr >= fad.LrMax ? 0 : fad.Kr)}`,
@@ -458,9 +511,9 @@ export function crackGrowth(opts: CrackInput): CrackResult {
     ),
   );
   if (linkUp) {
-    steps.push(
+    st.steps.push(
       step(
-        id("critical-link-up"),
+        st.id("critical-link-up"),
         "The crack reaches the opening before it is critical by the diagram: link-up",
         "a_crit = ligament from the hole's edge to the opening",
         `a_crit = ${fmt(gradient.ligament_mm)} mm (< ${fmt(fad.critical_mm)} mm by the diagram)`,
@@ -470,9 +523,9 @@ export function crackGrowth(opts: CrackInput): CrackResult {
       ),
     );
   }
-  steps.push(
+  st.steps.push(
     step(
-      id("critical"),
+      st.id("critical"),
       `Critical ${which} size (set by ${by})`,
       linkUp ? "a_crit = min(a_FAD, ligament)" : "a_crit = a_FAD",
       linkUp ? `a_crit = min(${fmt(fad.critical_mm)}, ${fmt(ac)})` : `a_crit = ${fmt(ac)}`,
@@ -488,111 +541,199 @@ export function crackGrowth(opts: CrackInput): CrackResult {
     );
   }
   if (ac > accurateLimit_mm(shape)) {
-    warnings.push(
+    st.warnings.push(
       `The critical ${which} (${fmt(ac)} mm) lies beyond the range where the width correction keeps its stated accuracy (${fmt(accurateLimit_mm(shape))} mm); treat the last part of the growth as approximate.`,
     );
   }
   const cc = bulgingHalfLength_mm(ac, shape);
+  const Rt = opts.shellRadius_mm * opts.thickness_mm;
   if (bulgingOn && (cc * cc) / Rt > factorM.range) {
-    warnings.push(
+    st.warnings.push(
       `At the critical size the ${which} reaches c²/(R·t) = ${fmt((cc * cc) / Rt)}, beyond the range of the bulging fit (${factorM.range}); the factor there is extrapolated.`,
     );
   }
+  return { fad, ac, by };
+}
 
-  // Growth and the inspection programme.
-  const rate = (mdl: Model) => (a_mm: number) => C * (walker * stressIntensity(mdl, a_mm, range)) ** m;
+/** The growth rate da/dN (m/cycle) at crack size a (mm) of a model under the range. */
+function rateOf(st: Stage, mdl: Model, range: number, walker: number): (a_mm: number) => number {
+  const { parisC: C, parisM: m } = st.opts;
+  return (a_mm) => C * (walker * stressIntensity(mdl, a_mm, range)) ** m;
+}
+
+/**
+ * Stage 5, growth: the Paris integral from the initial flaw to the critical size, with the a–N
+ * curve for the plot, and a hand check with the factors frozen at the initial flaw so a reader
+ * can see how much the changing factors (bulging, the gradient) shorten the life.
+ */
+function growth(
+  st: Stage,
+  ms: ModelStage,
+  ac: number,
+  range: number,
+  walker: number,
+  dK0: number,
+): { cycles: number; curve: CrackCurvePoint[] } {
+  const { opts, which } = st;
+  const { parisC: C, parisM: m } = opts;
+  const a0 = opts.initial_mm;
+  const parts = termsOf(st, ms.bulgingOn);
+  const g = growthCurve(rateOf(st, ms.model, range, walker), a0, ac);
+  st.steps.push(
+    step(
+      st.id("cycles"),
+      `Cycles to grow the ${which} from the initial flaw to its critical size`,
+      "N = ∫ da / (C·ΔK_eff^m), from a₀ to a_crit",
+      `N = ∫ da / (${fmt(C)} × (${walker !== 1 ? `${fmt(walker)}·` : ""}${parts}Y·${fmt(range)}·√(πa))^${fmt(m)}), a from ${fmt(a0)} to ${fmt(ac)} mm`,
+      g.cycles,
+      "cycles",
+      `${PARIS}; integrated numerically (adaptive Gauss–Kronrod in ln a)`,
+    ),
+  );
+  const k0 = dK0 / Math.sqrt((Math.PI * a0) / 1000);
+  const hand = parisClosedForm(a0 / 1000, ac / 1000, C, m, k0 * Math.sqrt(Math.PI));
+  st.steps.push(
+    step(
+      st.id("cycles-hand"),
+      "Hand check: cycles with the factors held at their initial values",
+      m === 2 ? "N = ln(a_c/a₀) / (C·k²·π), k = ΔK₀/√(πa₀)" : "N = (a₀^(1−m/2) − a_c^(1−m/2)) / (C·(k·√π)^m·(m/2 − 1)), k = ΔK₀/√(πa₀)",
+      `k = ${fmt(k0)} MPa, a₀ = ${fmt(a0 / 1000)} m, a_c = ${fmt(ac / 1000)} m, C = ${fmt(C)}, m = ${fmt(m)}`,
+      hand,
+      "cycles",
+      `${PARIS}; closed form for constant factors (differs from N where they change with a)`,
+    ),
+  );
+  return g;
+}
+
+/**
+ * Stage 6, the inspection programme: the threshold from the initial flaw (an assumed
+ * manufacturing or service flaw) and the repeat interval from the size an inspection finds
+ * reliably, each over the inspection factor, so at least two chances to find the crack remain.
+ */
+function inspectionProgramme(
+  st: Stage,
+  ms: ModelStage,
+  ac: number,
+  cycles: number,
+  range: number,
+  walker: number,
+): { threshold: number; repeat: number | null } {
+  const { opts, which } = st;
+  const threshold = cycles / opts.inspectionFactor;
+  st.steps.push(
+    step(
+      st.id("threshold"),
+      `Inspection threshold (${which}): growth from the initial flaw to critical over the factor`,
+      "N_th = N(a₀ → a_crit) / inspection factor",
+      `N_th = ${fmt(cycles)} / ${fmt(opts.inspectionFactor)}`,
+      threshold,
+      "cycles",
+      "Damage-tolerance practice: the first inspection before the assumed initial flaw could grow to critical, with a factor on life (common practice)",
+    ),
+  );
+  const ad = opts.detectable_mm;
+  if (ad === undefined) return { threshold, repeat: null };
+  const Nd = ad >= ac ? 0 : cyclesBetween(rateOf(st, ms.model, range, walker), Math.max(ad, 1e-9), ac);
+  const repeat = Nd / opts.inspectionFactor;
+  st.steps.push(
+    step(
+      st.id("repeat"),
+      `Repeat inspection interval (${which}): growth from the detectable size to critical over the factor`,
+      "N_rep = N(a_det → a_crit) / inspection factor",
+      ad >= ac
+        ? `a_det = ${fmt(ad)} mm ≥ a_crit = ${fmt(ac)} mm: no interval`
+        : `N_rep = ${fmt(Nd)} / ${fmt(opts.inspectionFactor)}, a from ${fmt(ad)} to ${fmt(ac)} mm`,
+      repeat,
+      "cycles",
+      "Damage-tolerance practice: at least two chances to find the crack between detectable and critical (common practice)",
+    ),
+  );
+  if (ad >= ac)
+    st.warnings.push(
+      `The detectable ${which} size (${fmt(ad)} mm) is already at or beyond the critical size (${fmt(ac)} mm): inspections by this method cannot find the crack in time.`,
+    );
+  return { threshold, repeat };
+}
+
+/**
+ * Stage 7, the comparison a gradient asks for: the same crack grown as if the stress along its
+ * path were uniform (the fastener hole alone), so the sheet and the a–N plot show how much the
+ * opening's rising field shortens the life.
+ */
+function uniformComparison(st: Stage, ms: ModelStage, range: number, walker: number): NonNullable<CrackResult["uniform"]> {
+  const a0 = st.opts.initial_mm;
+  const flat: Model = { ...ms.model, beta: () => 1, limit_mm: growthLimit_mm(ms.model.shape) };
+  const fu = assess(st, flat, a0);
+  const gu = growthCurve(rateOf(st, flat, range, walker), a0, fu.critical_mm);
+  st.steps.push(
+    step(
+      st.id("cycles-uniform"),
+      "For comparison: cycles to critical if the stress along the path were uniform (the fastener hole alone)",
+      "N = ∫ da / (C·ΔK^m), β = 1",
+      `a from ${fmt(a0)} to ${fmt(fu.critical_mm)} mm`,
+      gu.cycles,
+      "cycles",
+      PARIS,
+    ),
+  );
+  return { cycles: gu.cycles, critical_mm: fu.critical_mm, curve: gu.curve };
+}
+
+/**
+ * Paris-law growth of a through-crack from its initial to its critical size, with the critical
+ * size from the failure assessment diagram and the inspection programme. The stages run in the
+ * order the sheet reads them: model, driving range, factors at the initial flaw, critical size,
+ * growth, inspection programme, the uniform-field comparison, and leak before break.
+ * Units: lengths in mm, stresses in MPa, toughness in MPa·√m, C with da/dN in m/cycle.
+ */
+export function crackGrowth(opts: CrackInput): CrackResult {
+  validate(opts);
+  const orientation: CrackOrientation = opts.orientation ?? "axial";
+  const st: Stage = {
+    opts,
+    orientation,
+    id: (name) => (orientation === "circumferential" ? `crack-circ-${name}` : `crack-${name}`),
+    which: orientation === "circumferential" ? "circumferential crack" : "axial crack",
+    stressName: orientation === "circumferential" ? "axial" : "hoop",
+    steps: [],
+    warnings: [],
+  };
+  const shape: CrackShape = {
+    geometry: opts.geometry,
+    width_mm: opts.width_mm,
+    holeRadius_mm: opts.holeRadius_mm,
+    cracksAtHole: opts.cracksAtHole ?? 1,
+  };
+  const ms = crackModel(st, shape);
+  const { range, walker } = drivingRange(st);
+  const dK0 = initialFactors(st, ms, range, walker);
+  const { fad, ac, by } = criticalSize(st, ms);
+
   let cycles: number | null = null;
   let threshold: number | null = null;
   let repeat: number | null = null;
   let curve: CrackCurvePoint[] = [];
   let uniform: CrackResult["uniform"];
-  const ad = opts.detectable_mm;
   if (range > 0) {
-    const g = growthCurve(rate(model), a0, ac);
+    const g = growth(st, ms, ac, range, walker, dK0);
     cycles = g.cycles;
     curve = g.curve;
-    steps.push(
-      step(
-        id("cycles"),
-        `Cycles to grow the ${which} from the initial flaw to its critical size`,
-        "N = ∫ da / (C·ΔK_eff^m), from a₀ to a_crit",
-        `N = ∫ da / (${fmt(C)} × (${walker !== 1 ? `${fmt(walker)}·` : ""}${parts}Y·${fmt(range)}·√(πa))^${fmt(m)}), a from ${fmt(a0)} to ${fmt(ac)} mm`,
-        cycles,
-        "cycles",
-        `${PARIS}; integrated numerically (adaptive Gauss–Kronrod in ln a)`,
-      ),
-    );
-    const k0 = dK0 / Math.sqrt((Math.PI * a0) / 1000);
-    const hand = parisClosedForm(a0 / 1000, ac / 1000, C, m, k0 * Math.sqrt(Math.PI));
-    steps.push(
-      step(
-        id("cycles-hand"),
-        "Hand check: cycles with the factors held at their initial values",
-        m === 2 ? "N = ln(a_c/a₀) / (C·k²·π), k = ΔK₀/√(πa₀)" : "N = (a₀^(1−m/2) − a_c^(1−m/2)) / (C·(k·√π)^m·(m/2 − 1)), k = ΔK₀/√(πa₀)",
-        `k = ${fmt(k0)} MPa, a₀ = ${fmt(a0 / 1000)} m, a_c = ${fmt(ac / 1000)} m, C = ${fmt(C)}, m = ${fmt(m)}`,
-        hand,
-        "cycles",
-        `${PARIS}; closed form for constant factors (differs from N where they change with a)`,
-      ),
-    );
-    threshold = cycles / opts.inspectionFactor;
-    steps.push(
-      step(
-        id("threshold"),
-        `Inspection threshold (${which}): growth from the initial flaw to critical over the factor`,
-        "N_th = N(a₀ → a_crit) / inspection factor",
-        `N_th = ${fmt(cycles)} / ${fmt(opts.inspectionFactor)}`,
-        threshold,
-        "cycles",
-        "Damage-tolerance practice: the first inspection before the assumed initial flaw could grow to critical, with a factor on life (common practice)",
-      ),
-    );
-    if (ad !== undefined) {
-      const Nd = ad >= ac ? 0 : cyclesBetween(rate(model), Math.max(ad, 1e-9), ac);
-      repeat = Nd / opts.inspectionFactor;
-      steps.push(
-        step(
-          id("repeat"),
-          `Repeat inspection interval (${which}): growth from the detectable size to critical over the factor`,
-          "N_rep = N(a_det → a_crit) / inspection factor",
-          ad >= ac
-            ? `a_det = ${fmt(ad)} mm ≥ a_crit = ${fmt(ac)} mm: no interval`
-            : `N_rep = ${fmt(Nd)} / ${fmt(opts.inspectionFactor)}, a from ${fmt(ad)} to ${fmt(ac)} mm`,
-          repeat,
-          "cycles",
-          "Damage-tolerance practice: at least two chances to find the crack between detectable and critical (common practice)",
-        ),
-      );
-      if (ad >= ac)
-        warnings.push(
-          `The detectable ${which} size (${fmt(ad)} mm) is already at or beyond the critical size (${fmt(ac)} mm): inspections by this method cannot find the crack in time.`,
-        );
-    }
-    if (gradient) {
-      const flat: Model = { ...model, beta: () => 1, limit_mm: growthLimit_mm(shape) };
-      const fu = fadOf(flat, a0);
-      const gu = growthCurve(rate(flat), a0, fu.critical_mm);
-      uniform = { cycles: gu.cycles, critical_mm: fu.critical_mm, curve: gu.curve };
-      steps.push(
-        step(
-          id("cycles-uniform"),
-          "For comparison: cycles to critical if the stress along the path were uniform (the fastener hole alone)",
-          "N = ∫ da / (C·ΔK^m), β = 1",
-          `a from ${fmt(a0)} to ${fmt(fu.critical_mm)} mm`,
-          gu.cycles,
-          "cycles",
-          PARIS,
-        ),
-      );
-    }
+    ({ threshold, repeat } = inspectionProgramme(st, ms, ac, g.cycles, range, walker));
+    if (opts.gradient) uniform = uniformComparison(st, ms, range, walker);
   } else {
-    warnings.push(`The ${stressName} stress does not vary, so the ${which} does not grow by fatigue; only its critical size applies.`);
+    st.warnings.push(
+      `The ${st.stressName} stress does not vary, so the ${st.which} does not grow by fatigue; only its critical size applies.`,
+    );
   }
 
-  const leakBeforeBreak = opts.leakCheck === false ? null : leakCheck(opts, sMax, Kc, factorM.k, bulgingOn, steps, warnings);
+  const leakBeforeBreak =
+    opts.leakCheck === false
+      ? null
+      : leakCheck(opts, opts.stressMax_MPa, opts.toughness_MPaSqrtM, ms.factorM.k, ms.bulgingOn, st.steps, st.warnings);
   return {
     orientation,
-    stressMax_MPa: sMax,
+    stressMax_MPa: opts.stressMax_MPa,
     range_MPa: range,
     critical_mm: ac,
     criticalBy: by,
@@ -604,8 +745,8 @@ export function crackGrowth(opts: CrackInput): CrackResult {
     curve,
     ...(uniform ? { uniform } : {}),
     leakBeforeBreak,
-    steps,
-    warnings,
+    steps: st.steps,
+    warnings: st.warnings,
   };
 }
 
