@@ -17,7 +17,7 @@ const cabinBarrel: CheckDocument = {
   calcNumber: "L30-FUS-017",
   notes:
     "Demo scenario: skin bay between two frames at a passenger window; the window opening is a rounded rectangle with a row of fastener holes round its upper aft corner." +
-    " A crack is grown from a fastener hole 12 mm above the window's top edge, on its axial centre line, into the window's stress field; a fleet of 150 invented aircraft is assumed.",
+    " A crack is grown from fastener hole 5 of that row (the one with the highest stress concentration, near the top of the corner) straight to the nearest point of the corner's edge, into the window's stress field; a fleet of 150 invented aircraft is assumed.",
   display: { length: "mm", stress: "MPa", pressure: "kPa", altitude: "m" },
   shell: { form: "cylinder", radius_mm: 1150, radiusAt: "mean", thickness_mm: 1.0, theory: "auto" },
   pressure: { fromAltitude: { flight_m: 7620, cabin_m: 2440 }, min_MPa: 0 },
@@ -38,8 +38,7 @@ const cabinBarrel: CheckDocument = {
   crack: {
     geometry: "hole-through",
     initial_mm: 1.27,
-    holeRadius_mm: 2.4,
-    openingDistance_mm: 12,
+    fastener: 5,
     detectableBy: "surface-eddy-current",
     width_mm: 480,
     inspectionFactor: 2,

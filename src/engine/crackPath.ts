@@ -2,10 +2,16 @@
  * The stress along the path of a crack that grows from a fastener hole toward an opening.
  *
  * An opening's field along a path is given as influence coefficients, as its boundary points are
- * (see concentration.ts): the stress opening an axial crack (the hoop-direction stress) at a point
- * of the path is σ = hoopCoeff·σ_hoop + axialCoeff·σ_axial. Any solver of an opening's field can
- * supply such a function; until one does, the elliptical and circular openings get Inglis's and
- * Kirsch's closed forms here.
+ * (see concentration.ts): the stress normal to the path at a point of it (the stress that opens a
+ * crack lying along the path) is σ = hoopCoeff·σ_hoop + axialCoeff·σ_axial. Three sources:
+ * - on the axial centre line beyond an elliptical or circular opening, Inglis's and Kirsch's
+ *   closed forms (below);
+ * - on that line beyond a rounded rectangle, the plane-elasticity solver (roundedRectangleAxisField);
+ * - along any straight path, from any outline and the holes solved with it, the solver read as the
+ *   stress normal to the path (solvedPathField), and for a crack from one of the opening's own
+ *   fastener holes the path to the nearest point of the opening's edge (fastenerPath).
+ * The solver's coordinates are those of openings/: x around the hoop, y along the axis. The closed
+ * forms below use their own frame (x along the axis), stated where they are.
  *
  * Inglis's elliptical hole, semi-axes A along the axis (x) and B around the hoop (y), in remote
  * stresses σx∞ (axial) and σy∞ (hoop), on the x-axis beyond the vertex (x ≥ A): Muskhelishvili's
@@ -19,9 +25,11 @@
  * (m = 0) the potentials are Kirsch's.
  */
 import type { PathField } from "./crack.ts";
-import { discretize, type Outline } from "./openings/geometry.ts";
+import { InputError } from "./errors.ts";
+import { discretize, ellipse, nearestOnOutline, type Outline } from "./openings/geometry.ts";
 import { outlineOf } from "./openings/index.ts";
-import { buildOperator, solve, stressAt } from "./openings/solver.ts";
+import { buildOperator, type PlaneStress, solve, stressAt } from "./openings/solver.ts";
+import { fmt } from "./step.ts";
 
 /** σy on the x-axis at x ≥ A for a unit remote tension along y (c = −1) or along x (c = +1). */
 function inglisAxis(x_mm: number, A_mm: number, B_mm: number, c: 1 | -1): number {
@@ -60,29 +68,33 @@ export function ellipseAxisField(halfAxisAlongAxial_mm: number, halfAxisAlongHoo
 export const INGLIS_SOURCE =
   "Inglis (1913) elliptical hole, stress along the axis by Muskhelishvili's potentials (§82, from memory); Kirsch (1898) for a circle";
 
+/** Stress normal to a straight path of unit direction (dx, dy): σnn = n·σ·n with n = (−dy, dx). */
+function normalStress(q: PlaneStress, dx: number, dy: number): number {
+  const [nx, ny] = [-dy, dx];
+  return nx * nx * q.sxx + ny * ny * q.syy + 2 * nx * ny * q.sxy;
+}
+
 /**
- * The field along a straight path out from an opening of any smooth outline, by the plane-elasticity
- * solver of openings/ (x along the axis, y around the hoop): two unit solutions, remote hoop stress
- * and remote axial stress, read at each point of the path as the stress normal to it. This is how an
- * opening the closed forms do not cover plugs into the crack's path.
+ * The field along a straight path out from an opening of any smooth outline (and any holes solved
+ * with it), by the plane-elasticity solver of openings/, in its coordinates: x around the hoop, y
+ * along the axis, as outlineOf builds outlines. Two unit solutions, remote hoop stress (σxx = 1)
+ * and remote axial stress (σyy = 1), read at each point of the path as the stress normal to it:
+ * the stress that opens a crack lying along the path. s is the distance from `start`.
  */
 export function solvedPathField(
-  outline: Outline,
+  outlines: Outline | Outline[],
   start: [number, number],
-  direction: [number, number] = [1, 0],
+  direction: [number, number] = [0, 1],
 ): (s_mm: number) => PathField {
-  const op = buildOperator(discretize([outline]));
-  const hoop = solve(op, { sxx: 0, syy: 1 });
-  const axial = solve(op, { sxx: 1, syy: 0 });
+  const op = buildOperator(discretize(Array.isArray(outlines) ? outlines : [outlines], { maxPanels: 600 }));
+  const hoop = solve(op, { sxx: 1, syy: 0 });
+  const axial = solve(op, { sxx: 0, syy: 1 });
   const len = Math.hypot(direction[0], direction[1]);
   const [dx, dy] = [direction[0] / len, direction[1] / len];
-  // Normal to the path: n = (−dy, dx); σnn = n·σ·n.
-  const [nx, ny] = [-dy, dx];
-  const normal = (q: { sxx: number; syy: number; sxy: number }) => nx * nx * q.sxx + ny * ny * q.syy + 2 * nx * ny * q.sxy;
   return (s) => {
     const px = start[0] + dx * Math.max(s, 0);
     const py = start[1] + dy * Math.max(s, 0);
-    return { hoopCoeff: normal(stressAt(hoop, px, py)), axialCoeff: normal(stressAt(axial, px, py)) };
+    return { hoopCoeff: normalStress(stressAt(hoop, px, py), dx, dy), axialCoeff: normalStress(stressAt(axial, px, py), dx, dy) };
   };
 }
 
@@ -165,4 +177,99 @@ export function roundedRectangleAxisField(cut: RoundedRectangle, length_mm: numb
   if (solvedAxisCache.size > 32) solvedAxisCache.clear();
   solvedAxisCache.set(key, table);
   return table;
+}
+
+/** A fastener hole round the opening, centre from the opening's centre (x around the hoop, y along the axis). */
+export interface PathHole {
+  hoop_mm: number;
+  axial_mm: number;
+  radius_mm: number;
+}
+
+/** The straight path of a crack from one fastener hole to the opening, and the opening's field along it. */
+export interface FastenerPath {
+  /** 0-based index of the hole in the cutout's list. */
+  index: number;
+  /** Where the crack starts: the point of the hole's edge facing the opening (x hoop, y axial, mm). */
+  start_mm: [number, number];
+  /** Where it links up: the nearest point of the opening's outline. */
+  end_mm: [number, number];
+  /** Unit direction of the path. */
+  direction: [number, number];
+  /** Clear ligament from the hole's edge to the opening's edge along the path (mm). */
+  ligament_mm: number;
+  /** Angle of the path from the axial direction, 0°–90°. */
+  angleFromAxis_deg: number;
+  /** 0-based indices of the other holes solved with the opening because they stand close to the path. */
+  neighbours: number[];
+  /** Stress normal to the path at x mm from the hole's edge (0 ≤ x ≤ ligament), per unit remote hoop and axial stress. */
+  field: (x_mm: number) => PathField;
+}
+
+/** Clear gap from a hole's edge to the segment p→q. */
+function gapToSegment(h: PathHole, p: [number, number], q: [number, number]): number {
+  const [ux, uy] = [q[0] - p[0], q[1] - p[1]];
+  const L2 = ux * ux + uy * uy;
+  const t = Math.min(Math.max(((h.hoop_mm - p[0]) * ux + (h.axial_mm - p[1]) * uy) / L2, 0), 1);
+  return Math.hypot(h.hoop_mm - p[0] - t * ux, h.axial_mm - p[1] - t * uy) - h.radius_mm;
+}
+
+const fastenerPathCache = new Map<string, FastenerPath>();
+
+/**
+ * The crack from fastener hole `index` toward the opening, along the straight line from the hole's
+ * centre to the nearest point of the opening's outline: the shortest ligament, so the crack links
+ * up soonest (the conservative choice of path); near an edge that line is also normal to the edge,
+ * across the tangential stress that opens the crack. The field is the stress normal to the path in
+ * the plane-elasticity solution of the opening, with the other fastener holes that stand within
+ * `jointRadii` of their radius of the path (the openings module's rule for holes that interact) and
+ * without the crack's own hole, whose effect Bowie's factor carries. Solved once per geometry for a
+ * unit hoop and a unit axial stress and tabulated at the Chebyshev nodes along the path.
+ */
+export function fastenerPath(opening: Outline, openingKey: string, holes: PathHole[], index: number, jointRadii: number): FastenerPath {
+  const key = JSON.stringify([openingKey, holes, index, jointRadii]);
+  const known = fastenerPathCache.get(key);
+  if (known) return known;
+  const h = holes[index];
+  const near = nearestOnOutline(opening, h.hoop_mm, h.axial_mm);
+  const ligament = near.distance_mm - h.radius_mm;
+  if (!(ligament > 0))
+    throw new InputError(
+      "crack.fastener",
+      `fastener hole ${index + 1} reaches into the opening (its edge is ${fmt(-ligament)} mm past the opening's edge): a crack from it has no ligament to grow across`,
+    );
+  const direction: [number, number] = [(near.x - h.hoop_mm) / near.distance_mm, (near.y - h.axial_mm) / near.distance_mm];
+  const start: [number, number] = [h.hoop_mm + h.radius_mm * direction[0], h.axial_mm + h.radius_mm * direction[1]];
+  const end: [number, number] = [near.x, near.y];
+  const neighbours: number[] = [];
+  holes.forEach((g, j) => {
+    if (j === index) return;
+    const gap = gapToSegment(g, start, end);
+    if (gap <= 0)
+      throw new InputError(
+        "crack.fastener",
+        `fastener hole ${j + 1} stands across the path from hole ${index + 1} to the opening: the crack would reach that hole first; choose the hole nearer the opening`,
+      );
+    if (gap < jointRadii * g.radius_mm) neighbours.push(j);
+  });
+  const outlines = [
+    opening,
+    ...neighbours.map((j) => ellipse(holes[j].radius_mm, holes[j].radius_mm, holes[j].hoop_mm, holes[j].axial_mm)),
+  ];
+  const direct = solvedPathField(outlines, start, direction);
+  // Read only along the ligament: beyond it the path runs inside the opening.
+  const field = tabulatePathField((x) => direct(Math.min(Math.max(x, 0), ligament)), ligament);
+  const path: FastenerPath = {
+    index,
+    start_mm: start,
+    end_mm: end,
+    direction,
+    ligament_mm: ligament,
+    angleFromAxis_deg: (Math.acos(Math.min(Math.abs(direction[1]), 1)) * 180) / Math.PI,
+    neighbours,
+    field,
+  };
+  if (fastenerPathCache.size > 32) fastenerPathCache.clear();
+  fastenerPathCache.set(key, path);
+  return path;
 }

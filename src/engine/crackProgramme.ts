@@ -16,9 +16,19 @@ import { TYPICAL_DETECTABLE_MM, TYPICAL_DETECTABLE_SOURCE } from "../materials/i
 import type { ResolvedCheck } from "./input.ts";
 import { crackGrowth, type CrackGradient, type CrackResult } from "./crack.ts";
 import type { CrackOrientation } from "./crackGeometry.ts";
-import { ellipseAxisField, INGLIS_SOURCE, roundedRectangleAxisField } from "./crackPath.ts";
+import {
+  ellipseAxisField,
+  type FastenerPath,
+  fastenerPath,
+  INGLIS_SOURCE,
+  PATH_NODES,
+  type PathHole,
+  roundedRectangleAxisField,
+} from "./crackPath.ts";
 import type { Evaluation } from "./evaluate.ts";
 import type { Load } from "./load.ts";
+import { SOLVER_SOURCE } from "./openings/field.ts";
+import { JOINT_LIGAMENT_RADII, outlineOf, type ShapeCutout } from "./openings/index.ts";
 import type { CheckResult } from "./result.ts";
 import { fmt, step, type Step } from "./step.ts";
 
@@ -89,6 +99,80 @@ function openingGradient(input: ResolvedCheck, e: Evaluation, holeRadius_mm: num
   };
 }
 
+/** A crack from one of the opening's own fastener holes: its path, its field and the steps and warnings that name them. */
+interface CornerCrack {
+  gradient: CrackGradient;
+  path: FastenerPath;
+  steps: Step[];
+  warnings: string[];
+}
+
+/**
+ * The crack from fastener hole `number` (1-based) of the cutout, straight to the nearest point of
+ * the opening's edge (crackPath.ts fastenerPath). Its field is the stress normal to that path,
+ * hoopCoeff + λ·axialCoeff per unit nominal hoop stress at peak: both membrane stresses drive it
+ * through the opening's field, and the nominal hoop stress carries it in the growth (the crack
+ * takes the axial crack's place and its larger bulging factor, the conservative one of the two).
+ */
+function cornerCrack(input: ResolvedCheck, e: Evaluation, number: number): CornerCrack {
+  const cut = input.cutout as ShapeCutout & { fasteners?: PathHole[] };
+  const holes = (cut.fasteners ?? []).map((f) => ({ hoop_mm: f.hoop_mm, axial_mm: f.axial_mm, radius_mm: f.radius_mm }));
+  const shape: ShapeCutout = { ...cut };
+  delete (shape as { fasteners?: unknown }).fasteners;
+  delete (shape as { reinforcement?: unknown }).reinforcement;
+  const path = fastenerPath(outlineOf(shape), JSON.stringify(shape), holes, number - 1, JOINT_LIGAMENT_RADII);
+  const lambda = e.hoopMax > 0 ? e.axialMax / e.hoopMax : 0;
+  const hole = holes[number - 1];
+  const [sx, sy] = path.start_mm;
+  const [ex, ey] = path.end_mm;
+  const bearing = (Math.atan2(path.direction[1], path.direction[0]) * 180) / Math.PI;
+  const others = path.neighbours.map((j) => j + 1);
+  const with_ = others.length
+    ? `, with fastener hole${others.length > 1 ? "s" : ""} ${others.join(", ")} (within ${JOINT_LIGAMENT_RADII} radii of the path) in the solution`
+    : ", the other fastener holes left out (none within 3 radii of the path)";
+  const source = `the opening's field by the plane-elasticity solver (${SOLVER_SOURCE}), read as the stress normal to the straight path from fastener hole ${number} to the opening${with_} and without the crack's own hole (Bowie's factor carries it), tabulated at ${PATH_NODES} Chebyshev nodes along the path, with the biaxial ratio λ = ${fmt(lambda)}`;
+  const steps: Step[] = [
+    step(
+      "crack-path",
+      `Path of the crack from fastener hole ${number}: straight to the nearest point of the opening's edge`,
+      "from the hole's edge facing the opening, C + r·d, to P, d = (P − C)/|P − C|; ligament = |P − C| − r",
+      `C = (${fmt(hole.hoop_mm)}, ${fmt(hole.axial_mm)}) mm, r = ${fmt(hole.radius_mm)} mm; from (${fmt(sx)}, ${fmt(sy)}) to P = (${fmt(ex)}, ${fmt(ey)}) mm (hoop, axial); direction ${fmt(bearing, 3)}° from the hoop direction, ${fmt(path.angleFromAxis_deg, 3)}° from the axis`,
+      path.ligament_mm,
+      "mm",
+      "The shortest ligament to the opening: the crack links up soonest (conservative choice); near the edge this line is normal to the edge and so across the tangential stress that opens the crack (common practice)",
+    ),
+    step(
+      "crack-path-field",
+      `Stress normal to the path, per unit nominal hoop stress: at the hole's edge and at the opening's edge`,
+      "σn(x)/σθ = c_θ(x) + λ·c_x(x), from the unit hoop and unit axial solutions",
+      `σn/σθ = ${fmt(path.field(0).hoopCoeff + lambda * path.field(0).axialCoeff)} at the hole's edge, ${fmt(path.field(path.ligament_mm).hoopCoeff + lambda * path.field(path.ligament_mm).axialCoeff)} at the opening's edge (λ = ${fmt(lambda)})`,
+      path.field(path.ligament_mm).hoopCoeff + lambda * path.field(path.ligament_mm).axialCoeff,
+      "—",
+      SOLVER_SOURCE,
+    ),
+  ];
+  const warnings = [
+    `The crack from fastener hole ${number} is taken to grow straight along the shortest line to the opening's edge, ${fmt(path.angleFromAxis_deg, 3)}° from the axis, opened by the stress normal to that line. A real crack turns to run across the largest principal stress: near the edge that is about the same line, but between the hole and the edge it may curve, and the shear along the line is left out. It is reported as the axial crack (driven by the hoop stress, with the axial crack's bulging factor).`,
+  ];
+  if (path.angleFromAxis_deg > 45)
+    warnings.push(
+      `The path from fastener hole ${number} runs nearer the hoop direction than the axis (${fmt(path.angleFromAxis_deg, 3)}° from the axis): the crack is still reported as the axial crack, with the axial crack's bulging factor (the larger of the two, so conservative), and its field carries the axial stress through λ.`,
+    );
+  return {
+    gradient: {
+      field: (x) => {
+        const f = path.field(x);
+        return f.hoopCoeff + lambda * f.axialCoeff;
+      },
+      ligament_mm: path.ligament_mm,
+      source,
+    },
+    path,
+    steps,
+    warnings,
+  };
+}
+
 /** Grow the crack of the check in each orientation that applies and set out the inspection programme. */
 export function damageTolerance(input: ResolvedCheck, e: Evaluation, load: Load): DamageTolerance {
   const c = input.crack!;
@@ -97,8 +181,17 @@ export function damageTolerance(input: ResolvedCheck, e: Evaluation, load: Load)
   const warnings: string[] = [];
   const requested = c.orientation ?? (input.axialExtra ? "both" : "axial");
   const orientations: CrackOrientation[] = requested === "both" ? ["axial", "circumferential"] : [requested];
-  const fastener = c.openingDistance_mm !== undefined;
-  const holeRadius = c.holeRadius_mm ?? (input.cutout.kind === "circular-hole" ? input.cutout.radius_mm : undefined);
+  const fastener = c.openingDistance_mm !== undefined || c.fastener !== undefined;
+  const corner = c.fastener !== undefined ? cornerCrack(input, e, c.fastener) : undefined;
+  const holeRadius = corner
+    ? input.cutout.kind !== "given" && input.cutout.fasteners
+      ? input.cutout.fasteners[c.fastener! - 1].radius_mm
+      : undefined
+    : (c.holeRadius_mm ?? (input.cutout.kind === "circular-hole" ? input.cutout.radius_mm : undefined));
+  if (corner) {
+    steps.push(...corner.steps);
+    warnings.push(...corner.warnings);
+  }
 
   let detectable = c.detectable_mm;
   if (c.detectableBy) {
@@ -124,7 +217,14 @@ export function damageTolerance(input: ResolvedCheck, e: Evaluation, load: Load)
   for (const o of orientations) {
     const d = drive(load, e, o, mat.parisM!);
     if (d.step) steps.push(d.step);
-    const gradient = fastener && o === "axial" ? openingGradient(input, e, holeRadius!, c.openingDistance_mm!) : undefined;
+    const gradient =
+      o !== "axial"
+        ? undefined
+        : corner
+          ? corner.gradient
+          : fastener
+            ? openingGradient(input, e, holeRadius!, c.openingDistance_mm!)
+            : undefined;
     results.push(
       crackGrowth({
         geometry: c.geometry,
@@ -151,7 +251,11 @@ export function damageTolerance(input: ResolvedCheck, e: Evaluation, load: Load)
         leakCheck: o === "axial",
       }),
     );
-    if (fastener && o === "circumferential")
+    if (corner && o === "circumferential")
+      warnings.push(
+        `The circumferential crack from fastener hole ${c.fastener} is grown in the uniform axial stress, with Bowie's factor for the hole alone: the opening's field along its path is not modelled, and near the opening that field can be higher, so this crack's life may read long.`,
+      );
+    else if (fastener && o === "circumferential")
       warnings.push(
         "The circumferential crack from the fastener hole grows away from the opening's line of highest stress; it is grown in the uniform axial field (the opening's field along its path is not modelled).",
       );
@@ -216,6 +320,17 @@ export function damageTolerance(input: ResolvedCheck, e: Evaluation, load: Load)
       curve: r.curve,
     })),
     leakBeforeBreak: lbb,
+    ...(corner
+      ? {
+          path: {
+            fastener: c.fastener!,
+            start_mm: corner.path.start_mm,
+            end_mm: corner.path.end_mm,
+            ligament_mm: corner.path.ligament_mm,
+            angleFromAxis_deg: corner.path.angleFromAxis_deg,
+          },
+        }
+      : {}),
   };
   if (load.isSpectrum) {
     const perPass = load.cycles.reduce((s, x) => s + x.count, 0);

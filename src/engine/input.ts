@@ -195,13 +195,41 @@ export function resolveCheck(parsed: ParsedCheck): { ok: true; value: ResolvedCh
     if (
       parsed.crack.geometry === "hole-through" &&
       parsed.crack.holeRadius_mm === undefined &&
+      parsed.crack.fastener === undefined &&
       !(parsed.cutout.kind === "circular-hole" && parsed.cutout.radius_mm)
     ) {
       errors.push({ path: "crack.holeRadius_mm", message: "a crack from a hole needs the hole radius (here or as cutout.radius_mm)" });
     }
     const c = parsed.crack;
     const cut = parsed.cutout;
-    if (c.openingDistance_mm !== undefined) {
+    if (c.fastener !== undefined) {
+      const holes = cut.kind !== "given" ? (cut.fasteners ?? []) : [];
+      const hole = holes[c.fastener - 1];
+      if (!hole)
+        errors.push({
+          path: "crack.fastener",
+          message: holes.length
+            ? `crack.fastener is ${c.fastener}, but cutout.fasteners lists ${holes.length} hole${holes.length === 1 ? "" : "s"}: give a number from 1 to ${holes.length}`
+            : "crack.fastener names a hole of cutout.fasteners, but the cutout lists no fastener holes",
+        });
+      else if (c.holeRadius_mm !== undefined && Math.abs(c.holeRadius_mm - hole.radius_mm) > 1e-9 * hole.radius_mm)
+        errors.push({
+          path: "crack.holeRadius_mm",
+          message: `the crack's hole radius (${c.holeRadius_mm} mm) differs from fastener hole ${c.fastener}'s (${hole.radius_mm} mm): the crack grows from that hole, so it must use the radius the fatigue check uses; leave crack.holeRadius_mm out`,
+        });
+      if (cut.kind === "none" || cut.kind === "given" || (cut.kind === "circular-hole" && cut.radius_mm === undefined))
+        errors.push({
+          path: "crack.fastener",
+          message:
+            "a crack growing from a fastener hole toward the opening needs the opening's shape: give its outline or dimensions as the cutout",
+        });
+      if (c.orientation === "circumferential")
+        errors.push({
+          path: "crack.orientation",
+          message:
+            'the crack from a fastener hole toward the opening takes the place of the axial crack (it is driven by the hoop stress, with the stress normal to its path from both membrane stresses): choose "axial" or "both"',
+        });
+    } else if (c.openingDistance_mm !== undefined) {
       if (c.holeRadius_mm === undefined)
         errors.push({
           path: "crack.holeRadius_mm",

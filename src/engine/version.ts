@@ -1,2 +1,2 @@
 /** Changes whenever a method or a default changes a number, so a sheet can be verified against the engine that made it. */
-export const ENGINE_VERSION = "hoopwise-engine/0.4.1";
+export const ENGINE_VERSION = "hoopwise-engine/0.5.0";

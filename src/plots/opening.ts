@@ -1,7 +1,8 @@
 /**
  * The opening as a picture: its outline coloured by the edge stress per unit nominal hoop stress
  * (at the biaxial ratio of maximum pressure), the governing point, the fastener holes with their
- * Kt and the curvature parameter; and the edge stress against arc length round the opening.
+ * Kt, the curvature parameter and the path of a crack grown from one of the holes; and the edge
+ * stress against arc length round the opening.
  */
 import { formatValue, isFiniteNumber } from "./format.ts";
 import { horizontalLineLabel, type LegendEntry, makeFrame } from "./frame.ts";
@@ -15,6 +16,8 @@ export interface OpeningPictureData {
   governing: { hoop_mm: number; axial_mm: number; kt: number; at: "opening" | "fastener"; index?: number };
   fasteners: { hoop_mm: number; axial_mm: number; radius_mm: number; kt: number; solvedWithOpening: boolean }[];
   curvature: { beta: number; limit: number; within: boolean } | null;
+  /** A crack grown from one of the fastener holes: its straight path from the hole's edge to the opening's edge. */
+  crackPath?: { fastener: number; start_mm: [number, number]; end_mm: [number, number]; ligament_mm: number };
 }
 
 /** Colour of an edge stress ratio: blue (compression) through grey to red (the peak); colour-blind-safe ends. */
@@ -37,7 +40,7 @@ export function openingPicture(data: OpeningPictureData, opts?: PlotOptions): st
   const xs = [...edge.map((e) => e[0]), ...fast.flatMap((f) => [f.hoop_mm - f.radius_mm, f.hoop_mm + f.radius_mm])];
   const ys = [...edge.map((e) => e[1]), ...fast.flatMap((f) => [f.axial_mm - f.radius_mm, f.axial_mm + f.radius_mm])];
   const heading = opts?.title ?? "Edge stress round the opening";
-  const label = `${heading}: outline coloured by the edge stress per unit nominal hoop stress, peak Kt ${formatValue(data.governing?.kt ?? NaN)} at the ${data.governing?.at === "fastener" ? `edge of fastener hole ${(data.governing.index ?? 0) + 1}` : "opening's edge"}${fast.length ? `; ${fast.length} fastener holes` : ""}${data.curvature ? `; curvature parameter β ${formatValue(data.curvature.beta)}` : ""}`;
+  const label = `${heading}: outline coloured by the edge stress per unit nominal hoop stress, peak Kt ${formatValue(data.governing?.kt ?? NaN)} at the ${data.governing?.at === "fastener" ? `edge of fastener hole ${(data.governing.index ?? 0) + 1}` : "opening's edge"}${fast.length ? `; ${fast.length} fastener holes` : ""}${data.curvature ? `; curvature parameter β ${formatValue(data.curvature.beta)}` : ""}${data.crackPath ? `; crack path from fastener hole ${data.crackPath.fastener} to the opening's edge` : ""}`;
   const out: string[] = [];
   out.push(
     `<svg xmlns="http://www.w3.org/2000/svg" class="hoopwise-plot plot-opening" viewBox="0 0 ${W} ${H}" width="100%" role="img" aria-label="${escapeXml(label)}" font-family="${escapeXml(FONT_FAMILY)}" fill="#000">`,
@@ -105,6 +108,20 @@ export function openingPicture(data: OpeningPictureData, opts?: PlotOptions): st
       `<circle class="fastener" cx="${num(p[0])}" cy="${num(p[1])}" r="${num(r)}" fill="${colourOf(f.kt, lo, hi)}" stroke="#000" stroke-width="${f.solvedWithOpening ? 2 : 1}"/>`,
     );
     out.push(textAt(p[0] + r + 4, p[1] - r - 2, `${k + 1}: ${formatValue(f.kt)}`, { size: FONT_SIZE.note - 2, halo: true }));
+  }
+  // the crack's path from its hole to the opening's edge
+  const cp = data.crackPath;
+  if (cp && [...cp.start_mm, ...cp.end_mm, cp.ligament_mm].every(isFiniteNumber)) {
+    const a = P(cp.start_mm[0], cp.start_mm[1]);
+    const b = P(cp.end_mm[0], cp.end_mm[1]);
+    out.push(polyline([a, b], { color: "#000", dash: DASH.solid, width: 3 }, "crack-path"));
+    out.push(
+      textAt(a[0] - 8, a[1] - 10, `crack from hole ${cp.fastener}: ${formatValue(u.length(cp.ligament_mm))} ${u.lengthUnit} to the edge`, {
+        size: FONT_SIZE.note - 2,
+        halo: true,
+        anchor: "end",
+      }),
+    );
   }
   // governing point
   const g = data.governing;

@@ -179,9 +179,8 @@ export function plotInputs(r: CheckResult, units: Units, face: { title?: string 
   if (opening) {
     figures.push({
       id: "opening",
-      caption:
-        "The opening's outline coloured by its edge stress per unit nominal hoop stress at maximum pressure, the governing point, the fastener holes with their Kt, and the curvature parameter.",
-      svg: openingPicture(opening, opts),
+      caption: `The opening's outline coloured by its edge stress per unit nominal hoop stress at maximum pressure, the governing point, the fastener holes with their Kt, and the curvature parameter${r.crack?.path ? `; the black line is the straight path of the crack from fastener hole ${r.crack.path.fastener} to the opening's edge` : ""}.`,
+      svg: openingPicture(r.crack?.path ? { ...opening, crackPath: r.crack.path } : opening, opts),
     });
     figures.push({
       id: "edge-stress",

@@ -442,7 +442,15 @@ export const crackSchema = z
     openingDistance_mm: positive("the distance from the fastener hole to the opening", 1e4, FLOORS.length)
       .optional()
       .describe(
-        "Centre of the fastener hole to the opening's edge, on the axial line through the opening's highest stress; the crack grows toward the opening",
+        "Centre of a fastener hole (of holeRadius_mm) to the opening's edge, on the opening's axial centre line; the crack grows toward the opening. For one of the cutout's own holes use fastener",
+      ),
+    fastener: num("the fastener hole the crack grows from")
+      .int({ error: "crack.fastener must be a whole number: the place of the hole in cutout.fasteners, counting from 1" })
+      .min(1, { error: "crack.fastener counts the holes of cutout.fasteners from 1" })
+      .max(200, { error: "crack.fastener must be at most 200, the most fastener holes a cutout takes" })
+      .optional()
+      .describe(
+        "The fastener hole of cutout.fasteners the crack grows from (1 = the first): it grows straight to the nearest point of the opening's edge",
       ),
     inspectionFactor: num("the inspection factor")
       .min(1, { error: "the inspection factor must be at least 1" })
@@ -469,6 +477,19 @@ export const crackSchema = z
         code: "custom",
         path: ["openingDistance_mm"],
         message: 'a crack growing toward an opening starts at a fastener hole: choose the "hole-through" geometry',
+      });
+    if (c.fastener !== undefined && c.openingDistance_mm !== undefined)
+      ctx.addIssue({
+        code: "custom",
+        path: ["fastener"],
+        message:
+          "give either crack.fastener (a hole of cutout.fasteners) or crack.openingDistance_mm (a hole on the opening's axial centre line), not both",
+      });
+    if (c.fastener !== undefined && c.geometry !== "hole-through")
+      ctx.addIssue({
+        code: "custom",
+        path: ["fastener"],
+        message: 'a crack from a fastener hole starts at that hole: choose the "hole-through" geometry',
       });
     if (c.openingDistance_mm !== undefined && c.holeRadius_mm !== undefined && c.openingDistance_mm <= c.holeRadius_mm)
       ctx.addIssue({

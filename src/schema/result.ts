@@ -150,6 +150,16 @@ const crackSchema = z.strictObject({
   uniformCritical_mm: num.optional(),
   orientations: z.array(orientationResultSchema),
   leakBeforeBreak: z.strictObject({ leakBeforeBreak: z.boolean(), throughWallHalfLength_mm: num, criticalHalfLength_mm: num }).nullable(),
+  /** A crack from one of the cutout's fastener holes (crack.fastener): its straight path to the opening, [hoop_mm, axial_mm] from the opening's centre. */
+  path: z
+    .strictObject({
+      fastener: num,
+      start_mm: z.tuple([num, num]),
+      end_mm: z.tuple([num, num]),
+      ligament_mm: num,
+      angleFromAxis_deg: num,
+    })
+    .optional(),
 });
 
 const fleetSchema = z.strictObject({

@@ -117,8 +117,10 @@ describe("the opening's field along the path", () => {
 describe("an opening's field from the plane-elasticity solver", () => {
   it("agrees with the closed form of Inglis's ellipse along the axis", () => {
     // Two independent methods: Muskhelishvili's potentials on the axis (closed form) and the integral-equation solver.
+    // The solver's coordinates: x around the hoop (half-axis 190), y along the axis (half-axis 140); the path runs
+    // up the axial line from the vertex, and the stress normal to it is the hoop-direction stress.
     const closed = ellipseAxisField(140, 190);
-    const solved = solvedPathField(ellipse(140, 190), [140, 0]);
+    const solved = solvedPathField(ellipse(190, 140), [0, 140], [0, 1]);
     for (const s of [0.5, 3, 12, 40, 150]) {
       const a = closed(s);
       const b = solved(s);

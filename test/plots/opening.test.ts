@@ -18,6 +18,15 @@ describe("the opening's pictures", () => {
     expect(svg).toMatch(/curvature parameter β = [\d.]+ \(beyond 0\.5: refer\)/);
   });
 
+  it("marks the demo crack's path from its fastener hole to the window's edge", () => {
+    const path = out.result.crack?.path;
+    if (!path) throw new Error("the cabin demo grows its crack from a fastener hole");
+    const svg = openingPicture({ ...opening, crackPath: path });
+    expect(svg).toContain("crack-path");
+    expect(svg).toContain(`crack from hole ${path.fastener}`);
+    expect(openingPicture(opening)).not.toContain("crack-path");
+  });
+
   it("plots the edge stress against arc length up to the perimeter", () => {
     const svg = edgeStressPlot(opening);
     expect(svg).toContain("edge-stress");

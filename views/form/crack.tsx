@@ -47,9 +47,17 @@ export function CrackSection({ s }: { s: FormState }) {
           <div class="when-hole">
             <NumberInput
               s={s}
+              name="crack.fastener"
+              label="From fastener hole number"
+              hint="Optional: a hole of the opening's fastener list (1 = the first); the crack grows straight to the nearest point of the opening's edge. Leave the hole radius blank: the hole's own radius is used."
+            />
+          </div>
+          <div class="when-hole">
+            <NumberInput
+              s={s}
               name="crack.openingDistance"
               label="Fastener hole to the opening's edge"
-              hint="Optional: centre of the hole to the opening's edge, on its line of highest stress; the crack grows toward the opening."
+              hint="Optional, instead of a hole number: a hole of the radius above whose centre lies this far from the opening's edge on its axial centre line; the crack grows toward the opening."
             />
           </div>
           <Select

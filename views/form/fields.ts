@@ -143,6 +143,7 @@ export const FORM_FIELDS = {
   "crack.detectableBy": choice("crack.detectableBy", { when: crackOn, showsDefault: true }),
   "crack.orientation": choice("crack.orientation", { when: crackOn, showsDefault: true }),
   "crack.openingDistance": num("crack.openingDistance_mm", atHole),
+  "crack.fastener": num("crack.fastener", atHole),
   "crack.minimumInterval": num("crack.minimumInterval_cycles", crackOn),
   "crack.leakBeforeBreak": choice("crack.leakBeforeBreak", { when: crackOn, showsDefault: true }),
   "fleet.size": num("fleet.size"),

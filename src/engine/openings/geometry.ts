@@ -184,6 +184,34 @@ export function periodicSpline(points: ReadonlyArray<readonly [number, number]>)
   return { pieces, clockwise: givenClockwise };
 }
 
+/** The nearest point of an outline to (px, py): sampled along every piece, then refined by golden section. */
+export function nearestOnOutline(outline: Outline, px: number, py: number): { x: number; y: number; distance_mm: number } {
+  const d2 = (piece: Outline["pieces"][number], u: number) => {
+    const q = piece(u);
+    return (q.x - px) ** 2 + (q.y - py) ** 2;
+  };
+  const per = 64;
+  let best = { piece: 0, u: 0, d: Infinity };
+  outline.pieces.forEach((piece, k) => {
+    for (let i = 0; i <= per; i++) {
+      const d = d2(piece, i / per);
+      if (d < best.d) best = { piece: k, u: i / per, d };
+    }
+  });
+  const piece = outline.pieces[best.piece];
+  let lo = Math.max(best.u - 1 / per, 0);
+  let hi = Math.min(best.u + 1 / per, 1);
+  const g = (Math.sqrt(5) - 1) / 2;
+  for (let it = 0; it < 60; it++) {
+    const a = hi - g * (hi - lo);
+    const b = lo + g * (hi - lo);
+    if (d2(piece, a) < d2(piece, b)) hi = b;
+    else lo = a;
+  }
+  const q = piece((lo + hi) / 2);
+  return { x: q.x, y: q.y, distance_mm: Math.hypot(q.x - px, q.y - py) };
+}
+
 /** A panel: the part [u0, u1] of one piece of one outline. */
 export interface Panel {
   hole: number;

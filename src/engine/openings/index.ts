@@ -1,6 +1,15 @@
 import { InputError } from "../errors.ts";
 import { fmt } from "../step.ts";
-import { discretize, ellipse, periodicSpline, roundedRectangle, TooManyPanels, type Discretization, type Outline } from "./geometry.ts";
+import {
+  discretize,
+  ellipse,
+  nearestOnOutline,
+  periodicSpline,
+  roundedRectangle,
+  TooManyPanels,
+  type Discretization,
+  type Outline,
+} from "./geometry.ts";
 import { interpolationRow } from "./gauss.ts";
 import { buildOperator, edgeStress, NoConvergence, type PlaneStress, type Solution, solve, stressAt } from "./solver.ts";
 
@@ -348,11 +357,15 @@ export function solveOpening(cutout: ShapeCutout, fasteners: FastenerInput[] = [
   const ligament = fasteners.map((f, i) => {
     if (winding(ex, ey, f.hoop_mm, f.axial_mm) !== 0)
       throw new InputError(`cutout.fasteners.${i}`, "this fastener hole's centre lies inside the opening");
-    let d = Infinity;
-    for (let k = 0; k < lone.n; k++) d = Math.min(d, Math.hypot(ex[k] - f.hoop_mm, ey[k] - f.axial_mm));
-    return d - f.radius_mm;
+    // The nearest point of the outline itself, not of its nodes: along a long straight side the nodes stand far apart.
+    return nearestOnOutline(opening, f.hoop_mm, f.axial_mm).distance_mm - f.radius_mm;
   });
   fasteners.forEach((f, i) => {
+    if (ligament[i] <= 0)
+      throw new InputError(
+        `cutout.fasteners.${i}`,
+        `this fastener hole cuts into the opening's edge (by ${fmt(-ligament[i], 3)} mm): the ligament is too thin for this screening; move the hole clear of the opening`,
+      );
     if (ligament[i] < MIN_LIGAMENT_RADII * f.radius_mm)
       throw new InputError(
         `cutout.fasteners.${i}`,
