@@ -1,3 +1,12 @@
+/**
+ * @module cli
+ * The command line's entry point (`npm run -s cli -- …`): the help text, the table of commands and
+ * `main`, which is handed the arguments and an Io (standard input, output and error, so tests can
+ * drive it without a process; cli/io.ts) and answers the exit code: 0 done, 2 the input or the
+ * arguments are wrong, 1 something else failed. Each command lives in its own file under src/cli
+ * (check, batch, sheet and verify, user, key, materials and schema); this file only dispatches to
+ * them, and, run as a script, starts `main` on the process's own streams.
+ */
 import { batchCommand } from "./cli/batch.ts";
 import { checkCommand } from "./cli/check.ts";
 import { materialsCommand, schemaCommand } from "./cli/info.ts";

@@ -1,3 +1,15 @@
+/**
+ * @module server
+ * Serve the checker on HOST:PORT (127.0.0.1:8080 unless told otherwise). SIGTERM/SIGINT stop taking
+ * connections, let requests in flight finish, then close Chromium and the database.
+ * The process's entry (`npm start`): it opens the records (src/store: PostgreSQL when DATABASE_URL
+ * is set, else the SQLite file), saves the demo checks into records that hold none
+ * (web/records/seed.ts), starts the worker pool (src/pool), removes browser profiles a killed server
+ * left behind (src/pdf/chromium.ts), and serves every route (web/whole.ts) for the Host names it
+ * serves (web/hosts.ts), known once the port is. It says on the console where the records are,
+ * where it listens, that a server reachable from the network needs TLS in front, and how to
+ * register the first person while no one is.
+ */
 import { serve } from "@hono/node-server";
 import { closeSharedPool } from "./pdf/browser.ts";
 import { closeSharedWorkPool, sharedPool } from "./pool/index.ts";
@@ -11,10 +23,6 @@ function isLoopbackHost(h: string): boolean {
   return h === "localhost" || h === "::1" || /^127\./.test(h);
 }
 
-/**
- * Serve the checker on HOST:PORT (127.0.0.1:8080 unless told otherwise). SIGTERM/SIGINT stop taking
- * connections, let requests in flight finish, then close Chromium and the database.
- */
 const host = process.env.HOST ?? "127.0.0.1";
 const port = Number(process.env.PORT ?? 8080);
 const store = await openStore();

@@ -1,3 +1,12 @@
+/**
+ * @module templates/front
+ * Page 1: what the sheet is, which revision, its fingerprint, and the outcome in one line.
+ * The title block (check, project, calculation number, revision, material, print date and paper,
+ * engine, fingerprint), the status mark with what it means (status.ts), the screening outcome with
+ * the governing check in the reader's units, how many warnings qualify it, and the short caution.
+ * Handed the sheet model (model.ts); the verdict words are the engine's, the phrase is written by
+ * the one number formatter (src/present/numbers.ts).
+ */
 import { phraseText } from "../src/present/numbers.ts";
 import { VERDICT_WORDS } from "../src/engine/index.ts";
 import { CAUTION_SHORT } from "./cautions.tsx";
@@ -14,7 +23,6 @@ const STATE_MEANS = {
   superseded: "A later revision replaces this one. Keep it for the record only.",
 } as const;
 
-/** Page 1: what the sheet is, which revision, its fingerprint, and the outcome in one line. */
 export function Front({ m }: { m: SheetModel }) {
   const d = m.document;
   const r = m.result;

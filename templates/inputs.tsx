@@ -1,10 +1,15 @@
+/**
+ * @module templates/inputs
+ * Section 2 of the sheet: the inputs as one table, the user's unit first, SI beside it where it
+ * differs, and where each value came from. Only the layout is here; the rows, their labels and
+ * values are worked out in inputRows.ts from the sheet model (model.ts).
+ */
 import { inputGroups } from "./inputRows.ts";
 import { typeset } from "./math.tsx";
 import type { SheetModel } from "./model.ts";
 
 const LONG_TEXT = 28;
 
-/** The inputs as one table: the user's unit first, SI beside it where it differs, and where each value came from. */
 export function Inputs({ m, num }: { m: SheetModel; num: number }) {
   return (
     <section>

@@ -1,3 +1,10 @@
+/**
+ * @module templates/model
+ * The shape of what the sheet prints: the sheet model and its sign-offs and paper. The sheet builder
+ * (src/sheet/sheet.ts) fills it from the parsed check, the engine's result and the records'
+ * revision; every part of the template reads from it and works nothing out of its own. Types only,
+ * from the schema and the engine.
+ */
 import type { CheckResult } from "../src/engine/index.ts";
 import type { ResolvedMaterial } from "../src/engine/input.ts";
 import type { ParsedCheck } from "../src/schema/index.ts";

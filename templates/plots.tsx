@@ -1,3 +1,9 @@
+/**
+ * @module templates/plots
+ * Section 5 of the sheet: the plots of the result, each a figure with its number and caption, and
+ * the note when a plot does not apply. Which plots there are and what each draws is decided once
+ * for every face in src/present/plots.ts; the SVG comes from src/plots and is inlined.
+ */
 import { raw } from "hono/html";
 import { plotInputs } from "../src/present/plots.ts";
 import type { SheetModel } from "./model.ts";

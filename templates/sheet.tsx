@@ -1,3 +1,12 @@
+/**
+ * @module templates/sheet
+ * The whole check sheet as one HTML document, with its stylesheet (sheet.css) inlined: the front,
+ * then the numbered sections (scope, inputs, calculation, results, plots, cautions, sign-off), each
+ * from its own template, and the SUPERSEDED watermark where it applies. Handed the sheet model
+ * (model.ts); gives the HTML the printer turns into the PDF (src/sheet), whose page header and
+ * footer are drawn by src/sheet/margins.tsx. The model's types, the cautions and the step result text
+ * are re-exported, so the sheet builder and the sheet's tests import the templates from this file.
+ */
 import { readFileSync } from "node:fs";
 import { raw } from "hono/html";
 import { Cautions } from "./cautions.tsx";

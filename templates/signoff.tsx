@@ -1,3 +1,13 @@
+/**
+ * @module templates/signoff
+ * Section 7 of the sheet. Prepared, checked and approved: name, date and a line for a signature in
+ * ink. Names and dates come from the records when the revision was signed there; otherwise the
+ * lines are blank to be filled in by hand.
+ * It also says which revision of which calculation the sheet is, its status mark (status.ts), when
+ * the revision is imported unsigned or superseded, the records' key fingerprint, and the names of
+ * the attached files (src/schema/attachments.ts) with the command that verifies them. The roles come
+ * from src/schema/signoff.ts.
+ */
 import { INPUT_ATTACHMENT, SIGNOFFS_ATTACHMENT } from "../src/schema/attachments.ts";
 import { ROLES } from "../src/schema/signoff.ts";
 import { signedAtText } from "./format.ts";
@@ -6,11 +16,6 @@ import { statusMark } from "./status.ts";
 
 const LABELS: Record<SignOffRole, string> = { prepared: "Prepared by", checked: "Checked by", approved: "Approved by" };
 
-/**
- * Prepared, checked and approved: name, date and a line for a signature in ink. Names and dates
- * come from the records when the revision was signed there; otherwise the lines are blank to be
- * filled in by hand.
- */
 export function SignOffBlock({ m, num }: { m: SheetModel; num: number }) {
   const mark = statusMark(m.signoffs, m.superseded);
   return (

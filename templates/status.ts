@@ -1,3 +1,10 @@
+/**
+ * @module templates/status
+ * The status mark printed on every page of the sheet (the front, the sign-off section and the
+ * printer's margins, src/sheet/margins.tsx): the sheet's state from its sign-offs, and the few words
+ * that say what a reader may take it for. The state is worked by the records' own rule
+ * (signOffState of src/schema/signoff.ts); only the words are here.
+ */
 import { signOffState, type RevisionState } from "../src/schema/signoff.ts";
 import type { SignOff } from "./model.ts";
 

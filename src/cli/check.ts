@@ -1,3 +1,14 @@
+/**
+ * @module cli/check
+ * `check FILE|- [--log LOG.csv [--column N|NAME] [--unit kPa] [--decimal ,] [--skip N] [--gate X]]`:
+ * the result JSON on standard output, exit 0 whatever the verdict; exit 2 with the errors document.
+ * With --log the check's pressure becomes the log's column as a history (in --unit, MPa unless
+ * told), and --gate (in the same unit) sets the hysteresis gate ahead of counting.
+ * The check is read by readJsonArg (io.ts), the log by the same reader the page uses
+ * (src/schema/pressureLog.ts), and the result comes from the engine's checkDocument; the option
+ * at fault is the errors' path, as a field is for the check. How many points the log gave goes to
+ * standard error, so standard output stays one JSON document.
+ */
 import { readFileSync } from "node:fs";
 import { checkDocument } from "../engine/index.ts";
 import { readPressureLog, type LogOptions } from "../schema/pressureLog.ts";
@@ -11,12 +22,6 @@ const fail = (io: Io, errors: ArgErrors) => {
   return 2;
 };
 
-/**
- * `check FILE|- [--log LOG.csv [--column N|NAME] [--unit kPa] [--decimal ,] [--skip N] [--gate X]]`:
- * the result JSON on standard output, exit 0 whatever the verdict; exit 2 with the errors document.
- * With --log the check's pressure becomes the log's column as a history (in --unit, MPa unless
- * told), and --gate (in the same unit) sets the hysteresis gate ahead of counting.
- */
 export async function checkCommand(args: string[], io: Io): Promise<number> {
   const values: Partial<Record<(typeof LOG_OPTIONS)[number], string>> = {};
   const positional: string[] = [];

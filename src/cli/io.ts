@@ -1,3 +1,11 @@
+/**
+ * @module cli/io
+ * What every command is handed to talk to the world, and the reading they share: the Io streams
+ * (standard input, output and error; buffers in the tests), reading a stream whole, and reading the
+ * JSON document a command is given as a file or "-" for standard input, with an unreadable file or
+ * text that is not JSON turned into an errors document rather than an exception. Relies on node:fs
+ * alone.
+ */
 import { readFileSync } from "node:fs";
 
 export interface Io {

@@ -1,3 +1,13 @@
+/**
+ * @module cli/sheet
+ * The two commands about the printed sheet. `sheet` prints a check to PDF through the sheet
+ * builder (src/sheet/sheet.ts, which renders in Chromium through src/pdf) and writes it so that an
+ * interrupted run never leaves half a file under the name asked for. `verify` reads a sheet back,
+ * recomputes it from its attached input (src/sheet/verify.ts) and checks its signed sign-offs
+ * against the public keys given in a file (--key) or fetched from a records server (--records);
+ * its report is printed for a person or as JSON. Each is handed the arguments and the Io (io.ts)
+ * and answers an exit code. The small option parser both use is here too.
+ */
 import { readFileSync, renameSync, rmSync, writeFileSync } from "node:fs";
 import { closeSharedPool } from "../pdf/browser.ts";
 import { BrowserCrashedError, BrowserUnavailableError, PoolBusyError, RenderTimeoutError } from "../pdf/errors.ts";

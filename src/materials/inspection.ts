@@ -1,3 +1,12 @@
+/**
+ * @module materials/inspection
+ * Typical detectable crack sizes, one for each inspection method the check format names
+ * (INSPECTION_METHODS in src/schema/check.ts), with the words a step prints for the method and the
+ * source line it cites. The crack-growth programme (src/engine/crackProgramme.ts) takes its
+ * detectable size from here when a check names the method instead of giving a size, and warns that
+ * the value is typical. They sit beside the material library because, like its values, they are
+ * typical figures to verify, not data of a qualified procedure.
+ */
 import type { INSPECTION_METHODS } from "../schema/check.ts";
 
 type Method = (typeof INSPECTION_METHODS)[number];

@@ -1,3 +1,16 @@
+/**
+ * @module pool
+ * A pool of worker threads (node:worker_threads through piscina) for work too big for the request
+ * thread: a long pressure history is parsed, validated, counted and checked there, so the event loop
+ * keeps answering small requests meanwhile. The workers load TypeScript the way the main thread does
+ * (tsx), whatever flags the parent process was started with.
+ * Here: the pool's face (WorkPool: check one document or several, prepare a records import,
+ * preview a logger's file), createPool with its thread count, queue length and priority, the
+ * process's one shared pool, and WorkPoolBusy for a full queue, which the routes answer with 503.
+ * The work itself is in work.ts, re-exported so a small document is worked in place with the same
+ * code; worker.ts is a thread's entry. Used by the JSON API, the records import, the log preview
+ * (src/web) and the batch command (src/cli/batch.ts).
+ */
 import { availableParallelism } from "node:os";
 import { Piscina } from "piscina";
 import type { ImportKeys } from "../store/exchange.ts";
@@ -7,12 +20,6 @@ import type { Task } from "./worker.ts";
 
 export { checkText, checkValue, prepareImportText, previewLogText, type CheckAnswer, type ImportAnswer, type LogPreview } from "./work.ts";
 
-/**
- * A pool of worker threads (node:worker_threads through piscina) for work too big for the request
- * thread: a long pressure history is parsed, validated, counted and checked there, so the event loop
- * keeps answering small requests meanwhile. The workers load TypeScript the way the main thread does
- * (tsx), whatever flags the parent process was started with.
- */
 export interface WorkPool {
   /** Check a document given as text or as UTF-8 bytes (the bytes' buffer is moved to the worker, not copied). */
   check(doc: string | Uint8Array): Promise<CheckAnswer>;

@@ -1,3 +1,16 @@
+/**
+ * @module store/checks
+ * Saving checks: a new check as revision 1, and a changed input as the check's next revision,
+ * which supersedes the one before (an input identical to the latest saves nothing). It holds the
+ * rules of calculation numbers (one number names one check; the request's, else the input's, else
+ * one made from the id) and the row-level helpers other files of the store share (requireCheck,
+ * latestRevision, insertRevision, assertCalcNumberFree; the import in exchange.ts uses the last
+ * two). Handed the store context (SQL, validator, clock, engine version), a request body as it
+ * arrived from JSON and the signed-in user; gives the saved revision's number and fingerprint, or
+ * an InvalidRecordError or RecordConflictError naming the fields at fault. Relies on the engine's
+ * fingerprint, the canonical JSON of src/schema, the field schemas of fields.ts and the event log of
+ * events.ts.
+ */
 import { randomUUID } from "node:crypto";
 import { z } from "zod";
 import { fingerprint } from "../engine/fingerprint.ts";

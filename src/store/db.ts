@@ -1,3 +1,11 @@
+/**
+ * @module store/db
+ * The SQLite database file: where it is (HOOPWISE_DB, else data/hoopwise.db), opening it owner-only
+ * with the write-ahead log, durable commits, foreign keys and a busy timeout, and bringing its schema
+ * up to date with the migrations of migrations.ts, refusing a file newer than this build. Handed a
+ * path; gives a better-sqlite3 handle, which sqlite.ts wraps in the SQL interface the rest of the
+ * store uses. PostgreSQL has its own opener (postgres.ts).
+ */
 import Database from "better-sqlite3";
 import { closeSync, mkdirSync, openSync } from "node:fs";
 import { dirname, resolve } from "node:path";

@@ -1,3 +1,14 @@
+/**
+ * @module store/history
+ * Reading the records back: the list of saved checks, one check with all its revisions and its event
+ * log, and one revision for its sheet. Each revision is checked as it is read: its fingerprint is
+ * recomputed from the stored input and engine version (a mismatch means the database was changed
+ * outside Hoopwise, and then no sign-off of it counts), and its sign-offs' signatures are verified
+ * (signoffs.ts); the revision's state follows from the valid sign-offs alone (state.ts). Each read is
+ * one transaction, so it sees one snapshot while another process writes. Handed the SQL and the
+ * signing keys; gives plain records (CheckSummary, CheckRecord, SheetRevision) for the routes and the
+ * sheet.
+ */
 import { fingerprint as fingerprintOf } from "../engine/fingerprint.ts";
 import type { StoreContext } from "./context.ts";
 import { latestRevision, requireCheck } from "./checks.ts";

@@ -1,3 +1,14 @@
+/**
+ * @module store
+ * The records' front door: the options, the Store facade every face uses, and openStore, which picks
+ * the backend (PostgreSQL when a database URL is given, or DATABASE_URL is set and no SQLite path is;
+ * else the SQLite file), brings its schema up to date, opens the signing key and, on PostgreSQL,
+ * holds every server sharing the database to one key. The facade binds one store context (SQL,
+ * validator, clock, engine version, passphrase cost, keys) to the functions of the files beside it
+ * (checks, history, signoffs, exchange, users, sessions, trust, health). The types, limits and
+ * errors of those files are re-exported here, so callers outside src/store import from this file
+ * alone.
+ */
 import { ENGINE_VERSION } from "../engine/version.ts";
 import { validateCheckDocument } from "./checkValidator.ts";
 import { dirname, resolve } from "node:path";

@@ -1,3 +1,13 @@
+/**
+ * @module store/signoffs
+ * Signing a revision and reading its sign-offs back. signOff applies the rules and signs the
+ * sign-off's facts with the records' Ed25519 key; signOffProblem states the rules once, for the
+ * import too (exchange.ts); signoffRows reads a revision's sign-offs and verifies each signature
+ * against the facts as stored now, so a row edited in the database shows as a sign-off that does not
+ * count. Handed the store context, the request and the signed-in user, who proves the passphrase
+ * again (users.ts); gives the sign-off with the revision's new state, or a refusal naming the field.
+ * Relies on the signed message of src/schema/signoff.ts and the keys of keys.ts and trust.ts.
+ */
 import type { KeyObject } from "node:crypto";
 import { z } from "zod";
 import type { FieldError } from "../engine/errors.ts";

@@ -1,3 +1,15 @@
+/**
+ * @module web/app
+ * The Hono app: JSON API, health check and (mounted) the page, sheet and records routes.
+ * Security headers on every answer: the Content-Security-Policy allows only the project's own
+ * scripts, styles and images; frames are refused.
+ * A request for a Host not served (hosts.ts) or a browser's state-changing request from another site
+ * (crossSite.ts) is refused before any route sees it. GET /healthz says whether the records can be
+ * written now (503 when not). An unknown address is a 404 errors document, a storage fault a 503,
+ * and anything unexpected is logged and answered 500 in words that say nothing saved was lost.
+ * Handed the sub-apps, the worker pool, the store and the served hosts (AppOptions); web/whole.ts
+ * puts it together for the server and for tests.
+ */
 import { Hono } from "hono";
 import { secureHeaders } from "hono/secure-headers";
 import type { WorkPool } from "../pool/index.ts";
@@ -18,11 +30,6 @@ export interface AppOptions {
   allowedHosts?: readonly string[];
 }
 
-/**
- * The Hono app: JSON API, health check and (mounted) the page, sheet and records routes.
- * Security headers on every answer: the Content-Security-Policy allows only the project's own
- * scripts, styles and images; frames are refused.
- */
 export function createApp(opts: AppOptions = {}): Hono {
   const app = new Hono();
   app.use(

@@ -1,12 +1,16 @@
+/**
+ * @module web/assets
+ * GET /assets/:name: the page's static files (views/assetFiles.ts), cached for a year when the
+ * request carries the current content hash, revalidated after five minutes otherwise.
+ * A matching ETag is answered 304, and a client that takes gzip gets the compressed copy. The files,
+ * their types and hashes are read in views/assetFiles.ts; its assetUrl, which writes an address with
+ * the hash, is re-exported for the routes. Mounted by the page's routes (page.tsx).
+ */
 import { Hono } from "hono";
 import { findAsset } from "../../views/assetFiles.ts";
 
 export { assetUrl } from "../../views/assetFiles.ts";
 
-/**
- * GET /assets/:name: the page's static files (views/assetFiles.ts), cached for a year when the
- * request carries the current content hash, revalidated after five minutes otherwise.
- */
 export function assetRoutes(): Hono {
   const app = new Hono();
   app.get("/assets/:name", (c) => {

@@ -1,3 +1,9 @@
+/**
+ * @module views/form/shell
+ * Section 1 of the form: the shell's form (cylinder or sphere), its radius and where the radius is
+ * measured, the wall thickness, and the wall theory. Handed the form's state (state.ts); the number
+ * inputs take their labels and units from the form's table (fields.ts), the controls are controls.tsx's.
+ */
 import { NumberInput, Select } from "./controls.tsx";
 import type { FormState } from "./state.ts";
 

@@ -1,14 +1,17 @@
+/**
+ * @module views/form/units
+ * The units the form is read and written in. The hidden field records the units the numbers on
+ * the page are in now, so that when the choice changes the server converts them rather than
+ * reading them in the new unit.
+ * The lists of units and the key of a choice are src/schema/units.ts's; handed the form's state
+ * (state.ts), the section also carries the form's hidden `carry` field when it has one.
+ */
 import { ALTITUDE_UNITS, LENGTH_UNITS, PRESSURE_UNITS, STRESS_UNITS, unitsKey } from "../../src/schema/units.ts";
 import { Select } from "./controls.tsx";
 import type { FormState } from "./state.ts";
 
 const opts = (xs: readonly string[]) => xs.map((x) => ({ value: x, label: x }));
 
-/**
- * The units the form is read and written in. The hidden field records the units the numbers on
- * the page are in now, so that when the choice changes the server converts them rather than
- * reading them in the new unit.
- */
 export function UnitsSection({ s }: { s: FormState }) {
   const u = s.units;
   const v = {

@@ -1,3 +1,10 @@
+/**
+ * @module views/records/access
+ * The sign-in form and the first-run form that makes the first admin, each with the names of its
+ * fields so the routes (src/web/records/access.tsx) can put a refusal beside the right one. Handed
+ * what was typed (never a passphrase) and the errors sorted by src/present/formErrors.ts; the
+ * passphrase's least length is the store's. The field controls are fields.tsx's.
+ */
 import { MIN_PASSPHRASE_LENGTH } from "../../src/store/index.ts";
 import type { FormErrors } from "../../src/present/formErrors.ts";
 import { FormProblems, PassphraseField, TextField } from "./fields.tsx";

@@ -1,3 +1,13 @@
+/**
+ * @module views/records/people
+ * The people of the records, the signed-in user's own passphrase, and (for an admin) adding,
+ * disabling and resetting people and trusting another office's key. Passphrase fields always
+ * come back empty.
+ * Handed the signed-in user, the people, the forms' typed values and errors, the records' own public
+ * key and the trusted ones, as the route (src/web/records/pages.tsx) reads them from the store. The
+ * names of each form's fields are exported so the route can put a refusal beside the right one; the
+ * roles and the passphrase's least length are the store's.
+ */
 import {
   MIN_PASSPHRASE_LENGTH,
   USER_ROLES,
@@ -26,11 +36,6 @@ const ROLE_MEANS: Record<(typeof USER_ROLES)[number], string> = {
   engineer: "saves, revises and signs checks",
 };
 
-/**
- * The people of the records, the signed-in user's own passphrase, and (for an admin) adding,
- * disabling and resetting people and trusting another office's key. Passphrase fields always
- * come back empty.
- */
 export function PeopleView({
   user,
   users,

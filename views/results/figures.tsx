@@ -1,3 +1,10 @@
+/**
+ * @module views/results/figures
+ * The key numbers of the check in the user's units, grouped as the work goes: load, membrane, notch, fatigue.
+ * A panel of the results on the page (views/results/index.tsx), handed the engine's result and the
+ * reader's units; each number is converted from SI and written by the one number formatter
+ * (src/present/numbers.ts, through views/format.ts). Nothing here works a value out.
+ */
 import type { Child } from "hono/jsx";
 import type { CheckResult } from "../../src/engine/index.ts";
 import type { Units } from "../../src/schema/units.ts";
@@ -12,7 +19,6 @@ function Figure({ label, children }: { label: Child; children: Child }) {
   );
 }
 
-/** The key numbers of the check in the user's units, grouped as the work goes: load, membrane, notch, fatigue. */
 export function KeyFigures({ result, units }: { result: CheckResult; units: Units }) {
   const { load, membrane: m, notch: n, fatigue: f } = result;
   const stress = (x: number | null) => quantity(x, "stress", units);

@@ -1,14 +1,19 @@
+/**
+ * @module web/form/log
+ * A logger's file on the page: the same reader as the command line's --log (schema/pressureLog.ts),
+ * with its choices as form fields. The gate is given in the log's own unit.
+ * Handed the form's values and the file's text, it gives the pressure history in MPa with the gate
+ * converted to MPa, or the messages keyed by the form field each belongs beside (a line of the file
+ * that cannot be read goes beside the file). The field names are the form's table's
+ * (views/form/fields.ts, LOG_FIELDS re-exported). Used by the posted-form reader (posted.ts) and the
+ * log preview (src/web/logPreview.tsx).
+ */
 import type { FieldError } from "../../engine/errors.ts";
 import { readPressureLog, type LogOptions } from "../../schema/pressureLog.ts";
 import { PRESSURE_UNITS, SI_UNITS, toSI, type StressUnit } from "../../schema/units.ts";
 import type { FormValues } from "../../../views/form/fields.ts";
 export { LOG_FIELDS } from "../../../views/form/fields.ts";
 import { parseNumber } from "./lists.ts";
-
-/**
- * A logger's file on the page: the same reader as the command line's --log (schema/pressureLog.ts),
- * with its choices as form fields. The gate is given in the log's own unit.
- */
 
 export interface LogChoice {
   opts: LogOptions;

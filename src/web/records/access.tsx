@@ -1,3 +1,14 @@
+/**
+ * @module web/records/access
+ * Signing in and out, and the first-run page. The first-run page exists only while no one is
+ * registered, and only for a browser on the server's own machine (loopback), so no one on the
+ * network can make themselves the first admin of a fresh install.
+ * The forms post and redirect; after signing in the browser goes back to the page it asked for,
+ * only ever a path on this site. A refusal (a wrong passphrase, a guessing delay, a name already
+ * taken) comes back as the page with the message beside its field. Relies on the store for people
+ * and sessions, the views of views/records/access.tsx, the session cookie and loopback test of
+ * auth.ts, and the page frame of pages.tsx.
+ */
 import { Hono, type Context } from "hono";
 import { bodyLimit } from "hono/body-limit";
 import { RecordError, SlowDownError, type Store } from "../../store/index.ts";
@@ -16,11 +27,6 @@ function localNext(next: string | undefined): string {
   return next && /^\/(?![/\\])[\x21-\x7e]*$/.test(next) ? next : "/records";
 }
 
-/**
- * Signing in and out, and the first-run page. The first-run page exists only while no one is
- * registered, and only for a browser on the server's own machine (loopback), so no one on the
- * network can make themselves the first admin of a fresh install.
- */
 export function accessPages({ store }: { store: Store }): Hono {
   const app = new Hono();
   for (const path of [SIGNIN_PATH, SIGNOUT_PATH, SETUP_PATH]) app.use(path, noStore);

@@ -1,3 +1,14 @@
+/**
+ * @module web/records/api
+ * The JSON API for saved checks, revisions, sign-offs, people, sessions and keys. The store
+ * checks every body in full, so a client hears every problem in one 422 answer; these handlers
+ * only carry requests in and answers out, for the signed-in user. Only POST /api/v1/session and
+ * GET /api/v1/keys are open.
+ * Handed the store and, for large imports, the worker pool (src/pool), which parses an import and
+ * checks its signatures off the request thread; a full pool is answered 503. The store's refusals
+ * become errors documents with their status through http.ts; the session cookie and the signed-in
+ * guard are auth.ts's; the JSON body reader and its size limit are the check API's (src/web/api.ts).
+ */
 import { Hono } from "hono";
 import { bodyLimit } from "hono/body-limit";
 import { MAX_IMPORT_BYTES, type NewCheck, type NewRevision, type NewUser, type SignOffRequest, type Store } from "../../store/index.ts";
@@ -21,12 +32,6 @@ const importLimit = bodyLimit({
   onError: (c) => c.json(errorsDoc("(document)", `an import is at most ${MAX_IMPORT_BYTES / 1048576} MiB; this one is larger`), 413),
 });
 
-/**
- * The JSON API for saved checks, revisions, sign-offs, people, sessions and keys. The store
- * checks every body in full, so a client hears every problem in one 422 answer; these handlers
- * only carry requests in and answers out, for the signed-in user. Only POST /api/v1/session and
- * GET /api/v1/keys are open.
- */
 export function recordsApi({ store, pool }: RecordsDeps): Hono<RecordsEnv> {
   const app = new Hono<RecordsEnv>();
   app.onError(recordsErrorResponse);

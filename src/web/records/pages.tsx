@@ -1,3 +1,14 @@
+/**
+ * @module web/records/pages
+ * The records as pages: the list of saved checks, one check with its revisions and log, signing,
+ * comparing two revisions, and the people and keys. Every page needs a signed-in user (else a
+ * 401 with the sign-in form). Every form posts and redirects (or answers with the whole page and
+ * the message beside the field), so all of it works without scripting; every refusal is a page,
+ * never a server error.
+ * Handed the store; the views are views/records, the comparison of two revisions is worked by
+ * src/present/revisions, and saving from the checker is mounted from save.tsx. The page frame
+ * (page) and the sign-in page are shared with access.tsx.
+ */
 import { Hono, type Context } from "hono";
 import type { JSX } from "hono/jsx/jsx-runtime";
 import { bodyLimit } from "hono/body-limit";
@@ -36,13 +47,6 @@ type Status = RefusalStatus | 200;
 /** Sign and register forms carry a few short fields; anything far larger is not one of ours. */
 const smallForm = bodyLimit({ maxSize: 64 * 1024, onError: (c) => c.text("The form is too large.", 413) });
 
-/**
- * The records as pages: the list of saved checks, one check with its revisions and log, signing,
- * comparing two revisions, and the people and keys. Every page needs a signed-in user (else a
- * 401 with the sign-in form). Every form posts and redirects (or answers with the whole page and
- * the message beside the field), so all of it works without scripting; every refusal is a page,
- * never a server error.
- */
 export function recordsPages({ store }: { store: Store }): Hono<RecordsEnv> {
   const app = new Hono<RecordsEnv>();
   app.onError(errorPage);

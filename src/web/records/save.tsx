@@ -1,3 +1,14 @@
+/**
+ * @module web/records/save
+ * Saving from the checker. The save button posts the checker's own form here: a check opened
+ * from the records (its id in the hidden `record` field) gets a new revision; any other becomes
+ * a new check, unless its calculation number is already in the records, in which case the user
+ * is asked first. A check with mistakes goes back to the checker with the messages beside the
+ * fields; nothing is saved until it is whole.
+ * The form is read by the checker's own reader (src/web/form) and judged by the engine's parseCheck
+ * before the store sees it; the store's refusals go beside the checker's fields where one names them
+ * (showPosted of src/web/page.tsx). Mounted by pages.tsx behind its sign-in guard.
+ */
 import { Hono, type Context } from "hono";
 import { bodyLimit } from "hono/body-limit";
 import type { FieldError } from "../../engine/index.ts";
@@ -19,13 +30,6 @@ const formLimit = bodyLimit({
   onError: (c) => c.text(`The form is larger than ${MAX_JSON_BYTES / 1024 / 1024} MiB.`, 413),
 });
 
-/**
- * Saving from the checker. The save button posts the checker's own form here: a check opened
- * from the records (its id in the hidden `record` field) gets a new revision; any other becomes
- * a new check, unless its calculation number is already in the records, in which case the user
- * is asked first. A check with mistakes goes back to the checker with the messages beside the
- * fields; nothing is saved until it is whole.
- */
 export function saveRoutes({ store }: { store: Store }): Hono<RecordsEnv> {
   const app = new Hono<RecordsEnv>();
 
