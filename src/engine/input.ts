@@ -1,3 +1,10 @@
+/**
+ * @module engine/input
+ * From a parsed check to the values the engine works with: the material from the library with the
+ * user's overrides, the fatigue curve and its defaults, and the cross-field rules the schema cannot
+ * see one field at a time (a crack at a hole needs its radius, a crack from a fastener hole names a
+ * hole the cutout lists, strengths in a sensible order). Every problem is a field error naming its path.
+ */
 import { toFieldErrors, type FieldError } from "../schema/errors.ts";
 import { MATERIALS, findMaterial, TYPICAL_FLAG } from "../materials/library.ts";
 import { checkSchema, type MaterialFamily, type ParsedCheck, type SurfaceFinish } from "../schema/check.ts";

@@ -1,3 +1,7 @@
+/**
+ * The crack growing into a stress gradient: the edge-crack Green's function, its compounding with
+ * Bowie's factor, and the opening's field along the path (closed forms, the solver, the table).
+ */
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
 import { crackGrowth, type CrackInput } from "../../src/engine/crack.ts";

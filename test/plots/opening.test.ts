@@ -1,3 +1,7 @@
+/**
+ * The opening's pictures: the outline coloured by edge stress with the fastener holes and the
+ * crack's path, and the edge stress against arc length.
+ */
 import { describe, expect, it } from "vitest";
 import { DEMOS } from "../../src/demo/index.ts";
 import { checkDocument } from "../../src/engine/index.ts";

@@ -1,3 +1,7 @@
+/**
+ * @module test/web/postedForm
+ * What a browser posts for a check, for the page's tests.
+ */
 import { unshownParts } from "../../src/web/form/carry.ts";
 import { writeForm } from "../../src/web/form/index.ts";
 import { unitsFrom, unitsKey, type Units } from "../../src/schema/units.ts";

@@ -1,3 +1,9 @@
+/**
+ * @module views/form/crack
+ * Section 7 of the form: the optional crack, its geometry and hole (a hole of its own radius, or one
+ * of the opening's fastener holes by number), its orientation, the inspection programme's sizes
+ * and factor, leak before break and bulging. Field names and paths live in fields.ts.
+ */
 import { INSPECTION_METHODS } from "../../src/schema/check.ts";
 import { TYPICAL_DETECTABLE_MM } from "../../src/materials/inspection.ts";
 import { NumberInput, Select, Toggle } from "./controls.tsx";
