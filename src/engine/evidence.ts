@@ -102,24 +102,18 @@ function listLogs(lives: number[]): string {
   return lives.length > 4 ? `${shown.join(" + ")} + … (${lives.length} lives)` : shown.join(" + ");
 }
 
-/**
- * Evaluate test lives against a design life.
- * Units: lives and design life in cycles; the standard deviation is of log10 life.
- * Validity: lognormal lives from the same detail, load and environment as the design case.
- */
-export function evaluateEvidence(input: EvidenceInput, designLife_cycles: number, scatterFactor: number): EvidenceResult {
-  validate(input, designLife_cycles, scatterFactor);
-  const lives = input.lives_cycles;
+/** What each stage of the assessment adds to the sheet. */
+interface Said {
+  steps: Step[];
+  warnings: string[];
+}
+
+/** Stage 1, the sample: the mean of the log lives and, with two or more, their standard deviation. */
+function logStatistics(lives: number[], said: Said): { logMean: number; sampleStdDev: number | null } {
   const n = lives.length;
-  const p = input.reliability;
-  const gamma = input.confidence;
   const logs = lives.map(Math.log10);
   const logMean = logs.reduce((a, b) => a + b, 0) / n;
-  const logDesign = Math.log10(designLife_cycles);
-  const steps: Step[] = [];
-  const warnings: string[] = [];
-
-  steps.push(
+  said.steps.push(
     step(
       "evidence-log-mean",
       "Mean of the log lives",
@@ -130,10 +124,9 @@ export function evaluateEvidence(input: EvidenceInput, designLife_cycles: number
       "Lognormal life model (base-10 logarithms)",
     ),
   );
-
   const sampleStdDev = n >= 2 ? Math.sqrt(logs.reduce((acc, x) => acc + (x - logMean) ** 2, 0) / (n - 1)) : null;
-  if (sampleStdDev !== null) {
-    steps.push(
+  if (sampleStdDev !== null)
+    said.steps.push(
       step(
         "evidence-log-sd",
         "Sample standard deviation of the log lives",
@@ -144,118 +137,111 @@ export function evaluateEvidence(input: EvidenceInput, designLife_cycles: number
         "Sample standard deviation with n − 1 divisor",
       ),
     );
-  }
+  return { logMean, sampleStdDev };
+}
 
-  const assumed = input.assumedLogStdDev;
-  const zp = normalQuantile(p);
-  const zg = normalQuantile(gamma);
-  let logStdDev: number | null;
-  let logStdDevFrom: EvidenceResult["logStdDevFrom"];
-  let k: number;
+interface Spread {
+  k: number;
+  logStdDev: number | null;
+  logStdDevFrom: EvidenceResult["logStdDevFrom"];
+}
+
+/**
+ * Stage 2, the spread and its tolerance factor: an assumed σ (or a single article) takes the
+ * known-σ factor; otherwise σ comes from the sample and the factor from the non-central t.
+ */
+function spreadAndFactor(input: EvidenceInput, n: number, sampleStdDev: number | null, said: Said): Spread {
+  const { reliability: p, confidence: gamma, assumedLogStdDev: assumed } = input;
   if (assumed !== undefined || n === 1) {
-    k = toleranceFactorKnownSigma(n, p, gamma);
-    logStdDev = assumed ?? null;
-    logStdDevFrom = assumed !== undefined ? "assumed" : null;
-    steps.push(
+    const k = toleranceFactorKnownSigma(n, p, gamma);
+    said.steps.push(
       step(
         "evidence-k",
         "One-sided tolerance factor, σ known",
         "k = z_p + z_γ/√n",
-        `k = ${fmt(zp)} + ${fmt(zg)}/√${n}`,
+        `k = ${fmt(normalQuantile(p))} + ${fmt(normalQuantile(gamma))}/√${n}`,
         k,
         "—",
         KNOWN_SIGMA,
       ),
     );
-    if (assumed !== undefined && sampleStdDev !== null && sampleStdDev > assumed) {
-      warnings.push(
+    if (assumed !== undefined && sampleStdDev !== null && sampleStdDev > assumed)
+      said.warnings.push(
         `The tested lives scatter more (log10 standard deviation ${fmt(sampleStdDev)}) than the assumed ${fmt(assumed)}; ` +
           "the lower bound may be too high. Check the assumed scatter against these results.",
       );
-    }
-  } else {
-    k = toleranceFactorSample(n, p, gamma);
-    logStdDev = sampleStdDev;
-    logStdDevFrom = "sample";
-    steps.push(
-      step(
-        "evidence-k",
-        "One-sided tolerance factor, σ from the sample",
-        "k = t′_γ(n − 1, z_p·√n) / √n",
-        `k = t′_${fmt(gamma)}(${n - 1}, ${fmt(zp)}·√${n}) / √${n}`,
-        k,
-        "—",
-        NATRELLA,
-      ),
-    );
-    if (sampleStdDev === 0) {
-      warnings.push(
-        "All tested lives are equal, so the sample shows no scatter and the lower bound equals the mean. " +
-          "Real fleets scatter; give an assumed log standard deviation.",
-      );
-    }
+    return { k, logStdDev: assumed ?? null, logStdDevFrom: assumed !== undefined ? "assumed" : null };
   }
+  const k = toleranceFactorSample(n, p, gamma);
+  said.steps.push(
+    step(
+      "evidence-k",
+      "One-sided tolerance factor, σ from the sample",
+      "k = t′_γ(n − 1, z_p·√n) / √n",
+      `k = t′_${fmt(gamma)}(${n - 1}, ${fmt(normalQuantile(p))}·√${n}) / √${n}`,
+      k,
+      "—",
+      NATRELLA,
+    ),
+  );
+  if (sampleStdDev === 0)
+    said.warnings.push(
+      "All tested lives are equal, so the sample shows no scatter and the lower bound equals the mean. " +
+        "Real fleets scatter; give an assumed log standard deviation.",
+    );
+  return { k, logStdDev: sampleStdDev, logStdDevFrom: "sample" };
+}
 
-  const marginLog = logMean - logDesign;
-  const requiredLogStdDev = marginLog > 0 ? marginLog / k : null;
-  steps.push(
+/** Stage 3, what the tests could support at best: the largest spread for which the bound still reaches the design life. */
+function largestSpread(logMean: number, designLife_cycles: number, spread: Spread, said: Said): number | null {
+  const marginLog = logMean - Math.log10(designLife_cycles);
+  const required = marginLog > 0 ? marginLog / spread.k : null;
+  said.steps.push(
     step(
       "evidence-required-sd",
       "Largest log standard deviation that still reaches the design life",
       "s_max = (x̄ − log10 N_design) / k",
-      `s_max = (${fmt(logMean)} − log10 ${fmt(designLife_cycles)}) / ${fmt(k)}`,
-      requiredLogStdDev,
+      `s_max = (${fmt(logMean)} − log10 ${fmt(designLife_cycles)}) / ${fmt(spread.k)}`,
+      required,
       "log10 cycles",
-      logStdDevFrom === "sample" ? NATRELLA : KNOWN_SIGMA,
+      spread.logStdDevFrom === "sample" ? NATRELLA : KNOWN_SIGMA,
     ),
   );
-  if (requiredLogStdDev === null) {
-    warnings.push("The mean of the tested lives is below the design life: no amount of consistency in the tests would support it.");
-  }
+  if (required === null)
+    said.warnings.push("The mean of the tested lives is below the design life: no amount of consistency in the tests would support it.");
+  return required;
+}
 
-  if (logStdDev === null) {
-    const reach =
-      requiredLogStdDev !== null
-        ? ` The design life would be supported if the log10 standard deviation were no more than ${fmt(requiredLogStdDev)}.`
-        : "";
-    warnings.push(
-      "A single tested article says nothing about the spread of lives across a fleet, so no lower bound is given. " +
-        "Give an assumed log standard deviation from wider experience, or test more articles." +
-        reach,
-    );
-    return {
-      n,
-      logMean,
-      logStdDev: null,
-      logStdDevFrom,
-      toleranceFactor: k,
-      lowerBound_cycles: null,
-      impliedScatterFactor: null,
-      requiredLogStdDev,
-      supportsDesignLife: null,
-      steps,
-      warnings,
-    };
-  }
-
-  const logLower = logMean - k * logStdDev;
-  const lowerBound_cycles = 10 ** logLower;
-  steps.push(
+/**
+ * Stage 4, the bound and what it says: the tolerance bound on life, the scatter factor it
+ * implies against the one in use, and the bound against the design life.
+ */
+function boundAndComparisons(
+  input: EvidenceInput,
+  logMean: number,
+  spread: Spread & { logStdDev: number },
+  designLife_cycles: number,
+  scatterFactor: number,
+  said: Said,
+): { lowerBound_cycles: number; impliedScatterFactor: number | null } {
+  const { k, logStdDev } = spread;
+  const source = spread.logStdDevFrom === "sample" ? NATRELLA : KNOWN_SIGMA;
+  const lowerBound_cycles = 10 ** (logMean - k * logStdDev);
+  said.steps.push(
     step(
       "evidence-lower-bound",
-      `Lower tolerance bound on life (${fmt(p * 100)} % survival, ${fmt(gamma * 100)} % confidence)`,
+      `Lower tolerance bound on life (${fmt(input.reliability * 100)} % survival, ${fmt(input.confidence * 100)} % confidence)`,
       "N_L = 10^(x̄ − k·s)",
       `N_L = 10^(${fmt(logMean)} − ${fmt(k)} × ${fmt(logStdDev)})`,
       lowerBound_cycles,
       "cycles",
-      logStdDevFrom === "sample" ? NATRELLA : KNOWN_SIGMA,
+      source,
     ),
   );
-
   // Past the largest double the factor is no number at all: null, and the warning below says so.
   const implied = 10 ** (k * logStdDev);
   const impliedScatterFactor = Number.isFinite(implied) ? implied : null;
-  steps.push(
+  said.steps.push(
     step(
       "evidence-implied-scatter",
       "Scatter factor implied by the evidence",
@@ -265,8 +251,6 @@ export function evaluateEvidence(input: EvidenceInput, designLife_cycles: number
       "—",
       "Ratio of the geometric-mean life to the tolerance bound",
     ),
-  );
-  steps.push(
     step(
       "evidence-scatter-compare",
       "Implied scatter factor against the scatter factor in use",
@@ -277,15 +261,12 @@ export function evaluateEvidence(input: EvidenceInput, designLife_cycles: number
       "Comparison of the statistical allowance with the scatter factor applied to the mean life",
     ),
   );
-  if (impliedScatterFactor === null || impliedScatterFactor > scatterFactor) {
-    warnings.push(
+  if (impliedScatterFactor === null || impliedScatterFactor > scatterFactor)
+    said.warnings.push(
       `The test evidence implies a scatter factor of ${impliedScatterFactor === null ? "more than any number can hold" : fmt(impliedScatterFactor)}, more than the ${fmt(scatterFactor)} in use: ` +
         "dividing the mean life by the scatter factor in use is not conservative for this evidence.",
     );
-  }
-
-  const supportsDesignLife = lowerBound_cycles >= designLife_cycles;
-  steps.push(
+  said.steps.push(
     step(
       "evidence-design-life",
       "Lower bound against the design life",
@@ -296,18 +277,44 @@ export function evaluateEvidence(input: EvidenceInput, designLife_cycles: number
       "Design life shown by test when the tolerance bound reaches it",
     ),
   );
+  return { lowerBound_cycles, impliedScatterFactor };
+}
 
-  return {
+/**
+ * Evaluate test lives against a design life, in four stages: the sample, the spread and its
+ * tolerance factor, the largest spread the tests could carry, and the bound with what it says.
+ * Units: lives and design life in cycles; the standard deviation is of log10 life.
+ * Validity: lognormal lives from the same detail, load and environment as the design case.
+ */
+export function evaluateEvidence(input: EvidenceInput, designLife_cycles: number, scatterFactor: number): EvidenceResult {
+  validate(input, designLife_cycles, scatterFactor);
+  const n = input.lives_cycles.length;
+  const said: Said = { steps: [], warnings: [] };
+  const { logMean, sampleStdDev } = logStatistics(input.lives_cycles, said);
+  const spread = spreadAndFactor(input, n, sampleStdDev, said);
+  const requiredLogStdDev = largestSpread(logMean, designLife_cycles, spread, said);
+  const common = {
     n,
     logMean,
-    logStdDev,
-    logStdDevFrom,
-    toleranceFactor: k,
-    lowerBound_cycles,
-    impliedScatterFactor,
+    logStdDev: spread.logStdDev,
+    logStdDevFrom: spread.logStdDevFrom,
+    toleranceFactor: spread.k,
     requiredLogStdDev,
-    supportsDesignLife,
-    steps,
-    warnings,
   };
+
+  if (spread.logStdDev === null) {
+    // A single article without an assumed spread: the bound is refused, and the warning says what would carry it.
+    const reach =
+      requiredLogStdDev !== null
+        ? ` The design life would be supported if the log10 standard deviation were no more than ${fmt(requiredLogStdDev)}.`
+        : "";
+    said.warnings.push(
+      "A single tested article says nothing about the spread of lives across a fleet, so no lower bound is given. " +
+        "Give an assumed log standard deviation from wider experience, or test more articles." +
+        reach,
+    );
+    return { ...common, lowerBound_cycles: null, impliedScatterFactor: null, supportsDesignLife: null, ...said };
+  }
+  const bound = boundAndComparisons(input, logMean, { ...spread, logStdDev: spread.logStdDev }, designLife_cycles, scatterFactor, said);
+  return { ...common, ...bound, supportsDesignLife: bound.lowerBound_cycles >= designLife_cycles, ...said };
 }

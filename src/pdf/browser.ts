@@ -17,7 +17,8 @@
  */
 import type { Page } from "puppeteer-core";
 import { disposeChromium, launchChromium, resolveChromiumPath, type RunningChromium } from "./chromium.ts";
-import { BrowserCrashedError, BrowserUnavailableError, PoolBusyError, RenderTimeoutError } from "./errors.ts";
+import { BrowserCrashedError, BrowserUnavailableError, RenderTimeoutError } from "./errors.ts";
+import { RenderSlots } from "./slots.ts";
 
 export interface PoolOptions {
   /** Chromium to run. Default: `CHROME_PATH`, else /usr/bin/chromium, looked up at first launch. */
@@ -70,13 +71,8 @@ const SHUT_DOWN = "The PDF renderer has been shut down.";
 /** A page that does not close within this time means a browser that no longer answers. */
 const PAGE_CLOSE_LIMIT_MS = 5_000;
 
-interface Waiter {
-  admit(): void;
-  refuse(error: Error): void;
-  timer: NodeJS.Timeout;
-}
-
-export function createBrowserPool(options: PoolOptions = {}): BrowserPool {
+/** The pool's options with the defaults filled in, each checked. */
+function settle(options: PoolOptions): typeof DEFAULTS & Pick<PoolOptions, "executablePath"> {
   const o = { ...DEFAULTS, ...withoutUndefined(options) };
   for (const key of ["concurrency", "queueLimit", "queueWait_ms", "renderTimeout_ms", "launchTimeout_ms"] as const) {
     const min = key === "queueLimit" ? 0 : 1;
@@ -84,57 +80,25 @@ export function createBrowserPool(options: PoolOptions = {}): BrowserPool {
       throw new RangeError(`${key} must be a whole number of at least ${min}; got ${o[key]}.`);
     }
   }
+  return o;
+}
 
+/**
+ * The pool in three parts: admission (slots.ts: how many render, how many wait), the browser's
+ * life (one Chromium, started on demand and replaced after a crash, with its idle pages), and one
+ * render on a page (its time limit, and what happens to a page whose state is unknown).
+ */
+export function createBrowserPool(options: PoolOptions = {}): BrowserPool {
+  const o = settle(options);
   let current: RunningChromium | null = null;
   let starting: Promise<RunningChromium> | null = null;
   let idle: Page[] = [];
-  const waiters: Waiter[] = [];
-  let running = 0;
-  let peakRunning = 0;
   let launches = 0;
   // A first guess that covers a cold start, replaced by measurements as renders finish.
   let meanRender_ms = 1_000;
   let closed = false;
   let closing: Promise<void> | null = null;
-  let whenIdle: (() => void) | null = null;
-
-  function retryAfter_s(): number {
-    const ahead = running + waiters.length;
-    return Math.max(1, Math.ceil((meanRender_ms * ahead) / o.concurrency / 1000));
-  }
-
-  function acquireSlot(): Promise<void> {
-    if (closed) return Promise.reject(new BrowserUnavailableError(SHUT_DOWN));
-    if (running < o.concurrency) {
-      running += 1;
-      peakRunning = Math.max(peakRunning, running);
-      return Promise.resolve();
-    }
-    if (waiters.length >= o.queueLimit) return Promise.reject(new PoolBusyError(retryAfter_s()));
-    return new Promise((admit, refuse) => {
-      const waiter: Waiter = {
-        admit,
-        refuse,
-        timer: setTimeout(() => {
-          waiters.splice(waiters.indexOf(waiter), 1);
-          refuse(new PoolBusyError(retryAfter_s()));
-        }, o.queueWait_ms),
-      };
-      waiters.push(waiter);
-    });
-  }
-
-  /** Hand the slot straight to the next waiter, so `running` never passes the bound. */
-  function releaseSlot(): void {
-    const next = waiters.shift();
-    if (next) {
-      clearTimeout(next.timer);
-      next.admit();
-      return;
-    }
-    running -= 1;
-    if (running === 0) whenIdle?.();
-  }
+  const slots = new RenderSlots(o, () => meanRender_ms);
 
   function ensureBrowser(): Promise<RunningChromium> {
     if (current?.browser.connected) return Promise.resolve(current);
@@ -231,23 +195,21 @@ export function createBrowserPool(options: PoolOptions = {}): BrowserPool {
 
   async function withPage<T>(work: (page: Page) => Promise<T>, options: { timeout_ms?: number } = {}): Promise<T> {
     const timeout_ms = options.timeout_ms ?? o.renderTimeout_ms;
-    await acquireSlot();
+    if (closed) throw new BrowserUnavailableError(SHUT_DOWN);
+    await slots.acquire();
     try {
       const chromium = await ensureBrowser();
       return await runOnPage(chromium, work, timeout_ms);
     } finally {
-      releaseSlot();
+      slots.release();
     }
   }
 
   function close(): Promise<void> {
     closing ??= (async () => {
       closed = true;
-      for (const waiter of waiters.splice(0)) {
-        clearTimeout(waiter.timer);
-        waiter.refuse(new BrowserUnavailableError(SHUT_DOWN));
-      }
-      if (running > 0) await new Promise<void>((resolve) => (whenIdle = resolve));
+      slots.refuseWaiting(new BrowserUnavailableError(SHUT_DOWN));
+      await slots.drained();
       const chromium = current;
       current = null;
       idle = [];
@@ -260,9 +222,9 @@ export function createBrowserPool(options: PoolOptions = {}): BrowserPool {
     withPage,
     close,
     stats: () => ({
-      running,
-      queued: waiters.length,
-      peakRunning,
+      running: slots.running,
+      queued: slots.queued,
+      peakRunning: slots.peakRunning,
       launches,
       browserPid: current?.pid ?? null,
       meanRender_ms,
