@@ -8,6 +8,7 @@
 import { toFieldErrors, type FieldError } from "../schema/errors.ts";
 import { MATERIALS, findMaterial, TYPICAL_FLAG } from "../materials/library.ts";
 import { checkSchema, type MaterialFamily, type ParsedCheck, type SurfaceFinish } from "../schema/check.ts";
+import { defaultAt } from "../schema/defaults.ts";
 
 /**
  * The engine's input: a check document validated by the schema, then resolved against the
@@ -96,7 +97,8 @@ function resolveStatic(parsed: ParsedCheck): ResolvedStatic {
   const aircraft = basis === "aircraft";
   return {
     basis,
-    yieldFactor: given?.yieldFactor ?? 1.5,
+    // With no static section at all, the schema's own default (the section's defaults apply only when it is given).
+    yieldFactor: given?.yieldFactor ?? (defaultAt("static.yieldFactor") as number),
     allowableStress_MPa: given?.allowableStress_MPa,
     jointEfficiency,
     corrosionAllowance_mm: pick("corrosionAllowance_mm", given?.corrosionAllowance_mm, sd.corrosionAllowance_mm),

@@ -236,3 +236,14 @@ function stat(basis: ResolvedStatic["basis"], z: number): ResolvedStatic {
     defaults: {},
   };
 }
+
+describe("the static defaults come from the schema", () => {
+  it("a check with no static section uses the schema's yield factor, as one that gives an empty section does", () => {
+    const { static: _, ...withoutStatic } = cylinder({});
+    // 1.5 on yield: the schema's documented default (README, input keys; common practice for a proof-to-yield margin).
+    const none = run(withoutStatic);
+    const empty = run(cylinder({}));
+    expect(none.static.yieldFactor).toBe(1.5);
+    expect(empty.static.yieldFactor).toBe(none.static.yieldFactor);
+  });
+});
