@@ -115,8 +115,12 @@ export function openingPicture(data: OpeningPictureData, opts?: PlotOptions): st
     const a = P(cp.start_mm[0], cp.start_mm[1]);
     const b = P(cp.end_mm[0], cp.end_mm[1]);
     out.push(polyline([a, b], { color: "#000", dash: DASH.solid, width: 3 }, "crack-path"));
+    // The path is short beside the opening: its label stands inside the opening, tied to it by a leader.
+    const mid: Point = [(a[0] + b[0]) / 2, (a[1] + b[1]) / 2];
+    const at: Point = [Math.min(mid[0] - 30, right - 10), mid[1] + 56];
+    out.push(polyline([mid, [at[0] + 4, at[1] - 14]], { color: "#000", dash: DASH.solid, width: 1 }, "crack-path-leader"));
     out.push(
-      textAt(a[0] - 8, a[1] - 10, `crack from hole ${cp.fastener}: ${formatValue(u.length(cp.ligament_mm))} ${u.lengthUnit} to the edge`, {
+      textAt(at[0], at[1], `crack path from hole ${cp.fastener}: ${formatValue(u.length(cp.ligament_mm))} ${u.lengthUnit} to the edge`, {
         size: FONT_SIZE.note - 2,
         halo: true,
         anchor: "end",

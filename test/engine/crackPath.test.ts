@@ -191,5 +191,7 @@ describe("the cabin demo's crack", () => {
     expect(Math.hypot(p.end_mm[0] - 60, p.end_mm[1] - 105)).toBeCloseTo(55, 5);
     expect(r.crack!.criticalBy).toBe("link-up");
     expect(r.steps.find((s) => s.id === "crack-path")?.title).toContain(`fastener hole ${highest}`);
+    // The straight path is an assumption, and the sheet says so in words.
+    expect(r.warnings.some((w) => w.includes(`fastener hole ${highest} is taken to grow straight`))).toBe(true);
   });
 });

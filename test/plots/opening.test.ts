@@ -27,7 +27,7 @@ describe("the opening's pictures", () => {
     if (!path) throw new Error("the cabin demo grows its crack from a fastener hole");
     const svg = openingPicture({ ...opening, crackPath: path });
     expect(svg).toContain("crack-path");
-    expect(svg).toContain(`crack from hole ${path.fastener}`);
+    expect(svg).toContain(`crack path from hole ${path.fastener}`);
     expect(openingPicture(opening)).not.toContain("crack-path");
   });
 
