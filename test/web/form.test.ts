@@ -6,7 +6,8 @@ import { convertValues, parseNumberList, readForm, understand, writeForm } from 
 import { defaultAt } from "../../src/schema/defaults.ts";
 import { SI_UNITS, unitsKey, type Units } from "../../src/schema/units.ts";
 import { NUMBER_INPUTS } from "../../src/schema/inputs.ts";
-import { NUMBER_FIELDS } from "../../views/form/fields.ts";
+import { FORM_FIELDS, type FieldSpec, NUMBER_FIELDS } from "../../views/form/fields.ts";
+import { CheckForm } from "../../views/form/index.tsx";
 
 const US: Units = { length: "in", stress: "psi", pressure: "psi", altitude: "ft" };
 
@@ -162,5 +163,25 @@ describe("the form is one table of fields over the format's registry", () => {
         const v = writeForm(d.document, units);
         expect(writeForm(readForm(v, units).document, units), `${d.id} ${unitsKey(units)}`).toEqual(v);
       }
+  });
+});
+
+describe("a choice with no value shows the schema's default", () => {
+  it("every choice the schema defaults is drawn with that default selected on an empty form", () => {
+    const html = String(
+      CheckForm({
+        s: { values: { "crack.on": "on", "crack.geometry": "hole-through" }, errors: new Map(), units: SI_UNITS, blockRows: [0] },
+      }),
+    );
+    const chosen = (name: string) => {
+      const select = new RegExp(`<select[^>]*name="${name}"[^>]*>([\\s\\S]*?)</select>`).exec(html)?.[1] ?? "";
+      return /<option value="([^"]*)" selected/.exec(select)?.[1];
+    };
+    const defaulted = Object.entries(FORM_FIELDS as Record<string, FieldSpec>).filter(
+      ([, f]) => f.showsDefault && defaultAt(f.path) !== undefined,
+    );
+    // Cracks at a hole default to two (the schema's conservative choice: Bowie's two-crack factor is the larger).
+    expect(defaulted.map(([n]) => n)).toContain("crack.cracksAtHole");
+    for (const [name, f] of defaulted) expect(chosen(name), name).toBe(String(defaultAt(f.path)));
   });
 });

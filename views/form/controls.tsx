@@ -1,5 +1,5 @@
 import type { Child } from "hono/jsx";
-import { errorId, fieldId, NUMBER_FIELDS, type NumberFieldName } from "./fields.ts";
+import { errorId, fieldId, NUMBER_FIELDS, type NumberFieldName, shownDefault } from "./fields.ts";
 import { unitLabel } from "../../src/schema/units.ts";
 import type { FormState } from "./state.ts";
 
@@ -119,9 +119,14 @@ export function Select({
   hint,
   options,
   fallback,
-}: FieldProps & { name: string; options: readonly Option[]; fallback?: string }) {
+}: FieldProps & {
+  name: string;
+  options: readonly Option[];
+  /** What shows with no value and no schema default (a blank choice, a first pick); a schema default is never typed here. */
+  fallback?: string;
+}) {
   const errs = s.errors.get(name);
-  const chosen = s.values[name] ?? fallback ?? options[0]?.value;
+  const chosen = s.values[name] ?? fallback ?? shownDefault(name) ?? options[0]?.value;
   return (
     <div class="field">
       <label for={fieldId(name)}>{label}</label>

@@ -43,7 +43,6 @@ export function CrackSection({ s }: { s: FormState }) {
               s={s}
               name="crack.cracksAtHole"
               label="Cracks at the hole"
-              fallback="1"
               options={[
                 { value: "1", label: "One side" },
                 { value: "2", label: "Both sides" },
@@ -107,7 +106,6 @@ export function CrackSection({ s }: { s: FormState }) {
             s={s}
             name="crack.leakBeforeBreak"
             label="Leak before break"
-            fallback="inform"
             options={[
               { value: "inform", label: "Inform only" },
               { value: "decide", label: "Decides (vessels): a leak first passes without inspections" },

@@ -15,7 +15,6 @@ export function FatigueSection({ s }: { s: FormState }) {
           s={s}
           name="fatigue.meanStress"
           label="Mean-stress criterion"
-          fallback="goodman"
           hint="All seven are worked side by side in the result; this one decides the verdict."
           options={MEAN_STRESS_CRITERIA.map((c) => ({ value: c, label: CRITERION_LABEL[c] }))}
         />

@@ -1,3 +1,4 @@
+import { defaultAt } from "../../src/schema/defaults.ts";
 import { inputAt } from "../../src/schema/inputs.ts";
 import type { Quantity } from "../../src/schema/units.ts";
 
@@ -154,6 +155,16 @@ export const FORM_FIELDS = {
 } satisfies Record<string, FieldSpec>;
 
 export type FieldName = keyof typeof FORM_FIELDS;
+
+/**
+ * The value a choice shows when the form holds none for it: the schema's default, so a section
+ * switched on or a way of cracking picked afresh shows the choice the check will make.
+ */
+export function shownDefault(name: string): string | undefined {
+  const f = (FORM_FIELDS as Record<string, FieldSpec>)[name];
+  const d = f?.showsDefault ? defaultAt(f.path) : undefined;
+  return d === undefined ? undefined : String(d);
+}
 type NumberNames<T> = { [K in keyof T]: T[K] extends { kind: "number" } ? K : never }[keyof T];
 export type NumberFieldName = NumberNames<typeof FORM_FIELDS>;
 

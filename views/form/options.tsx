@@ -31,7 +31,6 @@ export function OptionsSection({ s }: { s: FormState }) {
             s={s}
             name="fatigue.localYield"
             label="Notch stress beyond yield"
-            fallback="elastic"
             options={[
               { value: "elastic", label: "Keep elastic values (warn)" },
               { value: "shakedown", label: "Allow shakedown of the mean" },

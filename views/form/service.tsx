@@ -29,7 +29,6 @@ export function ServiceSection({ s }: { s: FormState }) {
           s={s}
           name="shell.service"
           label="Kind of shell"
-          fallback="other"
           hint="Sets the defaults below; every default can be changed."
           options={SERVICES.map((x) => ({ value: x, label: SERVICE_LABEL[x] }))}
         />

@@ -26,7 +26,6 @@ export function ShellSection({ s }: { s: FormState }) {
           s={s}
           name="shell.radiusAt"
           label="Radius measured at"
-          fallback="mean"
           options={[
             { value: "inner", label: "the inside surface" },
             { value: "mean", label: "mid-wall" },
@@ -38,7 +37,6 @@ export function ShellSection({ s }: { s: FormState }) {
           s={s}
           name="shell.theory"
           label="Wall theory"
-          fallback="auto"
           hint="Automatic uses the thick-wall (Lamé) solution when mean radius ÷ thickness is below 10."
           options={[
             { value: "auto", label: "Automatic" },
