@@ -1,3 +1,9 @@
+/**
+ * @module templates/results
+ * The sheet's results section: the verdict table, the principal numbers, the mean-stress criteria
+ * compared and every warning. Phrases from the engine (verdict rows, warnings) are written from
+ * their parts in the sheet's units with the one number formatter.
+ */
 import { phraseText } from "../src/present/numbers.ts";
 import type { Units } from "../src/schema/units.ts";
 import { VERDICT_WORDS, type CheckResult, type VerdictRow } from "../src/engine/index.ts";
@@ -24,7 +30,7 @@ export function Results({ m, num }: { m: SheetModel; num: number }) {
       </div>
       <PrincipalResults m={m} num={`${num}.2`} />
       {r.fatigue.criteria.length > 0 ? <CriteriaTable m={m} num={`${num}.3`} /> : <NoCriteria m={m} num={`${num}.3`} />}
-      <Warnings warnings={r.warnings} num={`${num}.4`} />
+      <Warnings warnings={r.warningParts} units={m.units} num={`${num}.4`} />
     </section>
   );
 }
@@ -208,7 +214,8 @@ function NoCriteria({ m, num }: { m: SheetModel; num: string }) {
   );
 }
 
-function Warnings({ warnings, num }: { warnings: string[]; num: string }) {
+/** Every warning, written from its parts in the sheet's units. */
+function Warnings({ warnings, units, num }: { warnings: CheckResult["warningParts"]; units: Units; num: string }) {
   return (
     <div class="keep">
       <h3>{num} Warnings</h3>
@@ -216,8 +223,8 @@ function Warnings({ warnings, num }: { warnings: string[]; num: string }) {
         <p>None: every method was used inside its range.</p>
       ) : (
         <ul class="warnings">
-          {warnings.map((w) => (
-            <li>{typeset(capitalise(w))}</li>
+          {warnings.map((parts) => (
+            <li>{typeset(capitalise(phraseText(parts, units)))}</li>
           ))}
         </ul>
       )}

@@ -1,3 +1,10 @@
+/**
+ * @module engine/check
+ * The whole check in order: the load, the material's curve, the membrane, static, notch and fatigue
+ * evaluation, then the optional solve, crack growth, test evidence and fleet view, and the verdict.
+ * It gathers the steps and the warnings of every stage; each warning is kept as a phrase, so the
+ * result carries it both as SI text (`warnings`) and as words and amounts (`warningParts`).
+ */
 import { MEAN_STRESS_CRITERIA } from "../schema/check.ts";
 import { fingerprint } from "./fingerprint.ts";
 import type { ResolvedCheck } from "./input.ts";
@@ -16,12 +23,13 @@ import { trace } from "./openings/geometry.ts";
 import { outlineOf, type ShapeCutout } from "./openings/index.ts";
 import { normalQuantile } from "./special.ts";
 import { fmt, step, type Step } from "./step.ts";
+import { joined, MPa, mm, n, pressure, say, type Warning, warningParts, warningText } from "./phrase.ts";
 import { inSheetOrder } from "./sections.ts";
 import { EXTERNAL_PRESSURE_WORDS, VERDICT_WORDS, verdictTable } from "./verdict.ts";
 import { ENGINE_VERSION } from "./version.ts";
 import { allowances_mm, basisStatement, gaugeFloor_mm, requiredOrdered, staticPlan } from "./static/index.ts";
 import { increasingRoot } from "./solve.ts";
-import { plasticityFactor, temperatureFactor, vesselLife, weldedThicknessFactor } from "./vessel/fatigue.ts";
+import { plasticityFactor, temperatureFactor, vesselLife, vesselSteps, weldedThicknessFactor } from "./vessel/fatigue.ts";
 import { weldedLife } from "./welded.ts";
 
 /** The geometry and material values the check was worked at (the opening traced from the same outline the solver uses). */
@@ -50,7 +58,7 @@ function workedAt(input: ResolvedCheck, t: number): CheckResult["workedAt"] {
  */
 export function runCheck(input: ResolvedCheck): CheckResult {
   const steps: Step[] = [];
-  const warnings: string[] = [];
+  const warnings: Warning[] = [];
   const load = resolveLoad(input.pressure, input.fatigue.designLife_cycles > 1);
   if (!load.isSpectrum && load.min_MPa >= load.max_MPa) {
     throw new InputError(
@@ -61,7 +69,7 @@ export function runCheck(input: ResolvedCheck): CheckResult {
   steps.push(...load.steps);
   if (load.gate && load.gate.removed > 0)
     warnings.push(
-      `the hysteresis gate of ${fmt(load.gate.gate_MPa)} MPa removed ${load.gate.removed} reversals of the history: the damage of ripples below the gate is not counted`,
+      say`the hysteresis gate of ${pressure(load.gate.gate_MPa)} removed ${String(load.gate.removed)} reversals of the history: the damage of ripples below the gate is not counted`,
     );
 
   const mat = input.material;
@@ -78,7 +86,7 @@ export function runCheck(input: ResolvedCheck): CheckResult {
     warnings.push("coupons were given but σ'f and b were given too; the given σ'f and b are used and the fit is shown for comparison");
   if (fitUsed && mat.libraryCurve)
     warnings.push(
-      `the curve is fitted to the coupons given (σ'f = ${fmt(coefficient)} MPa, b = ${fmt(exponent)}); the library's σ'f = ${fmt(mat.libraryCurve.fatigueStrengthCoefficient_MPa)} MPa and b = ${fmt(mat.libraryCurve.fatigueStrengthExponent)} for ${mat.name} are shown for comparison only`,
+      say`the curve is fitted to the coupons given (σ'f = ${MPa(coefficient)}, b = ${n(exponent)}); the library's σ'f = ${MPa(mat.libraryCurve.fatigueStrengthCoefficient_MPa)} and b = ${n(mat.libraryCurve.fatigueStrengthExponent)} for ${mat.name} are shown for comparison only`,
     );
   const curveKind = input.fatigue.curve;
   const steelLike = mat.family === "steel" || mat.family === "stainless";
@@ -158,6 +166,8 @@ export function runCheck(input: ResolvedCheck): CheckResult {
   const e = evaluate(ctx, t, 1, criterion);
   steps.push(...evaluationSteps(ctx, e, criterion));
   warnings.push(...e.conc.warnings, ...e.notch.warnings, ...(e.governing.welded?.warnings ?? []), ...validityWarnings(ctx, e));
+  // The vessel route's own range warnings (ke extrapolated, the creep range, the thickness held at 150 mm), at the governing cycle.
+  if (ctx.vessel) warnings.push(...vesselSteps(ctx.vessel, 2 * e.governing.amplitude, e.governing.mean, load.isSpectrum).warnings);
 
   const criteria = input.fatigue.curve !== "basquin" ? [] : compareCriteria(ctx, e);
   const required = requiredThickness(ctx, e);
@@ -166,10 +176,12 @@ export function runCheck(input: ResolvedCheck): CheckResult {
   const gaugeOk = t >= gaugeFloor_mm(plan);
   if (!gaugeOk)
     warnings.push(
-      `the wall (${fmt(t)} mm) is below the minimum gauge (${fmt(plan.gauge_mm)} mm plus ${fmt(plan.corrosion_mm)} mm corrosion allowance)`,
+      say`the wall (${mm(t)}) is below the minimum gauge (${mm(plan.gauge_mm)} plus ${mm(plan.corrosion_mm)} corrosion allowance)`,
     );
   if (e.static.formula?.outside)
-    warnings.push(`the static formula is used outside its range: ${e.static.formula.outside}; the static check is referred`);
+    warnings.push(
+      joined([say`the static formula is used outside its range: `, e.static.formula.outside, say`; the static check is referred`], ""),
+    );
   if (plan.refer) warnings.push(plan.refer);
   if (input.axialExtra && (plan.basis === "en13445-3" || plan.basis === "asme-viii-1"))
     warnings.push(
@@ -208,7 +220,7 @@ export function runCheck(input: ResolvedCheck): CheckResult {
       vonMisesMax_MPa: e.vonMisesMax,
       margin: e.staticMargin,
       pass: e.staticMargin >= 0 && gaugeOk && !plan.refer && !e.static.formula?.outside,
-      refer: plan.refer ?? e.static.formula?.outside ?? null,
+      refer: plan.refer ?? e.static.formula?.outside?.text ?? null,
       governs: e.static.governs,
       jointEfficiency: plan.joint,
       corrosionAllowance_mm: plan.corrosion_mm,
@@ -278,7 +290,8 @@ export function runCheck(input: ResolvedCheck): CheckResult {
     sections: [],
     material: { id: mat.id, name: mat.name, source: mat.source, typical: mat.id !== undefined },
     steps,
-    warnings,
+    warnings: [],
+    warningParts: [],
   };
   if (fit) result.materialFit = fitSummary(fit, mat.coupons ?? []);
   if (load.isSpectrum) {
@@ -324,7 +337,7 @@ export function runCheck(input: ResolvedCheck): CheckResult {
     result.evidence = { ...evidence, designLife_cycles: designCycles };
     if (load.isSpectrum)
       evidenceWarnings.push(
-        `the test lives (cycles) are compared with the design life converted to cycles, ${fmt(designCycles)} = ${fmt(input.fatigue.designLife_cycles)} passes × ${fmt(cyclesPerPass)} cycles per pass; tests at one amplitude do not reproduce the spectrum's mix of cycles, so the comparison is approximate`,
+        say`the test lives (cycles) are compared with the design life converted to cycles, ${n(designCycles)} = ${n(input.fatigue.designLife_cycles)} passes × ${n(cyclesPerPass)} cycles per pass; tests at one amplitude do not reproduce the spectrum's mix of cycles, so the comparison is approximate`,
       );
     steps.push(...evidenceSteps);
     warnings.push(...evidenceWarnings);
@@ -339,6 +352,8 @@ export function runCheck(input: ResolvedCheck): CheckResult {
   const ordered = inSheetOrder(result.steps);
   result.steps = ordered.steps;
   result.sections = ordered.sections;
+  result.warnings = warnings.map(warningText);
+  result.warningParts = warnings.map(warningParts);
   return result;
 }
 
@@ -417,7 +432,7 @@ function requiredThickness(ctx: Context, e: Evaluation): { value: number | null;
   };
 }
 
-function addCrack(result: CheckResult, input: ResolvedCheck, e: Evaluation, load: Load, steps: Step[], warnings: string[]): void {
+function addCrack(result: CheckResult, input: ResolvedCheck, e: Evaluation, load: Load, steps: Step[], warnings: Warning[]): void {
   const d = withPressurePath(input, () => damageTolerance(input, e, load));
   result.crack = d.crack;
   steps.push(...d.steps);
@@ -425,7 +440,7 @@ function addCrack(result: CheckResult, input: ResolvedCheck, e: Evaluation, load
 }
 
 /** The fleet view from the test evidence, or from the computed life with an assumed scatter. */
-function addFleet(result: CheckResult, input: ResolvedCheck, e: Evaluation, steps: Step[], warnings: string[]): void {
+function addFleet(result: CheckResult, input: ResolvedCheck, e: Evaluation, steps: Step[], warnings: Warning[]): void {
   const f = input.fleet!;
   const ev = result.evidence;
   const sigma = ev?.logStdDev ?? f.logStdDev;
@@ -438,7 +453,7 @@ function addFleet(result: CheckResult, input: ResolvedCheck, e: Evaluation, step
   }
   if (!(sigma >= 0.001)) {
     warnings.push(
-      `the scatter of log10 life (${fmt(sigma)}) is below 0.001: no real fleet is that uniform, and the fleet figures would be noise, so none are given`,
+      say`the scatter of log10 life (${n(sigma)}) is below 0.001: no real fleet is that uniform, and the fleet figures would be noise, so none are given`,
     );
     return;
   }
@@ -505,30 +520,31 @@ function theoryReason(requested: string, e: Evaluation): string {
   return `${e.theory}-wall theory as requested (r_m/t = ${ratio})`;
 }
 
-function validityWarnings(ctx: Context, e: Evaluation): string[] {
-  const w: string[] = [];
+function validityWarnings(ctx: Context, e: Evaluation): Warning[] {
+  const w: Warning[] = [];
   const { input } = ctx;
   const ratio = e.radii.mean_mm / e.thickness_mm;
   if (e.theory === "thin" && ratio < 10) {
     const thick = evaluateThick(ctx, e);
     w.push(
-      `thin-wall theory was asked for at r_m/t = ${fmt(ratio)}, below 10: it under-estimates the inner-surface hoop stress by ${fmt(100 * (thick / e.hoopMax - 1), 2)} %; use "auto" or "thick"`,
+      say`thin-wall theory was asked for at r_m/t = ${n(ratio)}, below 10: it under-estimates the inner-surface hoop stress by ${n(100 * (thick / e.hoopMax - 1), 2)} %; use "auto" or "thick"`,
     );
   }
   if (e.theory === "thick" && input.cutout.kind !== "none")
     w.push(
-      `the wall is thick (r_m/t = ${fmt(ratio)}): the concentration factor of the opening is a flat-plate (membrane) solution, outside its range where the stress varies through the wall and the bore carries a radial stress; the local stress is an estimate, and a nozzle or opening in a thick wall needs a method for it (the governing code's nozzle rules or a finite-element model)`,
+      say`the wall is thick (r_m/t = ${n(ratio)}): the concentration factor of the opening is a flat-plate (membrane) solution, outside its range where the stress varies through the wall and the bore carries a radial stress; the local stress is an estimate, and a nozzle or opening in a thick wall needs a method for it (the governing code's nozzle rules or a finite-element model)`,
     );
   if (ctx.load.min_MPa < 0)
     w.push(
-      `the pressure differential falls below zero (to ${fmt(ctx.load.min_MPa)} MPa): an outside pressure can buckle the shell, which this tool does not check; the item ${EXTERNAL_PRESSURE_WORDS}`,
+      say`the pressure differential falls below zero (to ${pressure(ctx.load.min_MPa)}): an outside pressure can buckle the shell, which this tool does not check; the item ${EXTERNAL_PRESSURE_WORDS}`,
     );
   if (e.localYield) {
     w.push(
-      `the elastic local stress at the notch (${fmt(e.peakMax)} MPa) exceeds the yield strength (${fmt(input.material.yield_MPa)} MPa): the notch yields on the first cycle. ` +
-        (input.fatigue.localYield === "shakedown"
+      say`the elastic local stress at the notch (${MPa(e.peakMax)}) exceeds the yield strength (${MPa(input.material.yield_MPa)}): the notch yields on the first cycle. ${
+        input.fatigue.localYield === "shakedown"
           ? "The local mean stress is reduced to Sy − σa (shakedown); a strain-life analysis would be more exact."
-          : 'The elastic stresses are kept, which over-states the mean stress (conservative); choose localYield "shakedown" or make a strain-life analysis for a closer answer.'),
+          : 'The elastic stresses are kept, which over-states the mean stress (conservative); choose localYield "shakedown" or make a strain-life analysis for a closer answer.'
+      }`,
     );
   }
   if (2 * e.governing.amplitude > 2 * input.material.yield_MPa)
@@ -540,11 +556,11 @@ function validityWarnings(ctx: Context, e: Evaluation): string[] {
   if (input.fatigue.curve === "basquin" && !ctx.load.isSpectrum && e.life !== null && e.life > 0) {
     if (e.life < VALID_LIFE[0])
       w.push(
-        `the life (${fmt(e.life)} cycles) is below 10³ cycles, where local plasticity makes stress-life curves unreliable; a strain-life analysis is needed`,
+        say`the life (${n(e.life)} cycles) is below 10³ cycles, where local plasticity makes stress-life curves unreliable; a strain-life analysis is needed`,
       );
     if (e.life > VALID_LIFE[1] && ctx.curve.enduranceLimit_MPa === undefined)
       w.push(
-        `the life (${fmt(e.life)} cycles) extrapolates the curve beyond 10⁷ cycles, past typical test data and with no endurance limit given`,
+        say`the life (${n(e.life)} cycles) extrapolates the curve beyond 10⁷ cycles, past typical test data and with no endurance limit given`,
       );
   }
   if (input.fatigue.curve === "basquin" && ctx.load.isSpectrum && e.life !== null && e.life > 0) {
@@ -562,11 +578,11 @@ function validityWarnings(ctx: Context, e: Evaluation): string[] {
     }
     if (shortest < VALID_LIFE[0])
       w.push(
-        `the largest cycles of the spectrum have lives of ${fmt(shortest)} cycles, below 10³ cycles, where local plasticity makes stress-life curves unreliable; a strain-life analysis is needed`,
+        say`the largest cycles of the spectrum have lives of ${n(shortest)} cycles, below 10³ cycles, where local plasticity makes stress-life curves unreliable; a strain-life analysis is needed`,
       );
     if (beyondDamage > 0 && ctx.curve.enduranceLimit_MPa === undefined)
       w.push(
-        `${fmt((100 * beyondDamage) / damage, 2)} % of the damage per pass comes from cycles whose lives extrapolate the curve beyond 10⁷ cycles, past typical test data and with no endurance limit given`,
+        say`${n((100 * beyondDamage) / damage, 2)} % of the damage per pass comes from cycles whose lives extrapolate the curve beyond 10⁷ cycles, past typical test data and with no endurance limit given`,
       );
   }
   const coupons = input.material.coupons?.filter((c) => !c.runout) ?? [];
@@ -576,14 +592,14 @@ function validityWarnings(ctx: Context, e: Evaluation): string[] {
     const sar = e.governing.sigmaAr;
     if (sar !== null && sar > 0 && (sar < lo * (1 - 1e-9) || sar > hi * (1 + 1e-9)))
       w.push(
-        `the operating equivalent amplitude (${fmt(sar)} MPa) lies outside the range of the coupons that failed (${fmt(lo)}–${fmt(hi)} MPa): the fitted curve is extrapolated there`,
+        say`the operating equivalent amplitude (${MPa(sar)}) lies outside the range of the coupons that failed (${MPa(lo)}–${MPa(hi)}): the fitted curve is extrapolated there`,
       );
   }
   if (input.fatigue.scatterFactor === 1)
     w.push("the scatter factor is 1: the life is a median estimate with no statistical allowance for the weaker items of a fleet");
   if (e.damage !== null && e.damage > 1)
     w.push(
-      `the allowable life (${fmt(e.allowable ?? 0)} ${ctx.load.isSpectrum ? "passes" : "cycles"}) is short of the design life (${fmt(input.fatigue.designLife_cycles)} ${ctx.load.isSpectrum ? "passes" : "cycles"})`,
+      say`the allowable life (${n(e.allowable ?? 0)} ${ctx.load.isSpectrum ? "passes" : "cycles"}) is short of the design life (${n(input.fatigue.designLife_cycles)} ${ctx.load.isSpectrum ? "passes" : "cycles"})`,
     );
   return w;
 }

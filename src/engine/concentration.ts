@@ -1,6 +1,5 @@
-import { fmt, step, type Step } from "./step.ts";
-
 /**
+ * @module engine/concentration
  * Stress at the edge of an opening in the biaxial membrane field, as a boundary field: each point
  * of the edge carries influence coefficients so that its tangential (edge) stress at any instant is
  *
@@ -23,6 +22,9 @@ import { fmt, step, type Step } from "./step.ts";
  *
  * `notch.kt` stays referred to the nominal hoop stress at maximum pressure: Kt = σ_edge,max/σθ,max.
  */
+import { fmt, step, type Step } from "./step.ts";
+import { n, say, type Warning } from "./phrase.ts";
+
 export type Cutout =
   | { kind: "none" }
   | { kind: "circular-hole"; radius_mm?: number }
@@ -61,7 +63,7 @@ export interface OpeningField {
   /** True when the coefficients are assumed rather than worked from the shape (a given Kt). */
   assumed: boolean;
   steps: Step[];
-  warnings: string[];
+  warnings: Warning[];
 }
 
 /** Edge stress of a point from the nominal hoop and axial stresses of one instant. */
@@ -96,7 +98,7 @@ export const GIVEN_KT_ASSUMPTION =
 
 /** The boundary field of an opening: its governing points with their influence coefficients. */
 export function openingField(cutout: Cutout): OpeningField {
-  const warnings: string[] = [];
+  const warnings: Warning[] = [];
   if (cutout.kind === "none") {
     return { points: [], basis: "plain skin (no opening): the membrane stresses themselves", assumed: false, steps: [], warnings };
   }
@@ -211,7 +213,7 @@ export interface Concentration {
   /** Notch root radius at the governing point, when the geometry gives one (mm). */
   rootRadius_mm?: number;
   steps: Step[];
-  warnings: string[];
+  warnings: Warning[];
 }
 
 /**
@@ -268,7 +270,7 @@ export function concentration(
   }
   const warnings = [...field.warnings];
   if (cutout.kind !== "none" && best.id.startsWith("membrane"))
-    warnings.push(`the opening relieves rather than raises the edge stress here; the plain skin beside it governs (Kt = ${fmt(kt)})`);
+    warnings.push(say`the opening relieves rather than raises the edge stress here; the plain skin beside it governs (Kt = ${n(kt)})`);
   return {
     kt,
     governs: cutout.kind === "none" ? "plain skin (no opening)" : best.label,

@@ -17,6 +17,7 @@
 import { InputError } from "./errors.ts";
 import { fQuantileDf1Two } from "./special.ts";
 import { fmt, step, type Step } from "./step.ts";
+import { say, type Warning } from "./phrase.ts";
 
 export interface Coupon {
   amplitude_MPa: number;
@@ -50,7 +51,7 @@ export interface CouponFit {
   rSquared: number;
   band(amplitude_MPa: number, P?: number): CouponBand;
   steps: Step[];
-  warnings: string[];
+  warnings: Warning[];
 }
 
 const E739 = "ASTM E739, linear model log N = A + B·log S fitted by least squares (life as the dependent variable)";
@@ -156,7 +157,7 @@ export function fitCoupons(coupons: Coupon[]): CouponFit {
     ),
   ];
 
-  const warnings: string[] = [];
+  const warnings: Warning[] = [];
   if (runouts > 0) {
     warnings.push(
       `${runouts} run-out${runouts === 1 ? " was" : "s were"} left out of the fit: a test stopped without failure only says the life is longer, which least squares cannot use.`,
@@ -164,7 +165,7 @@ export function fitCoupons(coupons: Coupon[]): CouponFit {
   }
   if (n < 6) {
     warnings.push(
-      `Only ${n} failed coupons: ASTM E739 suggests at least 6 for exploratory work and 12 or more for design data (from memory); the band is wide and the line uncertain.`,
+      say`Only ${String(n)} failed coupons: ASTM E739 suggests at least 6 for exploratory work and 12 or more for design data (from memory); the band is wide and the line uncertain.`,
     );
   }
 

@@ -40,6 +40,7 @@ import { InputError } from "./errors.ts";
 import { fadCriticalSize, lrCutOff, type CriticalBy, type FadResult } from "./fad.ts";
 import { integrate } from "./special.ts";
 import { fmt, step, type Step } from "./step.ts";
+import { MPa, mm, n, say, type Warning } from "./phrase.ts";
 import { effectiveStress } from "./weightFunction.ts";
 
 /** The stress normal to a crack's path at a point of it, as coefficients of the nominal hoop and axial stresses. */
@@ -123,7 +124,7 @@ export interface CrackResult {
   uniform?: { cycles: number | null; critical_mm: number; curve: CrackCurvePoint[] };
   leakBeforeBreak: LeakBeforeBreak | null;
   steps: Step[];
-  warnings: string[];
+  warnings: Warning[];
 }
 
 const PARIS = "Paris & Erdogan, J. Basic Eng. 85 (1963) 528: da/dN = C·ΔK^m (da/dN in m/cycle, ΔK in MPa·√m)";
@@ -258,7 +259,7 @@ interface Stage {
   /** "hoop" or "axial": the nominal stress that opens the crack. */
   stressName: string;
   steps: Step[];
-  warnings: string[];
+  warnings: Warning[];
 }
 
 /** The bulging and gradient terms of the model, and whether bulging is on. */
@@ -315,7 +316,7 @@ function drivingRange(st: Stage): { range: number; sMinEff: number; walker: numb
   const range = sMax - sMinEff;
   if (opts.stressMin_MPa < 0) {
     st.warnings.push(
-      `The ${stressName} stress goes into compression (${fmt(opts.stressMin_MPa)} MPa); the compressive part is taken to close the ${which} and is left out of its range.`,
+      say`The ${stressName} stress goes into compression (${MPa(opts.stressMin_MPa)}); the compressive part is taken to close the ${which} and is left out of its range.`,
     );
   }
   st.steps.push(
@@ -350,7 +351,7 @@ function drivingRange(st: Stage): { range: number; sMinEff: number; walker: numb
     );
   } else if (Rratio >= 0.5) {
     st.warnings.push(
-      `The stress ratio R = ${fmt(Rratio)} is high; Paris constants are usually measured near R = 0.1 and cracks grow faster at high R. Consider giving Walker's exponent.`,
+      say`The stress ratio R = ${n(Rratio)} is high; Paris constants are usually measured near R = 0.1 and cracks grow faster at high R. Consider giving Walker's exponent.`,
     );
   }
   return { range, sMinEff, walker };
@@ -542,14 +543,14 @@ function criticalSize(st: Stage, ms: ModelStage): { fad: FadResult; ac: number; 
   }
   if (ac > accurateLimit_mm(shape)) {
     st.warnings.push(
-      `The critical ${which} (${fmt(ac)} mm) lies beyond the range where the width correction keeps its stated accuracy (${fmt(accurateLimit_mm(shape))} mm); treat the last part of the growth as approximate.`,
+      say`The critical ${which} (${mm(ac)}) lies beyond the range where the width correction keeps its stated accuracy (${mm(accurateLimit_mm(shape))}); treat the last part of the growth as approximate.`,
     );
   }
   const cc = bulgingHalfLength_mm(ac, shape);
   const Rt = opts.shellRadius_mm * opts.thickness_mm;
   if (bulgingOn && (cc * cc) / Rt > factorM.range) {
     st.warnings.push(
-      `At the critical size the ${which} reaches c²/(R·t) = ${fmt((cc * cc) / Rt)}, beyond the range of the bulging fit (${factorM.range}); the factor there is extrapolated.`,
+      say`At the critical size the ${which} reaches c²/(R·t) = ${n((cc * cc) / Rt)}, beyond the range of the bulging fit (${n(factorM.range)}); the factor there is extrapolated.`,
     );
   }
   return { fad, ac, by };
@@ -651,7 +652,7 @@ function inspectionProgramme(
   );
   if (ad >= ac)
     st.warnings.push(
-      `The detectable ${which} size (${fmt(ad)} mm) is already at or beyond the critical size (${fmt(ac)} mm): inspections by this method cannot find the crack in time.`,
+      say`The detectable ${which} size (${mm(ad)}) is already at or beyond the critical size (${mm(ac)}): inspections by this method cannot find the crack in time.`,
     );
   return { threshold, repeat };
 }
@@ -767,7 +768,7 @@ function leakCheck(
   k: number,
   bulgingOn: boolean,
   steps: Step[],
-  warnings: string[],
+  warnings: Warning[],
 ): LeakBeforeBreak {
   const t = opts.thickness_mm;
   const centre: CrackShape = { geometry: "center-through", width_mm: opts.width_mm, cracksAtHole: 1 };
@@ -796,7 +797,7 @@ function leakCheck(
   );
   if (!leak) {
     warnings.push(
-      `A crack grown through the wall (about ${fmt(2 * t)} mm long) would already be critical (critical length ${fmt(2 * crit.critical_mm)} mm): the shell could burst without leaking first.`,
+      say`A crack grown through the wall (about ${mm(2 * t)} long) would already be critical (critical length ${mm(2 * crit.critical_mm)}): the shell could burst without leaking first.`,
     );
   }
   return { leakBeforeBreak: leak, throughWallHalfLength_mm: t, criticalHalfLength_mm: crit.critical_mm };

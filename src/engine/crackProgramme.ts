@@ -31,11 +31,12 @@ import { SOLVER_SOURCE } from "./openings/field.ts";
 import { JOINT_LIGAMENT_RADII, outlineOf, type ShapeCutout } from "./openings/index.ts";
 import type { CheckResult } from "./result.ts";
 import { fmt, step, type Step } from "./step.ts";
+import { mm, say, type Warning } from "./phrase.ts";
 
 export interface DamageTolerance {
   crack: NonNullable<CheckResult["crack"]>;
   steps: Step[];
-  warnings: string[];
+  warnings: Warning[];
 }
 
 /** Equivalent range and peak of the stress opening the crack, per orientation; spectrum-aware. */
@@ -178,7 +179,7 @@ export function damageTolerance(input: ResolvedCheck, e: Evaluation, load: Load)
   const c = input.crack!;
   const mat = input.material;
   const steps: Step[] = [];
-  const warnings: string[] = [];
+  const warnings: Warning[] = [];
   const requested = c.orientation ?? (input.axialExtra ? "both" : "axial");
   const orientations: CrackOrientation[] = requested === "both" ? ["axial", "circumferential"] : [requested];
   const fastener = c.openingDistance_mm !== undefined || c.fastener !== undefined;
@@ -209,7 +210,7 @@ export function damageTolerance(input: ResolvedCheck, e: Evaluation, load: Load)
       ),
     );
     warnings.push(
-      `The detectable crack size (${fmt(t.size_mm)} mm) is a typical value for ${t.label}: verify it against a qualified inspection procedure.`,
+      say`The detectable crack size (${mm(t.size_mm)}) is a typical value for ${t.label}: verify it against a qualified inspection procedure.`,
     );
   }
 

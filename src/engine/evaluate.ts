@@ -1,3 +1,10 @@
+/**
+ * @module engine/evaluate
+ * One evaluation of the shell at a thickness and a pressure scale: membrane stresses, static check,
+ * the local stress at every governing point of the opening, and the fatigue damage of one pass of the
+ * load under a chosen mean-stress criterion, at the worst point.
+ * Solvers call it many times; runCheck calls it once more with everything for the sheet.
+ */
 import type { MeanStressCriterion } from "../schema/check.ts";
 import type { ResolvedCheck } from "./input.ts";
 import {
@@ -29,17 +36,12 @@ import {
 import { kfStep, notchSensitivity, type NotchFactor } from "./notch.ts";
 import { basquinLife, lifeStep, type Curve } from "./sn.ts";
 import { fmt, step, type Step } from "./step.ts";
+import type { Warning } from "./phrase.ts";
 import { minerDamage } from "./miner.ts";
 import { weldedLife } from "./welded.ts";
 import { allowances_mm, staticAt, staticSteps, type StaticAt, type StaticPlan } from "./static/index.ts";
 import { vesselLife, vesselSteps, type VesselCurve } from "./vessel/fatigue.ts";
 
-/**
- * One evaluation of the shell at a thickness and a pressure scale: membrane stresses, static check,
- * the local stress at every governing point of the opening, and the fatigue damage of one pass of the
- * load under a chosen mean-stress criterion, at the worst point.
- * Solvers call it many times; runCheck calls it once more with everything for the sheet.
- */
 export interface Context {
   input: ResolvedCheck;
   load: Load;
@@ -74,7 +76,7 @@ interface PointField {
   extended?: ExtendedConcentration;
   geometry: { form: "cylinder" | "sphere"; meanRadius_mm: number; thickness_mm: number };
   candidates: Candidate[];
-  sensitivity: Map<string, { q: number; steps: Step[]; warnings: string[] }>;
+  sensitivity: Map<string, { q: number; steps: Step[]; warnings: Warning[] }>;
 }
 
 function pointField(ctx: Context): PointField {
@@ -121,7 +123,7 @@ function pointField(ctx: Context): PointField {
     };
   }
   const cutoutRadius = input.cutout.kind === "circular-hole" ? input.cutout.radius_mm : undefined;
-  const sensitivity = new Map<string, { q: number; steps: Step[]; warnings: string[] }>();
+  const sensitivity = new Map<string, { q: number; steps: Step[]; warnings: Warning[] }>();
   const candidates: Candidate[] = [];
   for (const point of opening.points) {
     const s = notchSensitivity({
@@ -154,7 +156,7 @@ export interface CycleOutcome {
   status: "ok" | "no-answer" | "no-damage" | "unlimited";
   reason?: string;
   /** The welded method's own worked steps and warnings (EN 1993-1-9), kept for the sheet. */
-  welded?: { steps: Step[]; warnings: string[] };
+  welded?: { steps: Step[]; warnings: Warning[] };
   /** Whether the added axial stress was counted at the peak and at the valley of this cycle. */
   extraAtPeak?: boolean;
   extraAtValley?: boolean;

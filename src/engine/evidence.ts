@@ -18,6 +18,7 @@
 import { InputError } from "./errors.ts";
 import { noncentralTQuantile, normalQuantile } from "./special.ts";
 import { fmt, step, type Step } from "./step.ts";
+import { n as plain, say, type Warning } from "./phrase.ts";
 
 export interface EvidenceInput {
   lives_cycles: number[];
@@ -45,7 +46,7 @@ export interface EvidenceResult {
   requiredLogStdDev: number | null;
   supportsDesignLife: boolean | null;
   steps: Step[];
-  warnings: string[];
+  warnings: Warning[];
 }
 
 const NATRELLA = "Natrella, Experimental Statistics, NBS Handbook 91 (1963), Table A-7 (one-sided normal tolerance factors)";
@@ -105,7 +106,7 @@ function listLogs(lives: number[]): string {
 /** What each stage of the assessment adds to the sheet. */
 interface Said {
   steps: Step[];
-  warnings: string[];
+  warnings: Warning[];
 }
 
 /** Stage 1, the sample: the mean of the log lives and, with two or more, their standard deviation. */
@@ -167,8 +168,7 @@ function spreadAndFactor(input: EvidenceInput, n: number, sampleStdDev: number |
     );
     if (assumed !== undefined && sampleStdDev !== null && sampleStdDev > assumed)
       said.warnings.push(
-        `The tested lives scatter more (log10 standard deviation ${fmt(sampleStdDev)}) than the assumed ${fmt(assumed)}; ` +
-          "the lower bound may be too high. Check the assumed scatter against these results.",
+        say`The tested lives scatter more (log10 standard deviation ${plain(sampleStdDev)}) than the assumed ${plain(assumed)}; the lower bound may be too high. Check the assumed scatter against these results.`,
       );
     return { k, logStdDev: assumed ?? null, logStdDevFrom: assumed !== undefined ? "assumed" : null };
   }
@@ -263,8 +263,7 @@ function boundAndComparisons(
   );
   if (impliedScatterFactor === null || impliedScatterFactor > scatterFactor)
     said.warnings.push(
-      `The test evidence implies a scatter factor of ${impliedScatterFactor === null ? "more than any number can hold" : fmt(impliedScatterFactor)}, more than the ${fmt(scatterFactor)} in use: ` +
-        "dividing the mean life by the scatter factor in use is not conservative for this evidence.",
+      say`The test evidence implies a scatter factor of ${impliedScatterFactor === null ? "more than any number can hold" : plain(impliedScatterFactor)}, more than the ${plain(scatterFactor)} in use: dividing the mean life by the scatter factor in use is not conservative for this evidence.`,
     );
   said.steps.push(
     step(

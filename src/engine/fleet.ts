@@ -16,6 +16,7 @@
 import type { CheckResult } from "./result.ts";
 import { normalCdf, normalQuantile } from "./special.ts";
 import { fmt, step, type Step } from "./step.ts";
+import { n as count, say, type Warning } from "./phrase.ts";
 
 export interface FleetInput {
   size: number;
@@ -45,10 +46,10 @@ export function anyOf(n: number, p: number): number {
   return -Math.expm1(n * Math.log1p(-p));
 }
 
-export function fleetView(f: FleetInput): { fleet: FleetResult; steps: Step[]; warnings: string[] } {
+export function fleetView(f: FleetInput): { fleet: FleetResult; steps: Step[]; warnings: Warning[] } {
   const { size: n, logMean: mu, logStdDev: sigma } = f;
   const steps: Step[] = [];
-  const warnings: string[] = [];
+  const warnings: Warning[] = [];
   const p1 = -Math.expm1(Math.log(0.5) / n);
   const z1 = normalQuantile(p1);
   const first = firstFailureMedian(n, mu, sigma);
@@ -92,7 +93,7 @@ export function fleetView(f: FleetInput): { fleet: FleetResult; steps: Step[]; w
   );
   if (first < f.designLife_cycles)
     warnings.push(
-      `The weakest of ${fmt(n)} items would be expected to fail at about ${fmt(first)} cycles, before the design life of ${fmt(f.designLife_cycles)} cycles.`,
+      say`The weakest of ${count(n)} items would be expected to fail at about ${count(first)} cycles, before the design life of ${count(f.designLife_cycles)} cycles.`,
     );
   if (f.basis === "computed life")
     warnings.push("The fleet view takes the computed life as the median with an assumed scatter: no test evidence supports it.");

@@ -1,13 +1,15 @@
-import type { MaterialFamily } from "../schema/check.ts";
-import { fmt, step, type Step } from "./step.ts";
-
 /**
+ * @module engine/notch
  * Notch sensitivity and fatigue notch factor, Kf = 1 + q·(Kt − 1) (Peterson; Shigley eq. 6-32).
  * Peterson: q = 1/(1 + α/ρ); α = 0.0254·(2070/Su)^1.8 mm for steels (Su in MPa, Su ≥ 550 MPa in the source's
  * range) and α = 0.51 mm for aluminium alloys (Dowling, Mechanical Behavior of Materials, §10.3, eqs. 10.8–10.9).
  * Neuber: q = 1/(1 + √a/√ρ); √a = 0.246 − 3.08×10⁻³·Su + 1.51×10⁻⁵·Su² − 2.67×10⁻⁸·Su³ (Su in kpsi, √a in √in)
  * for steels in bending or axial load (Shigley's Mechanical Engineering Design, eq. 6-35a), 50 ≤ Su ≤ 250 kpsi.
  */
+import type { MaterialFamily } from "../schema/check.ts";
+import { fmt, step, type Step } from "./step.ts";
+import { MPa, say, type Warning } from "./phrase.ts";
+
 export function petersonAlpha_mm(family: MaterialFamily, ultimate_MPa: number): number {
   return family === "aluminium" ? 0.51 : 0.0254 * (2070 / ultimate_MPa) ** 1.8;
 }
@@ -22,7 +24,7 @@ export interface NotchFactor {
   q: number;
   kf: number;
   steps: Step[];
-  warnings: string[];
+  warnings: Warning[];
 }
 
 export interface NotchOptions {
@@ -53,9 +55,9 @@ export function kfStep(kt: number, q: number): Step {
 }
 
 /** Notch sensitivity q: given, from Peterson's or Neuber's constant and the root radius, or 1 (Kf = Kt, conservative). */
-export function notchSensitivity(opts: NotchOptions): { q: number; steps: Step[]; warnings: string[] } {
+export function notchSensitivity(opts: NotchOptions): { q: number; steps: Step[]; warnings: Warning[] } {
   const steps: Step[] = [];
-  const warnings: string[] = [];
+  const warnings: Warning[] = [];
   let q = opts.q ?? 1;
   if (opts.q === undefined && opts.constant && opts.rootRadius_mm !== undefined) {
     const rho = opts.rootRadius_mm;
@@ -75,7 +77,7 @@ export function notchSensitivity(opts: NotchOptions): { q: number; steps: Step[]
         );
         if (opts.ultimate_MPa < 550)
           warnings.push(
-            "Peterson's constant for steels is fitted for ultimate strengths above about 550 MPa; below that q is an extrapolation",
+            say`Peterson's constant for steels is fitted for ultimate strengths above about ${MPa(550)}; below that q is an extrapolation`,
           );
       } else {
         steps.push(

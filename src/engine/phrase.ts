@@ -57,3 +57,20 @@ export function joined(phrases: readonly Phrase[], separator: string): Phrase {
     { text: "", parts: [] },
   );
 }
+
+/**
+ * A warning as the engine collects it: a phrase when it carries amounts, or plain words (a phrase
+ * with no amounts). The result keeps both forms side by side: `warnings` in SI text and
+ * `warningParts` for the faces.
+ */
+export type Warning = Phrase | string;
+
+/** A warning's text in SI, as the result's `warnings` holds it. */
+export function warningText(w: Warning): string {
+  return typeof w === "string" ? w : w.text;
+}
+
+/** A warning's parts, words and amounts, as the result's `warningParts` holds them. */
+export function warningParts(w: Warning): Phrase["parts"] {
+  return typeof w === "string" ? [w] : w.parts;
+}

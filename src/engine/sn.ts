@@ -1,7 +1,5 @@
-import type { MaterialFamily, SurfaceFinish } from "../schema/check.ts";
-import { fmt, step, type Step } from "./step.ts";
-
 /**
+ * @module engine/sn
  * Basquin's stress-life curve σar = σ'f·(2N)^b (Basquin 1910; Dowling, Mechanical Behavior of Materials, eq. 9.7),
  * solved for N = ½·(σar/σ'f)^(1/b). At or below the endurance limit the life is unlimited.
  * Modifying (Marin) factors, Shigley's Mechanical Engineering Design §6-9: surface ka = a·Su^b (Table 6-2),
@@ -9,6 +7,10 @@ import { fmt, step, type Step } from "./step.ts";
  * life (the whole curve shifts down), which is conservative at short lives where Shigley applies them only
  * at the endurance end.
  */
+import type { MaterialFamily, SurfaceFinish } from "../schema/check.ts";
+import { fmt, step, type Step } from "./step.ts";
+import { MPa, say, type Warning } from "./phrase.ts";
+
 export interface Curve {
   coefficient_MPa: number;
   exponent: number;
@@ -72,9 +74,9 @@ export function enduranceLimitInUse(
   exponent: number,
   family: MaterialFamily,
   fromLibrary: boolean,
-): { value: number | undefined; steps: Step[]; warnings: string[] } {
+): { value: number | undefined; steps: Step[]; warnings: Warning[] } {
   const steps: Step[] = [];
-  const warnings: string[] = [];
+  const warnings: Warning[] = [];
   if (given === undefined || !Number.isFinite(coefficient_MPa) || !Number.isFinite(exponent)) return { value: given, steps, warnings };
   const atKnee = coefficient_MPa * (2 * KNEE_CYCLES) ** exponent;
   const value = Math.min(given, atKnee);
@@ -91,7 +93,7 @@ export function enduranceLimitInUse(
   );
   if (given > atKnee * (1 + 1e-9))
     warnings.push(
-      `the ${fromLibrary ? "library's" : "given"} endurance limit (${fmt(given)} MPa) lies above the material's own S-N curve at 10⁶ cycles (${fmt(atKnee)} MPa): every amplitude between them would be called unlimited although the curve gives a finite life. The limit is taken as ${fmt(atKnee)} MPa.`,
+      say`the ${fromLibrary ? "library's" : "given"} endurance limit (${MPa(given)}) lies above the material's own S-N curve at 10⁶ cycles (${MPa(atKnee)}): every amplitude between them would be called unlimited although the curve gives a finite life. The limit is taken as ${MPa(atKnee)}.`,
     );
   if (family === "aluminium")
     warnings.push(
@@ -133,9 +135,9 @@ export function modifyingFactors(
   normalQuantile: (p: number) => number,
   family: MaterialFamily = "steel",
   surfaceFrom?: string,
-): { factor: number; steps: Step[]; warnings: string[] } {
+): { factor: number; steps: Step[]; warnings: Warning[] } {
   const steps: Step[] = [];
-  const warnings: string[] = [];
+  const warnings: Warning[] = [];
   let factor = 1;
   if (!mods) return { factor, steps, warnings };
   const steelLike = family === "steel" || family === "stainless";

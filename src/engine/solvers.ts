@@ -1,15 +1,17 @@
+/**
+ * @module engine/solvers
+ * Design solvers. The reserve of an evaluation is the smaller of the fatigue reserve
+ * log10(N_allow / N_design) and the static reserve log10(σ_allow / σvm); both grow with thickness
+ * and fall with pressure, so the minimum thickness (or the maximum pressure) is the root of the reserve.
+ */
 import { evaluate, type Context, type Evaluation } from "./evaluate.ts";
 import type { CheckResult } from "./result.ts";
 import { roundingFor, roundingWords, roundUp } from "./gauges.ts";
 import { increasingRoot } from "./solve.ts";
 import { fmt, step, type Step } from "./step.ts";
+import { mm, say, type Warning } from "./phrase.ts";
 import { gaugeFloor_mm } from "./static/index.ts";
 
-/**
- * Design solvers. The reserve of an evaluation is the smaller of the fatigue reserve
- * log10(N_allow / N_design) and the static reserve log10(σ_allow / σvm); both grow with thickness
- * and fall with pressure, so the minimum thickness (or the maximum pressure) is the root of the reserve.
- */
 const CAP = 50;
 
 function reserve(e: Evaluation, designLife: number): { value: number; governs: "fatigue" | "static" } {
@@ -41,11 +43,11 @@ function binding(at: Evaluation, past: Evaluation, designLife: number): string {
 export function solveFor(
   ctx: Context,
   target: "thickness" | "pressure",
-): { solution: NonNullable<CheckResult["solution"]>; steps: Step[]; warnings: string[] } {
+): { solution: NonNullable<CheckResult["solution"]>; steps: Step[]; warnings: Warning[] } {
   const design = ctx.input.fatigue.designLife_cycles;
   const shell = ctx.input.shell;
   const t0 = shell.thickness_mm;
-  const warnings: string[] = [];
+  const warnings: Warning[] = [];
   const REL_TOL = 1e-4;
   const unit = ctx.load.isSpectrum ? "passes" : "cycles";
   if (target === "thickness") {
@@ -87,7 +89,7 @@ export function solveFor(
     const tr = rounded <= tMax ? rounded : root.x;
     if (rounded > tMax)
       warnings.push(
-        `the next gauge (${fmt(rounded)} mm) leaves no inside for this radius; the solved minimum is given unrounded and lies on the line`,
+        say`the next gauge (${mm(rounded)}) leaves no inside for this radius; the solved minimum is given unrounded and lies on the line`,
       );
     const er = evaluate(ctx, tr, 1);
     const words = roundingWords(rounding);

@@ -19,6 +19,7 @@
  */
 import { InputError } from "./errors.ts";
 import { fmt, step, type Step } from "./step.ts";
+import { MPa, n, say, type Warning } from "./phrase.ts";
 
 /** Detail categories (Δσ_C in MPa) of EN 1993-1-9 Figure 7.1. */
 export const DETAIL_CATEGORIES_MPa = [36, 40, 45, 50, 56, 63, 71, 80, 90, 100, 112, 125, 140, 160] as const;
@@ -44,7 +45,7 @@ export interface WeldedResult {
   fatigueLimit_MPa: number;
   cutOff_MPa: number;
   steps: Step[];
-  warnings: string[];
+  warnings: Warning[];
 }
 
 const EN1993 = "EN 1993-1-9 §7.1, Figure 7.1 (fatigue strength curves for direct stress ranges)";
@@ -72,14 +73,14 @@ export function weldedLife(range_MPa: number, category_MPa: number, options: Wel
   if (!(Number.isFinite(gammaMf) && gammaMf >= 1)) {
     throw new InputError("fatigue.gammaMf", "The partial factor γ_Mf must be 1.0 or more (EN 1993-1-9 Table 3.1 gives 1.0 to 1.35).");
   }
-  const warnings: string[] = [];
+  const warnings: Warning[] = [];
   if (!(DETAIL_CATEGORIES_MPa as readonly number[]).includes(category_MPa)) {
     warnings.push(
-      `${fmt(category_MPa)} MPa is not one of the EN 1993-1-9 detail categories (${DETAIL_CATEGORIES_MPa.join(", ")}); check the classification.`,
+      say`${MPa(category_MPa)} is not one of the EN 1993-1-9 detail categories (${DETAIL_CATEGORIES_MPa.join(", ")}); check the classification.`,
     );
   }
   if (gammaMf > 1.35) {
-    warnings.push(`γ_Mf = ${fmt(gammaMf)} is above the 1.35 that EN 1993-1-9 Table 3.1 recommends at most; check the value.`);
+    warnings.push(say`γ_Mf = ${n(gammaMf)} is above the 1.35 that EN 1993-1-9 Table 3.1 recommends at most; check the value.`);
   }
   const limits = weldedLimits(category_MPa);
   const fatigueLimit_MPa = limits.fatigueLimit_MPa / gammaMf;

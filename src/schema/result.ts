@@ -378,7 +378,10 @@ export const resultSchema = z.strictObject({
   steps: z.array(stepSchema),
   /** The sections the steps fall into, in order: each heading and how many consecutive steps it holds. */
   sections: z.array(sectionSchema),
+  /** Where a method was used near or past the edge of its range, or an assumption carries the answer; in SI. */
   warnings: z.array(z.string()),
+  /** The same warnings as words and amounts, one parts list per warning in the same order, for a face in other units. */
+  warningParts: z.array(phraseSchema.shape.parts),
 });
 
 export type ResultDocument = z.infer<typeof resultSchema>;

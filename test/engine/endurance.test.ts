@@ -1,7 +1,12 @@
+/**
+ * @module test/engine/endurance.test
+ * The endurance limit in use and the modifying factors, with the warnings they raise.
+ */
 import { describe, expect, it } from "vitest";
 import { base, example, run } from "./exampleRun.ts";
 import { basquinLife, enduranceLimitInUse, modifyingFactors } from "../../src/engine/sn.ts";
 import { normalQuantile } from "../../src/engine/special.ts";
+import { warningText } from "../../src/engine/phrase.ts";
 
 describe("endurance limit against the curve", () => {
   it("a limit above the curve at 10⁶ cycles is brought down to it, with a warning", () => {
@@ -9,18 +14,22 @@ describe("endurance limit against the curve", () => {
     const se = enduranceLimitInUse(250, 900, -0.102, "steel", false);
     expect(se.value).toBeCloseTo(900 * 2e6 ** -0.102, 10);
     expect(se.value).toBeCloseTo(204.9, 1);
-    expect(se.warnings[0]).toMatch(/above the material's own S-N curve at 10⁶ cycles/);
+    expect(warningText(se.warnings[0])).toMatch(/above the material's own S-N curve at 10⁶ cycles/);
     expect(enduranceLimitInUse(150, 900, -0.102, "steel", false).warnings).toHaveLength(0);
   });
 
   it("an endurance limit for aluminium warns that aluminium alloys have none; titanium warns too", () => {
-    expect(enduranceLimitInUse(100, 900, -0.102, "aluminium", false).warnings.join(" ")).toMatch(/aluminium alloys have none/);
-    expect(enduranceLimitInUse(300, 2030, -0.104, "titanium", false).warnings.join(" ")).toMatch(/no dependable endurance limit/);
+    expect(enduranceLimitInUse(100, 900, -0.102, "aluminium", false).warnings.map(warningText).join(" ")).toMatch(
+      /aluminium alloys have none/,
+    );
+    expect(enduranceLimitInUse(300, 2030, -0.104, "titanium", false).warnings.map(warningText).join(" ")).toMatch(
+      /no dependable endurance limit/,
+    );
   });
 
   it("surface and size factors on aluminium warn that they are published for steels", () => {
     const m = modifyingFactors({ surface: "machined" }, 470, normalQuantile, "aluminium");
-    expect(m.warnings.join(" ")).toMatch(/published for steels/);
+    expect(m.warnings.map(warningText).join(" ")).toMatch(/published for steels/);
     expect(modifyingFactors({ surface: "machined" }, 470, normalQuantile, "steel").warnings).toHaveLength(0);
   });
 

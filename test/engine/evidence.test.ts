@@ -1,3 +1,7 @@
+/**
+ * @module test/engine/evidence.test
+ * The lower tolerance bound on life from tested articles, and the warnings about the evidence.
+ */
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
 import * as ss from "simple-statistics";
@@ -5,6 +9,7 @@ import { evaluateEvidence, toleranceFactorKnownSigma, toleranceFactorSample } fr
 import { InputError } from "../../src/engine/errors.ts";
 import { normalQuantile } from "../../src/engine/special.ts";
 import { normals, seeded } from "./random.ts";
+import { warningText } from "../../src/engine/phrase.ts";
 
 describe("one-sided tolerance factors", () => {
   // One-sided normal tolerance factors, B-basis (90 % of the population, 95 % confidence) and
@@ -96,7 +101,7 @@ describe("evaluateEvidence", () => {
     // Implied scatter factor 10^(k·s) ≈ 10^(6.156 × 0.0518) ≈ 2.08 by hand (k from MMPDS, from memory).
     expect(r.impliedScatterFactor).toBeGreaterThan(2);
     expect(r.impliedScatterFactor).toBeLessThan(2.15);
-    expect(r.warnings.some((w) => w.includes("scatter factor") && w.includes("not conservative"))).toBe(true);
+    expect(r.warnings.map(warningText).some((w) => w.includes("scatter factor") && w.includes("not conservative"))).toBe(true);
     const compare = r.steps.find((x) => x.id === "evidence-scatter-compare");
     expect(compare?.value).toBeCloseTo((r.impliedScatterFactor ?? 0) / 1.5, 12);
   });
@@ -107,7 +112,7 @@ describe("evaluateEvidence", () => {
     expect(r.impliedScatterFactor).toBeNull();
     expect(r.supportsDesignLife).toBeNull();
     expect(r.logStdDev).toBeNull();
-    expect(r.warnings.some((w) => w.includes("single tested article"))).toBe(true);
+    expect(r.warnings.map(warningText).some((w) => w.includes("single tested article"))).toBe(true);
     // Required spread with the known-σ form: (log10 60000 − log10 20000)/(z_0.90 + z_0.95/√1) (closed form).
     const k = normalQuantile(0.9) + normalQuantile(0.95);
     expect(r.toleranceFactor).toBeCloseTo(k, 12);
@@ -128,7 +133,7 @@ describe("evaluateEvidence", () => {
     );
     expect(wide.logStdDevFrom).toBe("assumed");
     expect(wide.logStdDev).toBe(0.1);
-    expect(wide.warnings.some((w) => w.includes("scatter more"))).toBe(true);
+    expect(wide.warnings.map(warningText).some((w) => w.includes("scatter more"))).toBe(true);
   });
 
   it("reports a design life the evidence cannot support", () => {
@@ -138,7 +143,7 @@ describe("evaluateEvidence", () => {
     expect(r.requiredLogStdDev).toBeCloseTo((r.logMean - Math.log10(40000)) / r.toleranceFactor, 12);
     const below = evaluateEvidence({ lives_cycles: lives, reliability: 0.9, confidence: 0.95 }, 60000, 3);
     expect(below.requiredLogStdDev).toBeNull();
-    expect(below.warnings.some((w) => w.includes("below the design life"))).toBe(true);
+    expect(below.warnings.map(warningText).some((w) => w.includes("below the design life"))).toBe(true);
   });
 
   it("rejects impossible input with the field's path", () => {

@@ -170,3 +170,20 @@ describe("the vessel path through the whole check", () => {
     expect(r.load.pressureMin_MPa).toBeCloseTo(-0.1, 12);
   });
 });
+
+describe("the vessel route's own warnings reach the result", () => {
+  const receiver = DEMOS.find((d) => d.id === "receiver")!.document;
+  it("a ferritic vessel above 380 °C is warned that the clause 18 curves do not cover creep", () => {
+    // EN 13445-3 clause 18 covers temperatures below the creep range, about 380 °C for ferritic steels (from memory).
+    const hot = run({ ...receiver, fatigue: { ...receiver.fatigue, temperature_C: 450 } });
+    expect(hot.warnings.some((w) => w.startsWith("at 450 °C a ferritic steel creeps"))).toBe(true);
+    const warm = run({ ...receiver, fatigue: { ...receiver.fatigue, temperature_C: 300 } });
+    expect(warm.warnings.some((w) => w.includes("creeps"))).toBe(false);
+  });
+
+  it("a welded vessel wall over 150 mm is warned that its thickness correction is held at 150 mm", () => {
+    // EN 13445-3 §18.10.6.2: f_ew is published for 25 < e ≤ 150 mm (from memory).
+    const r = run({ ...receiver, shell: { ...receiver.shell, thickness_mm: 200 } });
+    expect(r.warnings).toContain("the thickness correction of the welded classes is published to 150 mm; it is held at 150 mm");
+  });
+});

@@ -1,3 +1,7 @@
+/**
+ * @module test/present/faces.test
+ * The page and the sheet read one result and say the same thing, in the reader's units.
+ */
 import { describe, expect, it } from "vitest";
 import { DEMOS, findDemo } from "../../src/demo/index.ts";
 import { checkDocument, type CheckResult } from "../../src/engine/index.ts";
@@ -9,6 +13,7 @@ import { SI_UNITS } from "../../src/schema/units.ts";
 import { sheetHtml } from "../../src/sheet/sheet.ts";
 import { createApp } from "../../src/web/app.ts";
 import { pageRoutes } from "../../src/web/page.tsx";
+import { encodeCheck } from "../../src/web/link.ts";
 import { VerdictSummary } from "../../views/results/verdict.tsx";
 import { VerdictTable } from "../../templates/results.tsx";
 
@@ -118,5 +123,34 @@ describe("the engine orders the calculation", () => {
     expect(ids).toContain("welded-life");
     // 70 MPa is not a detail category of EN 1993-1-9 Table 8.x; welded.ts warns, and the warning must reach the result.
     expect(run.result.warnings.some((w) => /not one of the EN 1993-1-9 detail categories/.test(w))).toBe(true);
+  });
+});
+
+describe("the reader's units reach the warnings", () => {
+  const US = { length: "in", stress: "ksi", pressure: "psi", altitude: "ft" } as const;
+  // The cabin demo with a wall thin enough that the notch yields, read in US units.
+  const doc = structuredClone(findDemo("cabin")!.document) as Record<string, any>;
+  doc.shell.thickness_mm *= 0.3;
+  doc.display = US;
+  const section = (html: string, start: string, end: string) => {
+    const at = html.indexOf(start);
+    expect(at, start).toBeGreaterThanOrEqual(0);
+    return strip(html.slice(at, html.indexOf(end, at)));
+  };
+  const expectUS = (text: string) => {
+    // The detectable size of a surface eddy-current inspection, 2.54 mm = 0.1 in exactly (1 in = 25.4 mm).
+    expect(text).toContain("The detectable crack size (0.1 in)");
+    // The library's yield strength of 2024-T3, 345 MPa = 345/6.894757 ksi = 50.04 ksi (1 ksi = 6.894757 MPa, NIST SP 811).
+    expect(text).toContain("exceeds the yield strength (50.04 ksi)");
+    expect(text).not.toMatch(/\d ?(MPa|mm)\b/);
+  };
+
+  it("on the page", async () => {
+    const html = await (await app.request(`/?c=${encodeCheck(doc)}`)).text();
+    expectUS(section(html, 'class="block warnings"', "</section>"));
+  });
+
+  it("on the sheet", () => {
+    expectUS(section(sheet(doc), '<ul class="warnings">', "</ul>"));
   });
 });

@@ -1,3 +1,7 @@
+/**
+ * @module test/present/phrase.test
+ * Phrases: the engine's sentences as words and amounts, shown in the reader's units.
+ */
 import { describe, expect, it } from "vitest";
 import { DEMOS } from "../../src/demo/index.ts";
 import { checkDocument } from "../../src/engine/index.ts";
@@ -5,7 +9,7 @@ import { MPa, mm, n, say } from "../../src/engine/phrase.ts";
 import { phraseText } from "../../src/present/numbers.ts";
 import { SI_UNITS, type Units } from "../../src/schema/units.ts";
 import { VerdictTable } from "../../views/results/table.tsx";
-import { PARTS, SPARSE } from "../fixtures/documents.ts";
+import { PARTS, SPARSE, WARNED } from "../fixtures/documents.ts";
 
 const US: Units = { length: "in", stress: "ksi", pressure: "psi", altitude: "ft" };
 
@@ -27,6 +31,26 @@ describe("numbers in the engine's sentences reach the reader's units", () => {
         expect(words(phraseText(row.detailParts, SI_UNITS)), `${name} ${row.id}`).toBe(words(row.detail));
       }
     }
+  });
+
+  it("every warning's parts say the same as its SI text, and no length or stress is left as bare words", () => {
+    const words = (s: string) => s.replace(/[−-]?[\d.,\u2009 ]*\d(×10\^[−-]?\d+| × 10[⁰¹²³⁴⁵⁶⁷⁸⁹⁻]+)?|∞/g, "#");
+    let amounts = 0;
+    for (const [name, doc] of [...SPARSE, ...PARTS, ...WARNED, ...DEMOS.map((d) => [d.id, d.document] as const)]) {
+      const out = checkDocument(doc);
+      if (!out.ok) continue;
+      const r = out.result;
+      expect(r.warningParts.length, name).toBe(r.warnings.length);
+      r.warningParts.forEach((parts, i) => {
+        expect(words(phraseText(parts, SI_UNITS)), `${name}: ${r.warnings[i]}`).toBe(words(r.warnings[i]));
+        for (const p of parts) {
+          if (typeof p === "string") expect(p, `${name}: a number with an SI unit in the words`).not.toMatch(/\d ?(mm|MPa)\b/);
+          else if (p.quantity !== "plain") amounts++;
+        }
+      });
+    }
+    // The documents reach warnings that carry lengths, stresses and pressures.
+    expect(amounts).toBeGreaterThan(10);
   });
 
   it("the cabin demo's verdict table in US units shows no SI unit", () => {

@@ -1,3 +1,8 @@
+/**
+ * @module views/results
+ * The result on the page, in the order a checker reads it: what was solved, the warnings, the
+ * verdict table and key figures; then the criteria compared, the working and the share link.
+ */
 import { CriteriaTable } from "./criteria.tsx";
 import { KeyFigures } from "./figures.tsx";
 import { Share } from "./share.tsx";
@@ -19,7 +24,7 @@ export function ResultTop({ v, canUsePressure }: { v: ResultView; canUsePressure
   return (
     <>
       <Solution result={v.result} units={v.units} canUsePressure={canUsePressure} />
-      <Warnings result={v.result} />
+      <Warnings result={v.result} units={v.units} />
       <VerdictTable result={v.result} units={v.units} />
       <KeyFigures result={v.result} units={v.units} />
     </>

@@ -1,8 +1,15 @@
+/**
+ * @module engine/openings/concentration
+ * The notch result of an opening solved by the openings module (a shape, fastener holes,
+ * reinforcement, shell curvature), or of a classic hole with its curvature check, in the form the
+ * fatigue check reads: Kt, the governing point, steps, warnings, the reasons to refer, the picture.
+ */
 import type { ParsedCheck } from "../../schema/check.ts";
 import type { CheckResult } from "../result.ts";
 import type { Concentration } from "../concentration.ts";
 import { InputError } from "../errors.ts";
 import { fmt, step, type Step } from "../step.ts";
+import { mm, say } from "../phrase.ts";
 import { curvature, fastenerSteps, shapeField, type FastenerSummary, type ShellGeometry } from "./field.ts";
 import { kirschPeak, type ShapeCutout } from "./index.ts";
 
@@ -85,7 +92,7 @@ export function openingConcentration(
         ...base,
         warnings: [
           ...base.warnings,
-          `the hole's radius is not given, so its curvature parameter cannot be checked: the flat-plate Kt holds only for a hole small beside √(R·t) = ${fmt(Math.sqrt(shell.meanRadius_mm * shell.thickness_mm))} mm`,
+          say`the hole's radius is not given, so its curvature parameter cannot be checked: the flat-plate Kt holds only for a hole small beside √(R·t) = ${mm(Math.sqrt(shell.meanRadius_mm * shell.thickness_mm))}`,
         ],
         fasteners: [],
         refer: [],

@@ -1,11 +1,12 @@
-import { fmt, step, type Step } from "../step.ts";
-import { kirschPeak, peakAt, solveOpening, type EdgePoint, type EdgeSample, type FastenerInput, type ShapeCutout } from "./index.ts";
-
 /**
+ * @module engine/openings/field
  * An opening of any shape, with its fastener holes, shell curvature and reinforcement, as the
  * boundary field the fatigue check reads: points with hoop and axial influence coefficients, the
  * worked steps, warnings, the reasons to refer, and what the picture of the opening needs.
  */
+import { fmt, step, type Step } from "../step.ts";
+import { n, say, type Warning } from "../phrase.ts";
+import { kirschPeak, peakAt, solveOpening, type EdgePoint, type EdgeSample, type FastenerInput, type ShapeCutout } from "./index.ts";
 
 export interface Reinforcement {
   /** Cross-section area added round the opening's edge (mm²), e.g. a ring, frame or pad. */
@@ -44,7 +45,7 @@ export interface ShapeField {
   basis: string;
   assumed: false;
   steps: Step[];
-  warnings: string[];
+  warnings: Warning[];
   /** Plain-words reasons this screening cannot judge the opening; a verdict row refers on them. */
   refer: string[];
   /** Factor applied to every coefficient for shell curvature and reinforcement (1 when none). */
@@ -76,7 +77,7 @@ export function shapeField(
 ): ShapeField {
   const sol = solveOpening(cutout, fasteners);
   const steps: Step[] = [];
-  const warnings: string[] = [];
+  const warnings: Warning[] = [];
   const refer: string[] = [];
   const kt0 = peakAt(sol.edge, 0).kt;
   const ktB = peakAt(sol.edge, 0.5).kt;
@@ -248,7 +249,7 @@ export interface Curvature {
   within: boolean;
   factor: number;
   steps: Step[];
-  warnings: string[];
+  warnings: Warning[];
   refer: string[];
 }
 
@@ -258,7 +259,7 @@ export interface Curvature {
  */
 export function curvature(a: number, shell: ShellGeometry): Curvature {
   const steps: Step[] = [];
-  const warnings: string[] = [];
+  const warnings: Warning[] = [];
   const refer: string[] = [];
   const rt = Math.sqrt(shell.meanRadius_mm * shell.thickness_mm);
   const rho = a / rt;
@@ -292,7 +293,7 @@ export function curvature(a: number, shell: ShellGeometry): Curvature {
     );
     if (beta > 0.05)
       warnings.push(
-        `the opening's curvature correction (β = ${fmt(beta, 3)}) rests on a coefficient recalled from a published chart, not read in this session: verify it against the chart for holes in ${shell.form === "cylinder" ? "cylindrical" : "spherical"} shells`,
+        say`the opening's curvature correction (β = ${n(beta, 3)}) rests on a coefficient recalled from a published chart, not read in this session: verify it against the chart for holes in ${shell.form === "cylinder" ? "cylindrical" : "spherical"} shells`,
       );
     if (shell.form === "sphere")
       warnings.push(

@@ -22,6 +22,7 @@ import type { MaterialFamily } from "../../schema/check.ts";
 import type { ResolvedStatic } from "../input.ts";
 import type { StaticBasis } from "../../schema/service.ts";
 import { fmt, step, type Step } from "../step.ts";
+import { MPa, mm, n, pressure, say, type Phrase, type Warning } from "../phrase.ts";
 
 export const EN13445_VALIDITY = 0.16;
 
@@ -42,7 +43,7 @@ export interface StaticPlan {
   /** Why the basis cannot judge this shell (a family the code does not cover), or null. */
   refer: string | null;
   steps: Step[];
-  warnings: string[];
+  warnings: Warning[];
 }
 
 const EN_F = "EN 13445-3 §6, Table 6-1: f = min(Rp0.2/1.5, Rm/2.4) for steels other than austenitic (from memory)";
@@ -54,7 +55,7 @@ export function staticPlan(
   material: { family: MaterialFamily; yield_MPa: number; ultimate_MPa: number },
 ): StaticPlan {
   const steps: Step[] = [];
-  const warnings: string[] = [];
+  const warnings: Warning[] = [];
   let refer: string | null = null;
   const Sy = material.yield_MPa;
   const Su = material.ultimate_MPa;
@@ -167,7 +168,7 @@ export interface CodeFormula {
   /** Which formula governs (ASME cylinder: circumferential or longitudinal). */
   governs: string;
   /** Why the formula is outside its published range, or null. */
-  outside: string | null;
+  outside: Phrase | null;
 }
 
 /** The code formula at pressure P with the corroded inner radius R (mm). */
@@ -180,7 +181,7 @@ export function codeFormula(plan: StaticPlan, P: number, R: number): CodeFormula
     const e = denom > 0 ? (P * D) / denom : Infinity;
     const ratio = e / (D + 2 * e);
     const outside =
-      ratio > EN13445_VALIDITY ? `e/De = ${fmt(ratio, 3)} is above ${EN13445_VALIDITY}, the limit of the §7.4 formulas` : null;
+      ratio > EN13445_VALIDITY ? say`e/De = ${n(ratio, 3)} is above ${String(EN13445_VALIDITY)}, the limit of the §7.4 formulas` : null;
     return { formula_mm: e, governs: plan.form === "cylinder" ? "cylinder §7.4.2" : "sphere §7.4.3", outside };
   }
   // ASME VIII-1 UG-27
@@ -190,9 +191,9 @@ export function codeFormula(plan: StaticPlan, P: number, R: number): CodeFormula
     const t = denom > 0 ? (P * R) / denom : Infinity;
     const outside =
       P > 0.665 * SE
-        ? `P = ${fmt(P)} MPa is above 0.665SE = ${fmt(0.665 * SE)} MPa (UG-27(d)); Appendix 1-3 applies`
+        ? say`P = ${pressure(P)} is above 0.665SE = ${MPa(0.665 * SE)} (UG-27(d)); Appendix 1-3 applies`
         : t > 0.356 * R
-          ? `t = ${fmt(t)} mm is above 0.356R (UG-27(d)); Appendix 1-3 applies`
+          ? say`t = ${mm(t)} is above 0.356R (UG-27(d)); Appendix 1-3 applies`
           : null;
     return { formula_mm: t, governs: "sphere UG-27(d)", outside };
   }
@@ -203,9 +204,9 @@ export function codeFormula(plan: StaticPlan, P: number, R: number): CodeFormula
   const t = Math.max(tc, tl);
   const outside =
     P > 0.385 * SE
-      ? `P = ${fmt(P)} MPa is above 0.385SE = ${fmt(0.385 * SE)} MPa (UG-27(c)(1)); the thick-wall formulas of Appendix 1-2 apply`
+      ? say`P = ${pressure(P)} is above 0.385SE = ${MPa(0.385 * SE)} (UG-27(c)(1)); the thick-wall formulas of Appendix 1-2 apply`
       : t > R / 2
-        ? `t = ${fmt(t)} mm is above R/2 (UG-27(c)); the thick-wall formulas of Appendix 1-2 apply`
+        ? say`t = ${mm(t)} is above R/2 (UG-27(c)); the thick-wall formulas of Appendix 1-2 apply`
         : null;
   return { formula_mm: t, governs: circ ? "circumferential stress UG-27(c)(1)" : "longitudinal stress UG-27(c)(2)", outside };
 }

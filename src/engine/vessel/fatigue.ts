@@ -24,6 +24,7 @@
 import type { MaterialFamily } from "../../schema/check.ts";
 import { EQUIVALENT_SOURCE } from "../equivalent.ts";
 import { fmt, step, type Step } from "../step.ts";
+import { MPa, mm, n, say, type Warning } from "../phrase.ts";
 import { weldedLife } from "../welded.ts";
 
 export const EN13445_18 = "EN 13445-3 clause 18";
@@ -130,9 +131,9 @@ export function vesselLife(c: VesselCurve, range_MPa: number, mean_MPa: number, 
  * The worked steps of the vessel route at the governing cycle, from its equivalent (Tresca) range and
  * equivalent mean (src/engine/equivalent.ts, worked at the governing point of the bore).
  */
-export function vesselSteps(c: VesselCurve, range: number, mean: number, spectrum: boolean): { steps: Step[]; warnings: string[] } {
+export function vesselSteps(c: VesselCurve, range: number, mean: number, spectrum: boolean): { steps: Step[]; warnings: Warning[] } {
   const steps: Step[] = [];
-  const warnings: string[] = [];
+  const warnings: Warning[] = [];
   const label = spectrum ? " (largest cycle)" : "";
   steps.push(
     step(
@@ -161,10 +162,10 @@ export function vesselSteps(c: VesselCurve, range: number, mean: number, spectru
     ),
   );
   if (a0.outside)
-    warnings.push("the ke factor is published for ultimate strengths up to 1000 MPa; above it the correction is extrapolated");
+    warnings.push(say`the ke factor is published for ultimate strengths up to ${MPa(1000)}; above it the correction is extrapolated`);
   if (range > 2 * c.yield_MPa)
     warnings.push(
-      `the equivalent range (${fmt(range)} MPa) exceeds twice the yield strength: the range is corrected by ke = ${fmt(ke, 3)}; the shell shakes down only if the code's other checks hold`,
+      say`the equivalent range (${MPa(range)}) exceeds twice the yield strength: the range is corrected by ke = ${n(ke, 3)}; the shell shakes down only if the code's other checks hold`,
     );
   const fT = temperatureFactor(c.temperature_C, c.family);
   steps.push(
@@ -183,7 +184,7 @@ export function vesselSteps(c: VesselCurve, range: number, mean: number, spectru
     ),
   );
   if (c.temperature_C > 380 && c.family !== "stainless")
-    warnings.push(`at ${fmt(c.temperature_C)} °C a ferritic steel creeps: the fatigue curves of clause 18 do not cover the creep range`);
+    warnings.push(say`at ${n(c.temperature_C)} °C a ferritic steel creeps: the fatigue curves of clause 18 do not cover the creep range`);
   if (c.kind === "en13445-welded") {
     const fe = weldedThicknessFactor(c.thickness_mm);
     steps.push(
@@ -229,7 +230,8 @@ export function vesselSteps(c: VesselCurve, range: number, mean: number, spectru
         ),
       );
     }
-    if (c.thickness_mm > 150) warnings.push("the thickness correction of the welded classes is published to 150 mm; it is held at 150 mm");
+    if (c.thickness_mm > 150)
+      warnings.push(say`the thickness correction of the welded classes is published to ${mm(150)}; it is held at ${mm(150)}`);
     return { steps, warnings };
   }
   const fe = unweldedThicknessFactor(c.thickness_mm);
