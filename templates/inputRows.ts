@@ -1,5 +1,10 @@
+/**
+ * @module templates/inputRows
+ * The sheet's input rows, grouped as the form asks for them: each value in the reader's unit with
+ * the SI value beside it, its label and quantity from the format's registry, and where it came from.
+ */
 import { inputAt } from "../src/schema/inputs.ts";
-import type { Quantity } from "../src/schema/units.ts";
+import { parisCFromSI, parisCUnit, SI_UNITS, type Quantity, type Units } from "../src/schema/units.ts";
 import { numberList, percent, sig } from "./format.ts";
 import { CRITERION_NAMES, CUTOUT_NAMES, CRACK_NAMES } from "./names.ts";
 import type { SheetModel } from "./model.ts";
@@ -207,13 +212,24 @@ function materialRows(m: SheetModel, q: Q, t: T): InputRow[] {
     rows.push(t("Basquin exponent b", sig(mat.fatigueStrengthExponent, 4), origin("fatigueStrengthExponent")));
   num("Endurance limit Se", "enduranceLimit_MPa", "stress");
   num("Fracture toughness Kc", "toughness_MPaSqrtM", "toughness");
-  if (mat.parisC !== undefined)
-    rows.push(t("Paris coefficient C", sig(mat.parisC, 4), `${origin("parisC")}; da/dN in m/cycle, ΔK in MPa·√m`.replace(/^; /, "")));
+  if (mat.parisC !== undefined) rows.push(parisRow(mat.parisC, mat.parisM, m.units, origin("parisC")));
   if (mat.parisM !== undefined) rows.push(t("Paris exponent m", sig(mat.parisM, 4), origin("parisM")));
   if (mat.coupons)
     rows.push(t("Coupon results", `${mat.coupons.length} coupons`, "fitted in the calculation; listed in the attached input"));
   rows.push(t("Source of the values", mat.source));
   return rows;
+}
+
+/**
+ * The Paris coefficient in the sheet's units, with the format's SI value beside it when they differ;
+ * its factor depends on the exponent it goes with (src/schema/units.ts, parisCFromSI).
+ */
+function parisRow(C: number, m: number | undefined, units: Units, origin: string): InputRow {
+  const si = parisCUnit(SI_UNITS);
+  const shownUnit = parisCUnit(units);
+  const note = origin;
+  if (shownUnit === si || m === undefined) return { label: "Paris coefficient C", shown: `${sig(C, 4)} ${si}`, si: "", note };
+  return { label: "Paris coefficient C", shown: `${sig(parisCFromSI(C, m, units), 4)} ${shownUnit}`, si: `${sig(C, 4)} ${si}`, note };
 }
 
 /** The static basis and its values, each marked where a default of the kind of shell or of the basis filled it. */

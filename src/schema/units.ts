@@ -1,4 +1,5 @@
 /**
+ * @module schema/units
  * Display units, the one home of units and their SI factors for the format, the form, the plots
  * and the sheet. The check document is always SI (mm, MPa, m); the form shows and reads values
  * in the units the user picked, and these functions convert at that edge.
@@ -28,12 +29,18 @@ export const SI_UNITS: Units = { length: "mm", stress: "MPa", pressure: "MPa", a
 const MM_PER: Record<LengthUnit, number> = { mm: 1, in: 25.4 };
 const MPA_PER: Record<StressUnit, number> = { MPa: 1, kPa: 1e-3, bar: 0.1, psi: 6.894757293168e-3, ksi: 6.894757293168 };
 const M_PER: Record<AltitudeUnit, number> = { m: 1, ft: 0.3048 };
-/** 1 ksi·√in in MPa·√m: 6.894757293168 × √0.0254. */
-const MPA_SQRT_M_PER_KSI_SQRT_IN = 6.894757293168 * Math.sqrt(0.0254);
+/**
+ * 1 ksi·√in in MPa·√m: 1 ksi = 6.894757293168 MPa and 1 in = 0.0254 m, so
+ * 1 ksi·√in = 6.894757293168 MPa × √(0.0254 m) = 6.894757 × 0.1593738 = 1.098843 MPa·√m.
+ */
+export const MPA_SQRT_M_PER_KSI_SQRT_IN = 6.894757293168 * Math.sqrt(0.0254);
+/** Metres in an inch (exact). */
+const M_PER_IN = 0.0254;
 
 /**
  * What a form number measures. "toughness" follows the stress system: ksi·√in beside psi or ksi,
- * MPa·√m otherwise. "plain" numbers (counts, ratios, exponents, Paris C) are never converted.
+ * MPa·√m otherwise. "plain" numbers (counts, ratios, exponents) are never converted. The Paris
+ * coefficient is a "plain" number whose factor depends on its exponent: parisCFromSI and parisCToSI.
  */
 export const QUANTITIES = ["length", "stress", "pressure", "altitude", "toughness", "plain"] as const;
 export type Quantity = (typeof QUANTITIES)[number];
@@ -86,6 +93,27 @@ export function unitLabel(q: Quantity, u: Units): string {
     case "plain":
       return "";
   }
+}
+
+/**
+ * The Paris coefficient C of da/dN = C·ΔK^m in the reader's units. The check format holds it with
+ * da/dN in m/cycle and ΔK in MPa·√m. Beside psi or ksi (where toughness reads ksi·√in) it reads
+ * with da/dN in in/cycle and ΔK in ksi·√in, the pair US handbooks tabulate. Its factor depends on
+ * the exponent: with ΔK_SI = k·ΔK_US, k = 1.098843 MPa·√m per ksi·√in, and da/dN_US = da/dN_SI / 0.0254,
+ *   C_US = C_SI · k^m / 0.0254.
+ */
+export function parisCFromSI(C: number, m: number, u: Units): number {
+  return usToughness(u) ? (C * MPA_SQRT_M_PER_KSI_SQRT_IN ** m) / M_PER_IN : C;
+}
+
+/** A Paris coefficient typed in the reader's units → the format's (m/cycle, MPa·√m); see parisCFromSI. */
+export function parisCToSI(C: number, m: number, u: Units): number {
+  return usToughness(u) ? (C * M_PER_IN) / MPA_SQRT_M_PER_KSI_SQRT_IN ** m : C;
+}
+
+/** The units the Paris coefficient is read in: "m/cycle per (MPa·√m)^m" or "in/cycle per (ksi·√in)^m". */
+export function parisCUnit(u: Units): string {
+  return usToughness(u) ? "in/cycle per (ksi·√in)^m" : "m/cycle per (MPa·√m)^m";
 }
 
 function pick<T extends string>(allowed: readonly T[], v: unknown, fallback: T): T {

@@ -154,3 +154,62 @@ describe("the reader's units reach the warnings", () => {
     expectUS(section(sheet(doc), '<ul class="warnings">', "</ul>"));
   });
 });
+
+describe("the reader's units reach the Paris constants and the toughness", () => {
+  const US = { length: "in", stress: "ksi", pressure: "psi", altitude: "ft" } as const;
+  // The receiver's steel takes Barsom & Rolfe's ferrite–pearlite constants, da/dN = 6.9×10⁻¹² ΔK³ (m/cycle, MPa·√m),
+  // which the same source gives as 3.6×10⁻¹⁰ ΔK³ in in/cycle with ΔK in ksi·√in (from memory). Worked by hand:
+  // 1 ksi·√in = 6.894757 × √0.0254 = 1.098843 MPa·√m; 6.9×10⁻¹² × 1.098843³ / 0.0254 = 3.604×10⁻¹⁰.
+  // Its toughness, 90 MPa·√m, is 90 / 1.098843 = 81.90 ksi·√in.
+  const receiver = { ...findDemo("receiver")!.document, display: US };
+
+  it("on the sheet's material rows, with SI beside", () => {
+    const html = sheet(receiver);
+    const row = (label: string) => {
+      const at = html.indexOf(label);
+      expect(at, label).toBeGreaterThanOrEqual(0);
+      return strip(html.slice(at, html.indexOf("</tr>", at)));
+    };
+    expect(row("Paris coefficient C")).toMatch(/3\.604 × 10⁻¹⁰ in\/cycle per \(ksi·√in\)\^m.*6\.9 × 10⁻¹² m\/cycle per \(MPa·√m\)\^m/);
+    expect(row("Fracture toughness")).toMatch(/81\.9 ksi·√in.*90 MPa·√m/);
+  });
+
+  it("on the page's form, as the library's values behind the blank fields", async () => {
+    const html = await (await app.request("/?demo=receiver&length=in&stress=ksi&pressure=psi")).text();
+    // A field's label and input: from its <div class="field"> to the end of its input.
+    const field = (name: string) => {
+      const at = html.indexOf(`name="${name}"`);
+      expect(at, name).toBeGreaterThanOrEqual(0);
+      return html.slice(html.lastIndexOf('<div class="field">', at), html.indexOf(">", at));
+    };
+    const c = field("material.parisC");
+    expect(c).toContain("in/cycle per (ksi·√in)^m");
+    expect(c).toMatch(/placeholder="3\.60432e-10"/);
+    expect(field("material.toughness")).toMatch(/ksi·√in[\s\S]*placeholder="81\.9043"/);
+  });
+
+  it("read back from a form in US units into the format's SI", async () => {
+    const { readForm } = await import("../../src/web/form/read.ts");
+    const read = readForm({ "material.id": "", "material.parisC": "3.6e-10", "material.parisM": "3", "material.toughness": "100" }, US);
+    const m = read.document.material as { parisC: number; toughness_MPaSqrtM: number };
+    // Barsom & Rolfe's SI form of the same law: 6.89×10⁻¹² (from memory); 3.6×10⁻¹⁰ × 0.0254 / 1.098843³ = 6.892×10⁻¹².
+    expect(Math.abs(m.parisC / 6.89e-12 - 1)).toBeLessThan(0.01);
+    // 100 ksi·√in × 1.098843 = 109.88 MPa·√m.
+    expect(m.toughness_MPaSqrtM).toBeCloseTo(109.88, 2);
+  });
+
+  it("written to the form in US units, switched to SI and read back, with the exponent typed or the library's", async () => {
+    const { readForm } = await import("../../src/web/form/read.ts");
+    const { convertValues, writeForm } = await import("../../src/web/form/write.ts");
+    const own = { ...receiver, material: { ...receiver.material, parisC: 6.9e-12 } };
+    const v = writeForm(own, US);
+    // The library's m = 3 goes with a coefficient typed beside the library entry: 3.604×10⁻¹⁰ as worked above.
+    expect(v["material.parisC"]).toBe("3.60432e-10");
+    expect(Math.abs((readForm(v, US).document.material as { parisC: number }).parisC / 6.9e-12 - 1)).toBeLessThan(1e-5);
+    // Switched to SI from the six figures the field shows: back to 6.9×10⁻¹² within the field's rounding.
+    expect(Math.abs(Number(convertValues(v, US, SI_UNITS)["material.parisC"]) / 6.9e-12 - 1)).toBeLessThan(1e-5);
+    // A typed exponent replaces the library's: with m = 4 the factor is 1.098843⁴ / 0.0254 = 57.40.
+    const typed = writeForm({ ...own, material: { ...own.material, parisM: 4 } }, US);
+    expect(Number(typed["material.parisC"]) / 6.9e-12).toBeCloseTo(57.4, 1);
+  });
+});

@@ -1,3 +1,7 @@
+/**
+ * @module test/web/units
+ * Display units: the factors against their published definitions, the Paris coefficient against a handbook pair.
+ */
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import {
@@ -5,6 +9,9 @@ import {
   formNumber,
   fromSI,
   LENGTH_UNITS,
+  parisCFromSI,
+  parisCToSI,
+  parisCUnit,
   parseUnitsKey,
   PRESSURE_UNITS,
   type Quantity,
@@ -40,6 +47,39 @@ describe("display units", () => {
     expect(unitLabel("toughness", US)).toBe("ksi·√in");
     expect(toSI(70, "toughness", SI_UNITS)).toBe(70);
     expect(unitLabel("toughness", SI_UNITS)).toBe("MPa·√m");
+  });
+
+  it("writes the Paris coefficient in in/cycle and ksi·√in beside US stresses, with a factor that depends on m", () => {
+    // Barsom & Rolfe, Fracture and Fatigue Control in Structures, the three steel classes (from memory), in both systems:
+    //   ferrite–pearlite  da/dN = 3.6×10⁻¹⁰ ΔK^3.0  (in/cycle, ksi·√in) = 6.89×10⁻¹² ΔK^3.0  (m/cycle, MPa·√m)
+    //   martensitic       da/dN = 0.66×10⁻⁸ ΔK^2.25                    = 1.36×10⁻¹⁰ ΔK^2.25
+    //   austenitic        da/dN = 3.0×10⁻¹⁰ ΔK^3.25                    = 5.60×10⁻¹² ΔK^3.25
+    // The handbook gives two or three figures, so agreement is asked to 1 %.
+    const pairs: [number, number, number][] = [
+      [6.89e-12, 3.0, 3.6e-10],
+      [1.36e-10, 2.25, 0.66e-8],
+      [5.6e-12, 3.25, 3.0e-10],
+    ];
+    for (const [si, m, us] of pairs) {
+      expect(Math.abs(parisCFromSI(si, m, US) / us - 1)).toBeLessThan(0.01);
+      expect(Math.abs(parisCToSI(us, m, US) / si - 1)).toBeLessThan(0.01);
+    }
+    // Worked by hand for m = 3: 1 ksi·√in = 6.894757 × √0.0254 = 1.098843 MPa·√m, 1.098843³ = 1.326806, so
+    // C_US = C_SI × 1.326806 / 0.0254 = C_SI × 52.2365.
+    expect(parisCFromSI(1e-11, 3, US)).toBeCloseTo(5.22365e-10, 14);
+    expect(parisCUnit(US)).toBe("in/cycle per (ksi·√in)^m");
+    // In SI (and beside MPa, kPa or bar) the format's own units: nothing converts.
+    expect(parisCFromSI(1.6e-11, 3.59, SI_UNITS)).toBe(1.6e-11);
+    expect(parisCFromSI(1.6e-11, 3.59, { ...US, stress: "MPa" })).toBe(1.6e-11);
+    expect(parisCUnit(SI_UNITS)).toBe("m/cycle per (MPa·√m)^m");
+  });
+
+  it("converts the Paris coefficient there and back for any exponent", () => {
+    fc.assert(
+      fc.property(fc.double({ min: 1e-14, max: 1e-6, noNaN: true }), fc.double({ min: 1, max: 10, noNaN: true }), (C, m) => {
+        expect(Math.abs(parisCToSI(parisCFromSI(C, m, US), m, US) / C - 1)).toBeLessThan(1e-12);
+      }),
+    );
   });
 
   it("never converts plain numbers (counts, ratios, exponents)", () => {

@@ -1,6 +1,12 @@
+/**
+ * @module views/form/material
+ * The form's material section: a library entry (typical values behind the blank fields) or the
+ * user's own values, each in the chosen units; the Paris coefficient in the units its exponent
+ * goes with (src/schema/units.ts).
+ */
 import { MATERIALS, TYPICAL_FLAG } from "../../src/materials/library.ts";
 import { MATERIAL_VALUE_FIELDS, NUMBER_FIELDS, type NumberFieldName } from "./fields.ts";
-import { formNumber, fromSI } from "../../src/schema/units.ts";
+import { formNumber, fromSI, parisCFromSI, parisCUnit } from "../../src/schema/units.ts";
 import { NumberInput, Select, TextInput } from "./controls.tsx";
 import type { FormState } from "./state.ts";
 
@@ -16,9 +22,6 @@ const LABELS: Record<(typeof MATERIAL_VALUE_FIELDS)[number], string> = {
   "material.parisM": "Paris exponent m",
 };
 
-/** Units fixed by the check format's convention, whatever the display units. */
-const FIXED_UNITS: Partial<Record<NumberFieldName, string>> = { "material.parisC": "m/cycle per (MPa·√m)^m" };
-
 /**
  * The material: a library entry (typical values, to be verified) or the user's own values.
  * With a library entry chosen, each blank field keeps the library's value, shown as the
@@ -29,7 +32,11 @@ export function MaterialSection({ s }: { s: FormState }) {
   const placeholder = (name: NumberFieldName) => {
     const f = NUMBER_FIELDS[name];
     const x = lib ? (lib as unknown as Record<string, unknown>)[f.path.slice("material.".length)] : undefined;
-    return typeof x === "number" ? formNumber(fromSI(x, f.quantity, s.units)) : undefined;
+    if (typeof x !== "number") return undefined;
+    // The Paris coefficient's factor between unit systems depends on its exponent: the library's goes with the library's.
+    return formNumber(
+      name === "material.parisC" && lib?.parisM !== undefined ? parisCFromSI(x, lib.parisM, s.units) : fromSI(x, f.quantity, s.units),
+    );
   };
   return (
     <fieldset class="section" id="sec-material">
@@ -66,7 +73,13 @@ export function MaterialSection({ s }: { s: FormState }) {
       </p>
       <div class="grid">
         {MATERIAL_VALUE_FIELDS.map((name) => (
-          <NumberInput s={s} name={name} label={LABELS[name]} placeholder={placeholder(name)} unit={FIXED_UNITS[name]} />
+          <NumberInput
+            s={s}
+            name={name}
+            label={LABELS[name]}
+            placeholder={placeholder(name)}
+            unit={name === "material.parisC" ? parisCUnit(s.units) : undefined}
+          />
         ))}
       </div>
     </fieldset>

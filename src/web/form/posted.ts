@@ -1,3 +1,8 @@
+/**
+ * @module web/form/posted
+ * A form post understood: the check document it describes in SI and the values to show back in
+ * the units now chosen, with what the buttons asked for (a solve, a library material, more rows).
+ */
 import { findMaterial } from "../../materials/library.ts";
 import { fromSI, formNumber, parseUnitsKey, sameUnits, unitsFrom, type Units } from "../../schema/units.ts";
 import {
@@ -13,6 +18,7 @@ import { applyCarried } from "./carry.ts";
 import { readLog } from "./log.ts";
 import { blockRows, readForm, type ReadForm } from "./read.ts";
 import { convertValues } from "./write.ts";
+import { parisCShown } from "./paris.ts";
 
 /**
  * A posted form, understood: the check document it describes (in SI) and the values to show
@@ -149,7 +155,8 @@ function fillFromLibrary(values: FormValues, previousId: string, units: Units) {
   for (const name of MATERIAL_VALUE_FIELDS) {
     const f = NUMBER_FIELDS[name];
     const x = (lib as unknown as Record<string, unknown>)[f.path.slice("material.".length)];
-    if ((values[name] ?? "").trim() === "" && typeof x === "number") values[name] = formNumber(fromSI(x, f.quantity, units));
+    if ((values[name] ?? "").trim() === "" && typeof x === "number")
+      values[name] = name === "material.parisC" ? parisCShown(x, lib.parisM, units) : formNumber(fromSI(x, f.quantity, units));
   }
   if ((values["material.name"] ?? "").trim() === "") values["material.name"] = lib.name;
 }

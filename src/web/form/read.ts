@@ -11,6 +11,7 @@ import {
 } from "../../../views/form/fields.ts";
 import { parseNumber, parseNumberList } from "./lists.ts";
 import { toSI, type Units } from "../../schema/units.ts";
+import { parisCIntoSI } from "./paris.ts";
 
 /**
  * @module web/form/read
@@ -66,6 +67,8 @@ export function readForm(v: FormValues, units: Units): ReadForm {
   bind("pressure.mode", "pressure");
   bind("cutout.kind", "cutout");
   (doc.cutout as Obj).kind ??= "none";
+  // The Paris coefficient's factor depends on its exponent, so it is put into SI once the exponent is read.
+  parisCIntoSI(doc.material as Obj, units);
   if (v["pressure.mode"] === "history") {
     bind("history.text", "pressure.history_MPa");
     const list = parseNumberList(v["history.text"] ?? "");

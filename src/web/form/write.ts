@@ -9,6 +9,7 @@ import {
 import { formatNumberList, parseNumber, parseNumberList } from "./lists.ts";
 import { defaultAt } from "../../schema/defaults.ts";
 import { formNumber, fromSI, toSI, type Quantity, type Units } from "../../schema/units.ts";
+import { parisCConverted, parisCShown, parisExponent } from "./paris.ts";
 
 /**
  * @module web/form/write
@@ -64,6 +65,10 @@ export function writeForm(doc: unknown, units: Units): FormValues {
     // option: the form re-posted unchanged must be the same check as the document.
     else if (f.showsDefault && defaultAt(f.path) !== undefined) v[name] = String(defaultAt(f.path));
   }
+  // The Paris coefficient's factor depends on the exponent it goes with: the document's, else its library entry's.
+  const parisC = at("material.parisC");
+  if (typeof parisC === "number")
+    v["material.parisC"] = parisCShown(parisC, parisExponent(at("material.parisM"), at("material.id")), units);
   return v;
 }
 
@@ -98,6 +103,8 @@ export function convertValues(v: FormValues, from: Units, to: Units): FormValues
     return x === undefined ? text : formNumber(fromSI(toSI(x, q, from), q, to));
   };
   for (const [name, f] of Object.entries(NUMBER_FIELDS)) if (out[name] !== undefined) out[name] = convert(out[name], f.quantity);
+  if (v["material.parisC"] !== undefined)
+    out["material.parisC"] = parisCConverted(v["material.parisC"], parisExponent(v["material.parisM"], v["material.id"]), from, to);
   for (const name of Object.keys(out)) {
     const m = /^blocks\.\d+\.(max|min)$/.exec(name);
     if (m) out[name] = convert(out[name], "pressure");
