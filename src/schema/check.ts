@@ -31,12 +31,47 @@ const FLOORS = {
 } as const;
 type Floor = { min: number; words: string };
 
+/** How a limit binds a number. */
+export type LimitRelation = "at most" | "at least";
+/** A limit of a number input: its value in SI and the text its error message writes it with. */
+export interface Limit {
+  relation: LimitRelation;
+  value: number;
+  text: string;
+  /** Why the limit is there, in words, where the message says it. */
+  why?: string;
+}
+/**
+ * How an error message states a limit: "the radius must be at most 100000". The schema writes it
+ * with the limit's SI text; the form writes the same sentence with the limit in its own units, from
+ * the limits kept as the schema's metadata (src/schema/inputs.ts), so no limit is typed twice.
+ */
+export function limitMessage(what: string, relation: LimitRelation, value: string, why?: string): string {
+  return `${what} must be ${relation} ${value}${why ? ` (${why})` : ""}`;
+}
+const limit = (relation: LimitRelation, value: number, text: string, why?: string): Limit => ({
+  relation,
+  value,
+  text,
+  ...(why ? { why } : {}),
+});
+/** A number between two limits, each stated in its SI text, with the limits kept as metadata for the faces. */
+const between = (what: string, min: Limit, max: Limit) =>
+  num(what)
+    .min(min.value, { error: limitMessage(what, min.relation, min.text, min.why) })
+    .max(max.value, { error: limitMessage(what, max.relation, max.text, max.why) })
+    .meta({ words: what, limits: [min, max] });
+
 /** Above zero and at most `max`; with a floor, also at least that (zero and below keep the plainer message). */
 const positive = (what: string, max: number, floor?: Floor) => {
+  const limits = [limit("at most", max, String(max)), ...(floor ? [limit("at least", floor.min, floor.words)] : [])];
   const p = num(what)
     .positive({ error: `${what} must be greater than 0` })
-    .max(max, { error: `${what} must be at most ${max}` });
-  return floor ? p.refine((x) => x <= 0 || x >= floor.min, { error: `${what} must be at least ${floor.words}` }).meta({ words: what }) : p;
+    .max(max, { error: limitMessage(what, "at most", String(max)) });
+  return (floor ? p.refine((x) => x <= 0 || x >= floor.min, { error: limitMessage(what, "at least", floor.words) }) : p).meta({
+    words: what,
+    limits,
+  });
 };
 /** A probability for a lower bound: below one half it would bound the better half of the items, not the weaker. */
 const fraction = (what: string) =>
@@ -47,13 +82,15 @@ const fraction = (what: string) =>
 /** A stress or pressure of either sign, within what any shell sees. */
 const signedStress = (what: string) =>
   num(what)
-    .min(-1e4, { error: `${what} must be at least −10 000 MPa` })
-    .max(1e4, { error: `${what} must be at most 10 000 MPa` });
+    .min(-1e4, { error: limitMessage(what, "at least", "−10 000 MPa") })
+    .max(1e4, { error: limitMessage(what, "at most", "10 000 MPa") })
+    .meta({ words: what, limits: [limit("at least", -1e4, "−10 000 MPa"), limit("at most", 1e4, "10 000 MPa")] });
 /** Zero or more, at most `max` (an allowance or a gauge). */
 const nonNegative = (what: string, max: number) =>
   num(what)
     .min(0, { error: `${what} must be 0 or more` })
-    .max(max, { error: `${what} must be at most ${max}` });
+    .max(max, { error: limitMessage(what, "at most", String(max)) })
+    .meta({ words: what, limits: [limit("at most", max, String(max))] });
 const text = (what: string, max: number) =>
   z.string({ error: `${what} must be text` }).max(max, { error: `${what} must be at most ${max} characters` });
 
@@ -91,12 +128,12 @@ export const shellSchema = z
 
 const altitudeSchema = z
   .strictObject({
-    flight_m: num("the flight altitude").min(-500, { error: "the flight altitude must be at least −500 m" }).max(20000, {
-      error: "the flight altitude must be at most 20 000 m (the standard atmosphere is modelled to 20 km)",
-    }),
-    cabin_m: num("the cabin altitude").min(-500, { error: "the cabin altitude must be at least −500 m" }).max(20000, {
-      error: "the cabin altitude must be at most 20 000 m",
-    }),
+    flight_m: between(
+      "the flight altitude",
+      limit("at least", -500, "−500 m"),
+      limit("at most", 20000, "20 000 m", "the standard atmosphere is modelled to 20 km"),
+    ),
+    cabin_m: between("the cabin altitude", limit("at least", -500, "−500 m"), limit("at most", 20000, "20 000 m")),
   })
   .superRefine((a, ctx) => {
     if (a.cabin_m >= a.flight_m) {

@@ -8,7 +8,7 @@
  * quantities from here instead of typing them again.
  */
 import type { z } from "zod";
-import { checkSchema } from "./check.ts";
+import { checkSchema, type Limit } from "./check.ts";
 import type { Quantity } from "./units.ts";
 
 export interface InputInfo {
@@ -21,6 +21,8 @@ export interface InputInfo {
   /** The symbol the calculation uses for it ("t", "p_max"), where it has one. */
   symbol?: string;
   quantity: Quantity;
+  /** The limits its error messages state, in SI, where the schema keeps them (src/schema/check.ts, limitMessage). */
+  limits?: readonly Limit[];
 }
 
 type Node = z.core.$ZodType & { meta?: () => Record<string, unknown> | undefined };
@@ -48,6 +50,7 @@ export function labelOfWords(words: string): string {
 interface Found {
   words?: string;
   symbol?: string;
+  limits?: readonly Limit[];
 }
 
 function walk(node: Node, path: string, found: Found, out: Map<string, InputInfo>): void {
@@ -55,6 +58,7 @@ function walk(node: Node, path: string, found: Found, out: Map<string, InputInfo
   const f: Found = {
     words: typeof meta?.words === "string" ? meta.words : found.words,
     symbol: typeof meta?.symbol === "string" ? meta.symbol : found.symbol,
+    limits: Array.isArray(meta?.limits) ? (meta.limits as Limit[]) : found.limits,
   };
   const def = node._zod.def as unknown as Record<string, unknown> & { type: string };
   switch (def.type) {
@@ -86,6 +90,7 @@ function walk(node: Node, path: string, found: Found, out: Map<string, InputInfo
           label: labelOfWords(f.words),
           quantity: quantityOfKey(path),
           ...(f.symbol ? { symbol: f.symbol } : {}),
+          ...(f.limits ? { limits: f.limits } : {}),
         });
       return;
     default:
@@ -101,6 +106,11 @@ function collect(): Map<string, InputInfo> {
 
 /** Every number input of the check format, by path. */
 export const NUMBER_INPUTS: ReadonlyMap<string, InputInfo> = collect();
+
+/** The registry path of a document path: list positions become `[]` (`pressure.blocks.3.max_MPa` → `pressure.blocks[].max_MPa`). */
+export function registryPath(path: string): string {
+  return path.replace(/\.\d+(?=\.|$)/g, "[]");
+}
 
 /** The registry entry of a path; throws for a path the format does not take (a programming error, caught by the tests). */
 export function inputAt(path: string): InputInfo {

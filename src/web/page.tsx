@@ -20,6 +20,7 @@ import { MAX_JSON_DEPTH, tooDeepAt } from "../schema/depth.ts";
 import { unshownParts } from "./form/carry.ts";
 import { decodeCheck, encodeCheck } from "./link.ts";
 import { unitsFrom, type Units } from "../schema/units.ts";
+import { messageInUnits } from "../present/limits.ts";
 
 /**
  * The checker page. One handler shape for every way in: a link or example (GET), a plain form
@@ -64,7 +65,8 @@ function work(
       if (form.formErrors?.size && (e.path === "pressure" || e.path.startsWith("pressure."))) continue;
       const name = form.fieldFor(e.path);
       if (name === undefined) general.push(e);
-      else errors.set(name, [...(errors.get(name) ?? []), e.message]);
+      // A limit the message states is written in the form's units, as the field reads.
+      else errors.set(name, [...(errors.get(name) ?? []), messageInUnits(e, form.units)]);
     }
     outcome = { ...outcome, errorCount: [...errors.values()].reduce((n, m) => n + m.length, 0) + general.length };
   }

@@ -213,3 +213,37 @@ describe("the reader's units reach the Paris constants and the toughness", () =>
     expect(Number(typed["material.parisC"]) / 6.9e-12).toBeCloseTo(57.4, 1);
   });
 });
+
+describe("the reader's units reach the error limits", () => {
+  const fieldError = (html: string, name: string) => {
+    const m = new RegExp(`<p class="field-error" id="e-${name.replace(/\./g, "-")}"[^>]*>([^<]*)</p>`).exec(html);
+    return m?.[1];
+  };
+  const doc = (display: Record<string, string>) => {
+    const d = structuredClone(findDemo("receiver")!.document) as Record<string, any>;
+    d.shell.thickness_mm = 20_000;
+    d.shell.radius_mm = 0.0005;
+    d.pressure = { max_MPa: 20_000, min_MPa: 0 };
+    d.display = display;
+    return d;
+  };
+
+  it("states each limit in the form's units, taken from the schema's own limits", async () => {
+    const html = await (
+      await app.request(`/?c=${encodeCheck(doc({ length: "in", stress: "ksi", pressure: "psi", altitude: "ft" }))}`)
+    ).text();
+    // 10 000 mm / 25.4 = 393.7 in; 0.001 mm / 25.4 = 3.937×10⁻⁵ in (1 in = 25.4 mm exactly).
+    expect(fieldError(html, "shell.thickness")).toBe("the wall thickness must be at most 393.7 in");
+    expect(fieldError(html, "shell.radius")).toBe("the radius must be at least 3.937 × 10⁻⁵ in");
+    // 10 000 MPa / 0.006894757 MPa per psi = 1 450 377 psi (NIST SP 811).
+    expect(fieldError(html, "pressure.max")).toBe("the highest pressure must be at most 1.45 × 10⁶ psi");
+  });
+
+  it("and in SI with the unit the schema's number leaves out", async () => {
+    const html = await (
+      await app.request(`/?c=${encodeCheck(doc({ length: "mm", stress: "MPa", pressure: "MPa", altitude: "m" }))}`)
+    ).text();
+    expect(fieldError(html, "shell.thickness")).toBe("the wall thickness must be at most 10\u2009000 mm");
+    expect(fieldError(html, "pressure.max")).toBe("the highest pressure must be at most 10\u2009000 MPa");
+  });
+});
