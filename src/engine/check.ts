@@ -23,7 +23,7 @@ import { trace } from "./openings/geometry.ts";
 import { outlineOf, type ShapeCutout } from "./openings/index.ts";
 import { normalQuantile } from "./special.ts";
 import { fmt, step, type Step } from "./step.ts";
-import { joined, MPa, mm, n, pressure, say, type Warning, warningParts, warningText } from "./phrase.ts";
+import { bare, joined, MPa, mm, n, pressure, say, type Warning, warningParts, warningText } from "./phrase.ts";
 import { inSheetOrder } from "./sections.ts";
 import { EXTERNAL_PRESSURE_WORDS, VERDICT_WORDS, verdictTable } from "./verdict.ts";
 import { ENGINE_VERSION } from "./version.ts";
@@ -592,7 +592,7 @@ function validityWarnings(ctx: Context, e: Evaluation): Warning[] {
     const sar = e.governing.sigmaAr;
     if (sar !== null && sar > 0 && (sar < lo * (1 - 1e-9) || sar > hi * (1 + 1e-9)))
       w.push(
-        say`the operating equivalent amplitude (${MPa(sar)}) lies outside the range of the coupons that failed (${MPa(lo)}–${MPa(hi)}): the fitted curve is extrapolated there`,
+        say`the operating equivalent amplitude (${MPa(sar)}) lies outside the range of the coupons that failed (${bare(MPa(lo))}–${MPa(hi)}): the fitted curve is extrapolated there`,
       );
   }
   if (input.fatigue.scatterFactor === 1)

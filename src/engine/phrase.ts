@@ -21,8 +21,13 @@ export const pressure = (v: number, digits?: number) => amount(v, "pressure", di
 /** A count, ratio or life: shown as it is in every unit system. */
 export const n = (v: number, digits?: number) => amount(v, "plain", digits);
 
+/** The first end of a range, written without its unit: `${bare(MPa(lo))}–${MPa(hi)}` reads "150–330 MPa". */
+export function bare(a: PhraseAmount): PhraseAmount {
+  return { ...a, bare: true };
+}
+
 function siText(a: PhraseAmount): string {
-  const unit = unitLabel(a.quantity, SI_UNITS);
+  const unit = a.bare ? "" : unitLabel(a.quantity, SI_UNITS);
   const value = fmt(a.value ?? Number.POSITIVE_INFINITY, a.digits);
   return unit ? `${value} ${unit}` : value;
 }

@@ -121,7 +121,9 @@ export function phraseText(parts: Phrase["parts"], units: Units): string {
         ? engineText(p)
         : p.quantity === "plain"
           ? sig(p.value ?? Number.POSITIVE_INFINITY, p.digits)
-          : quantity(p.value ?? Number.POSITIVE_INFINITY, p.quantity, units, p.digits),
+          : p.bare
+            ? inUnits(p.value ?? Number.POSITIVE_INFINITY, p.quantity, units, p.digits)
+            : quantity(p.value ?? Number.POSITIVE_INFINITY, p.quantity, units, p.digits),
     )
     .join("");
 }

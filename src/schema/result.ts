@@ -62,6 +62,8 @@ export const phraseAmountSchema = z.strictObject({
   value: nullableNum,
   quantity: z.enum(QUANTITIES),
   digits: z.number().int().positive().optional(),
+  /** Written without its unit, which the amount after it carries (the first end of a range: 150–330 MPa). */
+  bare: z.literal(true).optional(),
 });
 export type PhraseAmount = z.infer<typeof phraseAmountSchema>;
 /** A sentence in SI (`text`) and the same as words and amounts (`parts`). */

@@ -5,7 +5,7 @@
 import { describe, expect, it } from "vitest";
 import { DEMOS } from "../../src/demo/index.ts";
 import { checkDocument } from "../../src/engine/index.ts";
-import { MPa, mm, n, say } from "../../src/engine/phrase.ts";
+import { bare, MPa, mm, n, say } from "../../src/engine/phrase.ts";
 import { phraseText } from "../../src/present/numbers.ts";
 import { SI_UNITS, type Units } from "../../src/schema/units.ts";
 import { VerdictTable } from "../../views/results/table.tsx";
@@ -19,6 +19,13 @@ describe("numbers in the engine's sentences reach the reader's units", () => {
     expect(p.text).toBe("σ = 100 MPa at a wall of 25.4 mm after 60000 cycles");
     // 1 ksi = 6.894757 MPa and 1 in = 25.4 mm (exact by definition): 100 MPa = 14.50 ksi
     expect(phraseText(p.parts, US)).toBe("σ = 14.5 ksi at a wall of 1 in after 60\u2009000 cycles");
+  });
+
+  it("writes a range with the unit once, converting both ends", () => {
+    const p = say`between ${bare(MPa(150))}–${MPa(330)}`;
+    expect(p.text).toBe("between 150–330 MPa");
+    // 150 / 6.894757 = 21.76 ksi and 330 / 6.894757 = 47.86 ksi (1 ksi = 6.894757 MPa, NIST SP 811).
+    expect(phraseText(p.parts, US)).toBe("between 21.76–47.86 ksi");
   });
 
   it("every verdict row's parts say the same as its SI sentence", () => {

@@ -100,7 +100,8 @@ describe("a logger's file on the page", () => {
       });
       await page.click('#check-form button.primary[hx-post="/recalc"]');
       await page
-        .waitForFunction(() => /hysteresis gate of 0\.002 MPa removed \d+ reversals/.test(document.body.textContent ?? ""), {
+        // The page writes the gate (2 kPa = 0.002 MPa) in the form's pressure unit, kPa.
+        .waitForFunction(() => /hysteresis gate of 2 kPa removed \d+ reversals/.test(document.body.textContent ?? ""), {
           timeout: 90_000,
         })
         .catch(async (err: unknown) => {
