@@ -221,6 +221,7 @@ export function runCheck(input: ResolvedCheck): CheckResult {
       margin: e.staticMargin,
       pass: e.staticMargin >= 0 && gaugeOk && !plan.refer && !e.static.formula?.outside,
       refer: plan.refer ?? e.static.formula?.outside?.text ?? null,
+      referParts: plan.refer ? [plan.refer] : (e.static.formula?.outside?.parts ?? null),
       governs: e.static.governs,
       jointEfficiency: plan.joint,
       corrosionAllowance_mm: plan.corrosion_mm,

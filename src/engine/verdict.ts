@@ -281,7 +281,7 @@ function staticRow(r: CheckResult): VerdictRow {
   } else {
     detail = say`σvm = ${MPa(s.vonMisesMax_MPa)} against Sy/${n(s.yieldFactor)} = ${MPa(s.allowable_MPa)}`;
   }
-  if (s.refer) detail = joined([say`${s.refer}`, detail], "; ");
+  if (s.refer) detail = joined([{ text: s.refer, parts: s.referParts ?? [s.refer] }, detail], "; ");
   return row("static", title, status, detail, s.margin);
 }
 

@@ -249,6 +249,8 @@ export const resultSchema = z.strictObject({
     pass: z.boolean(),
     /** Why the static basis cannot judge the shell (refer), or null. */
     refer: z.string().nullable(),
+    /** The same as words and amounts (a formula's range in the reader's units), or null. */
+    referParts: phraseSchema.shape.parts.nullable(),
     /** Which check of the basis governs, in words. */
     governs: z.string(),
     jointEfficiency: num,

@@ -60,6 +60,23 @@ describe("numbers in the engine's sentences reach the reader's units", () => {
     expect(amounts).toBeGreaterThan(10);
   });
 
+  it("the static row's reason to refer, a code formula past its range, follows the reader's units", () => {
+    // ASME VIII-1 UG-27(c)(1) holds for P ≤ 0.385SE; 50 MPa on the receiver's nozzle course is above it.
+    const doc = structuredClone(DEMOS[1].document) as Record<string, any>;
+    delete doc.crack;
+    doc.static = { basis: "asme-viii-1" };
+    doc.pressure = { max_MPa: 50, min_MPa: 0 };
+    doc.shell.thickness_mm = 60;
+    const out = checkDocument(doc);
+    if (!out.ok) throw new Error(JSON.stringify(out.errors));
+    const row = out.result.verdictTable.find((r) => r.id === "static")!;
+    expect(row.status).toBe("refer");
+    expect(row.detail).toMatch(/^P = 50 MPa is above 0\.385SE = [\d.]+ MPa \(UG-27\(c\)\(1\)\)/);
+    // 50 MPa / 0.006894757 MPa per psi = 7252 psi (NIST SP 811); both sides of the comparison are pressures.
+    expect(phraseText(row.detailParts, US)).toMatch(/^P = 7252 psi is above 0\.385SE = [\d.]+ psi \(UG-27/);
+    expect(phraseText(row.detailParts, US)).not.toMatch(/MPa|\d mm\b/);
+  });
+
   it("the cabin demo's verdict table in US units shows no SI unit", () => {
     const out = checkDocument(DEMOS[0].document);
     if (!out.ok) throw new Error("the cabin demo must run");

@@ -22,7 +22,7 @@ import type { MaterialFamily } from "../../schema/check.ts";
 import type { ResolvedStatic } from "../input.ts";
 import type { StaticBasis } from "../../schema/service.ts";
 import { fmt, step, type Step } from "../step.ts";
-import { MPa, mm, n, pressure, say, type Phrase, type Warning } from "../phrase.ts";
+import { mm, n, pressure, say, type Phrase, type Warning } from "../phrase.ts";
 
 export const EN13445_VALIDITY = 0.16;
 
@@ -191,7 +191,7 @@ export function codeFormula(plan: StaticPlan, P: number, R: number): CodeFormula
     const t = denom > 0 ? (P * R) / denom : Infinity;
     const outside =
       P > 0.665 * SE
-        ? say`P = ${pressure(P)} is above 0.665SE = ${MPa(0.665 * SE)} (UG-27(d)); Appendix 1-3 applies`
+        ? say`P = ${pressure(P)} is above 0.665SE = ${pressure(0.665 * SE)} (UG-27(d)); Appendix 1-3 applies`
         : t > 0.356 * R
           ? say`t = ${mm(t)} is above 0.356R (UG-27(d)); Appendix 1-3 applies`
           : null;
@@ -204,7 +204,7 @@ export function codeFormula(plan: StaticPlan, P: number, R: number): CodeFormula
   const t = Math.max(tc, tl);
   const outside =
     P > 0.385 * SE
-      ? say`P = ${pressure(P)} is above 0.385SE = ${MPa(0.385 * SE)} (UG-27(c)(1)); the thick-wall formulas of Appendix 1-2 apply`
+      ? say`P = ${pressure(P)} is above 0.385SE = ${pressure(0.385 * SE)} (UG-27(c)(1)); the thick-wall formulas of Appendix 1-2 apply`
       : t > R / 2
         ? say`t = ${mm(t)} is above R/2 (UG-27(c)); the thick-wall formulas of Appendix 1-2 apply`
         : null;
