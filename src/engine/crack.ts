@@ -503,7 +503,9 @@ function criticalSize(st: Stage, ms: ModelStage): { fad: FadResult; ac: number; 
   st.steps.push(
     step(
       st.id("critical-fad"),
-      `Critical ${which} size by the failure assessment diagram (set by ${fad.by === "toughness" ? "the toughness" : fad.by === "collapse" ? "collapse" : "the interaction of fracture and collapse"})`,
+      linkUp
+        ? `Failure assessment of the ${which} along the ligament: no critical size before the opening's edge (the point shown is at that edge)`
+        : `Critical ${which} size by the failure assessment diagram (set by ${fad.by === "toughness" ? "the toughness" : fad.by === "collapse" ? "collapse" : "the interaction of fracture and collapse"})`,
       "Kr = f(Lr), f = (1 + 0.5Lr²)^(−1/2)·[0.3 + 0.7·exp(−0.6Lr⁶)], Lr ≤ Lr,max",
       `at a = ${fmt(fad.critical_mm)} mm: Lr = ${fmt(fad.Lr)}, Kr = ${fmt(fad.Kr)}, f(Lr) = ${fmt(fad.Lr >= fad.LrMax ? 0 : fad.Kr)}`,
       fad.critical_mm,
@@ -517,7 +519,9 @@ function criticalSize(st: Stage, ms: ModelStage): { fad: FadResult; ac: number; 
         st.id("critical-link-up"),
         "The crack reaches the opening before it is critical by the diagram: link-up",
         "a_crit = ligament from the hole's edge to the opening",
-        `a_crit = ${fmt(gradient.ligament_mm)} mm (< ${fmt(fad.critical_mm)} mm by the diagram)`,
+        fad.critical_mm >= gradient.ligament_mm * (1 - 1e-9)
+          ? `a_crit = ${fmt(gradient.ligament_mm)} mm (the diagram reaches no critical size within the ligament)`
+          : `a_crit = ${fmt(gradient.ligament_mm)} mm (< ${fmt(fad.critical_mm)} mm by the diagram)`,
         ac,
         "mm",
         "A crack that joins an opening becomes part of a much longer crack: taken as critical (conservative, common practice)",
