@@ -314,7 +314,8 @@ function drivingRange(st: Stage): { range: number; sMinEff: number; walker: numb
   const sMax = opts.stressMax_MPa;
   const sMinEff = Math.max(opts.stressMin_MPa, 0);
   const range = sMax - sMinEff;
-  if (opts.stressMin_MPa < 0) {
+  // A valley below zero by rounding only (−7×10⁻¹⁵ MPa from a history that empties to zero) is not compression.
+  if (opts.stressMin_MPa < -1e-9 * Math.abs(sMax)) {
     st.warnings.push(
       say`The ${stressName} stress goes into compression (${MPa(opts.stressMin_MPa)}); the compressive part is taken to close the ${which} and is left out of its range.`,
     );
