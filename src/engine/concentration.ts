@@ -71,14 +71,6 @@ export function edgeStress(p: BoundaryPoint, hoop_MPa: number, axial_MPa: number
   return p.hoopCoeff * hoop_MPa + p.axialCoeff * axial_MPa;
 }
 
-/** Nominal membrane stress along the edge at a point: σθ·cos²φ + σx·sin²φ (no membrane shear). */
-export function nominalAlongEdge(p: BoundaryPoint, hoop_MPa: number, axial_MPa: number): number {
-  const phi = ((p.edgeAngle_deg ?? 0) * Math.PI) / 180;
-  const c = Math.cos(phi);
-  const s = Math.sin(phi);
-  return hoop_MPa * c * c + axial_MPa * s * s;
-}
-
 /**
  * The skin beside the opening carries the membrane stresses themselves. They are evaluated with the
  * edge points so that no opening ever lowers the local stress below the membrane stress (Kt ≥ 1), and so

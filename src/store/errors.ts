@@ -48,7 +48,3 @@ export class SlowDownError extends RecordError {
 
 /** The database cannot take a write now: full, read-only or failing (HTTP 503). */
 export class RecordsUnavailableError extends RecordError {}
-
-export function fieldError(path: string, message: string): FieldError {
-  return { path, message };
-}

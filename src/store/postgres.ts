@@ -152,7 +152,3 @@ function fault(err: unknown): unknown {
   if (err instanceof pg.DatabaseError || !(err instanceof Error)) return err;
   return new DatabaseUnreachableError(err);
 }
-
-export async function postgresVersion(sql: Q): Promise<number> {
-  return (await sql.get<{ v: number }>("SELECT coalesce(max(version), 0) AS v FROM schema_version"))?.v ?? 0;
-}
