@@ -27,7 +27,7 @@ import { bare, joined, MPa, mm, n, pressure, say, type Warning, warningParts, wa
 import { inSheetOrder } from "./sections.ts";
 import { EXTERNAL_PRESSURE_WORDS, VERDICT_WORDS, verdictTable } from "./verdict.ts";
 import { ENGINE_VERSION } from "./version.ts";
-import { allowances_mm, basisStatement, gaugeFloor_mm, requiredOrdered, staticPlan } from "./static/index.ts";
+import { allowances_mm, basisStatement, gaugeFloor_mm, requiredOrdered, type StaticPlan, staticPlan } from "./static/index.ts";
 import { increasingRoot } from "./solve.ts";
 import { plasticityFactor, temperatureFactor, vesselLife, vesselSteps, weldedThicknessFactor } from "./vessel/fatigue.ts";
 import { weldedLife } from "./welded.ts";
@@ -51,14 +51,14 @@ function workedAt(input: ResolvedCheck, t: number): CheckResult["workedAt"] {
   };
 }
 
-/**
- * The whole check: load → material curve → membrane, static, notch, fatigue → optional solve,
- * crack growth and test evidence → verdict. Pure: no I/O. Throws InputError only for input problems
- * that show once the numbers are worked; faces turn it into the errors document.
- */
-export function runCheck(input: ResolvedCheck): CheckResult {
-  const steps: Step[] = [];
-  const warnings: Warning[] = [];
+/** What a stage adds to the sheet: its steps and its warnings, in the order they are worked. */
+interface Said {
+  steps: Step[];
+  warnings: Warning[];
+}
+
+/** Stage 1, the load: the pressure cycle or spectrum, and what a hysteresis gate left out. */
+function loadStage(input: ResolvedCheck, said: Said): Load {
   const load = resolveLoad(input.pressure, input.fatigue.designLife_cycles > 1);
   if (!load.isSpectrum && load.min_MPa >= load.max_MPa) {
     throw new InputError(
@@ -66,26 +66,43 @@ export function runCheck(input: ResolvedCheck): CheckResult {
       `the minimum pressure (${fmt(load.min_MPa)} MPa) must be below the maximum (${fmt(load.max_MPa)} MPa)`,
     );
   }
-  steps.push(...load.steps);
+  said.steps.push(...load.steps);
   if (load.gate && load.gate.removed > 0)
-    warnings.push(
+    said.warnings.push(
       say`the hysteresis gate of ${pressure(load.gate.gate_MPa)} removed ${String(load.gate.removed)} reversals of the history: the damage of ripples below the gate is not counted`,
     );
+  return load;
+}
 
+/** The material's fatigue curve as the check uses it. */
+interface CurveInUse {
+  fit?: ReturnType<typeof fitCoupons>;
+  coefficient: number;
+  exponent: number;
+  mods: ReturnType<typeof modifyingFactors>;
+  se: ReturnType<typeof enduranceLimitInUse> | { value: undefined; steps: Step[]; warnings: Warning[] };
+}
+
+/**
+ * Stage 2, the material's curve: fitted to coupons where they are given and no σ'f and b are,
+ * corrected by the modifying (Marin) factors, with the endurance limit in use and, under a
+ * spectrum, what happens to cycles below it.
+ */
+function curveStage(input: ResolvedCheck, load: Load, said: Said): CurveInUse {
   const mat = input.material;
   let fit: ReturnType<typeof fitCoupons> | undefined;
   if (mat.coupons && input.fatigue.curve === "basquin") {
     fit = fitCoupons(mat.coupons);
-    steps.push(...fit.steps);
-    warnings.push(...fit.warnings);
+    said.steps.push(...fit.steps);
+    said.warnings.push(...fit.warnings);
   }
   const coefficient = mat.fatigueStrengthCoefficient_MPa ?? fit?.fatigueStrengthCoefficient_MPa ?? NaN;
   const exponent = mat.fatigueStrengthExponent ?? fit?.fatigueStrengthExponent ?? NaN;
   const fitUsed = fit !== undefined && mat.fatigueStrengthCoefficient_MPa === undefined;
   if (fit && !fitUsed)
-    warnings.push("coupons were given but σ'f and b were given too; the given σ'f and b are used and the fit is shown for comparison");
+    said.warnings.push("coupons were given but σ'f and b were given too; the given σ'f and b are used and the fit is shown for comparison");
   if (fitUsed && mat.libraryCurve)
-    warnings.push(
+    said.warnings.push(
       say`the curve is fitted to the coupons given (σ'f = ${MPa(coefficient)}, b = ${n(exponent)}); the library's σ'f = ${MPa(mat.libraryCurve.fatigueStrengthCoefficient_MPa)} and b = ${n(mat.libraryCurve.fatigueStrengthExponent)} for ${mat.name} are shown for comparison only`,
     );
   const curveKind = input.fatigue.curve;
@@ -99,8 +116,8 @@ export function runCheck(input: ResolvedCheck): CheckResult {
     mat.family,
     defaultSurface ? "the library entry's as-delivered finish; fatigue.modifiers.surface changes it" : undefined,
   );
-  steps.push(...mods.steps);
-  warnings.push(...mods.warnings);
+  said.steps.push(...mods.steps);
+  said.warnings.push(...mods.warnings);
   const se =
     curveKind === "basquin"
       ? enduranceLimitInUse(
@@ -111,11 +128,11 @@ export function runCheck(input: ResolvedCheck): CheckResult {
           mat.id !== undefined && input.document.material.enduranceLimit_MPa === undefined,
         )
       : { value: undefined, steps: [], warnings: [] };
-  steps.push(...se.steps);
-  warnings.push(...se.warnings);
+  said.steps.push(...se.steps);
+  said.warnings.push(...se.warnings);
   const belowLimit = input.fatigue.belowEnduranceLimit;
   if (se.value !== undefined && load.isSpectrum)
-    steps.push(
+    said.steps.push(
       step(
         "below-endurance-limit",
         "Spectrum cycles below the endurance limit",
@@ -128,16 +145,27 @@ export function runCheck(input: ResolvedCheck): CheckResult {
         BELOW_LIMIT_SOURCE[belowLimit],
       ),
     );
+  return { fit, coefficient, exponent, mods, se };
+}
 
-  const plan = staticPlan(input.static, input.shell.form, mat);
-  warnings.push(...plan.warnings);
+/** Stage 3, the static basis and the wall the allowances leave; a wall they use up is an input error. */
+function staticStage(input: ResolvedCheck, said: Said): StaticPlan {
+  const plan = staticPlan(input.static, input.shell.form, input.material);
+  said.warnings.push(...plan.warnings);
   const t = input.shell.thickness_mm;
   if (t - allowances_mm(plan) <= 0)
     throw new InputError(
       "static.corrosionAllowance_mm",
       `the corrosion allowance and the minus tolerance (${fmt(allowances_mm(plan))} mm together) leave nothing of the ${fmt(t)} mm wall`,
     );
-  const ctx: Context = {
+  return plan;
+}
+
+/** What every evaluation of the check needs, at whatever thickness or pressure a solver tries. */
+function contextOf(input: ResolvedCheck, load: Load, plan: StaticPlan, curve: CurveInUse): Context {
+  const mat = input.material;
+  const curveKind = input.fatigue.curve;
+  return {
     input,
     load,
     staticPlan: plan,
@@ -149,44 +177,216 @@ export function runCheck(input: ResolvedCheck): CheckResult {
             yield_MPa: mat.yield_MPa,
             ultimate_MPa: mat.ultimate_MPa,
             class_MPa: input.fatigue.detailCategory_MPa ?? NaN,
-            thickness_mm: t,
+            thickness_mm: input.shell.thickness_mm,
             temperature_C: input.fatigue.temperature_C,
             rz_um: input.fatigue.roughnessRz_um,
           }
         : undefined,
-    curve: { coefficient_MPa: coefficient, exponent, enduranceLimit_MPa: se.value, factor: mods.factor, belowLimit },
+    curve: {
+      coefficient_MPa: curve.coefficient,
+      exponent: curve.exponent,
+      enduranceLimit_MPa: curve.se.value,
+      factor: curve.mods.factor,
+      belowLimit: input.fatigue.belowEnduranceLimit,
+    },
     strengths: {
       ultimate_MPa: mat.ultimate_MPa,
       yield_MPa: mat.yield_MPa,
-      fatigueStrengthCoefficient_MPa: coefficient,
+      fatigueStrengthCoefficient_MPa: curve.coefficient,
       walkerGamma: input.fatigue.walkerGamma,
     },
   };
-  const criterion = input.fatigue.meanStress;
-  const e = evaluate(ctx, t, 1, criterion);
-  steps.push(...evaluationSteps(ctx, e, criterion));
-  warnings.push(...e.conc.warnings, ...e.notch.warnings, ...(e.governing.welded?.warnings ?? []), ...validityWarnings(ctx, e));
-  // The vessel route's own range warnings (ke extrapolated, the creep range, the thickness held at 150 mm), at the governing cycle.
-  if (ctx.vessel) warnings.push(...vesselSteps(ctx.vessel, 2 * e.governing.amplitude, e.governing.mean, load.isSpectrum).warnings);
+}
 
-  const criteria = input.fatigue.curve !== "basquin" ? [] : compareCriteria(ctx, e);
+/** Stage 4, the evaluation at the given wall: membrane, static, opening, notch and fatigue, with each method's range warnings. */
+function evaluationStage(ctx: Context, said: Said): Evaluation {
+  const criterion = ctx.input.fatigue.meanStress;
+  const e = evaluate(ctx, ctx.input.shell.thickness_mm, 1, criterion);
+  said.steps.push(...evaluationSteps(ctx, e, criterion));
+  said.warnings.push(...e.conc.warnings, ...e.notch.warnings, ...(e.governing.welded?.warnings ?? []), ...validityWarnings(ctx, e));
+  // The vessel route's own range warnings (ke extrapolated, the creep range, the thickness held at 150 mm), at the governing cycle.
+  if (ctx.vessel) said.warnings.push(...vesselSteps(ctx.vessel, 2 * e.governing.amplitude, e.governing.mean, ctx.load.isSpectrum).warnings);
+  return e;
+}
+
+/** Stage 5, the static check's findings: the wall it needs, the minimum gauge, and what sends it to a code. */
+function staticSection(ctx: Context, e: Evaluation, said: Said): CheckResult["static"] {
+  const { input, staticPlan: plan } = ctx;
+  const t = input.shell.thickness_mm;
   const required = requiredThickness(ctx, e);
-  if (required.step) steps.push(required.step);
-  const statement = basisStatement(plan.basis);
+  if (required.step) said.steps.push(required.step);
   const gaugeOk = t >= gaugeFloor_mm(plan);
   if (!gaugeOk)
-    warnings.push(
+    said.warnings.push(
       say`the wall (${mm(t)}) is below the minimum gauge (${mm(plan.gauge_mm)} plus ${mm(plan.corrosion_mm)} corrosion allowance)`,
     );
   if (e.static.formula?.outside)
-    warnings.push(
+    said.warnings.push(
       joined([say`the static formula is used outside its range: `, e.static.formula.outside, say`; the static check is referred`], ""),
     );
-  if (plan.refer) warnings.push(plan.refer);
+  if (plan.refer) said.warnings.push(plan.refer);
   if (input.axialExtra && (plan.basis === "en13445-3" || plan.basis === "asme-viii-1"))
-    warnings.push(
+    said.warnings.push(
       "the shell formulas of the code take pressure alone: the added axial stress is not in the formula check (only in the stresses and the fatigue)",
     );
+  return {
+    basis: plan.basis,
+    service: input.shell.service,
+    yieldFactor: input.static.yieldFactor,
+    allowable_MPa: e.staticAllowable,
+    vonMisesMax_MPa: e.vonMisesMax,
+    margin: e.staticMargin,
+    pass: e.staticMargin >= 0 && gaugeOk && !plan.refer && !e.static.formula?.outside,
+    refer: plan.refer ?? e.static.formula?.outside?.text ?? null,
+    referParts: plan.refer ? [plan.refer] : (e.static.formula?.outside?.parts ?? null),
+    governs: e.static.governs,
+    jointEfficiency: plan.joint,
+    corrosionAllowance_mm: plan.corrosion_mm,
+    thicknessTolerance_mm: plan.tolerance_mm,
+    minimumGauge_mm: plan.gauge_mm,
+    analysisThickness_mm: e.thickness_mm - allowances_mm(plan),
+    formulaThickness_mm: e.static.formula ? finiteOrNull(e.static.formula.formula_mm) : null,
+    requiredThickness_mm: required.value,
+    limitFactor: plan.basis === "aircraft" ? plan.limitFactor : null,
+    ultimateFactor: plan.basis === "aircraft" ? plan.ultimateFactor : null,
+    statement: basisStatement(plan.basis),
+    defaults: input.static.defaults,
+  };
+}
+
+function membraneSection(input: ResolvedCheck, e: Evaluation): CheckResult["membrane"] {
+  return {
+    theory: e.theory,
+    theoryReason: theoryReason(input.shell.theory, e),
+    innerRadius_mm: e.radii.inner_mm,
+    meanRadius_mm: e.radii.mean_mm,
+    outerRadius_mm: e.radii.outer_mm,
+    hoopMax_MPa: e.hoopMax,
+    hoopMin_MPa: e.hoopMin,
+    axialMax_MPa: e.axialMax,
+    axialMin_MPa: e.axialMin,
+    radialMax_MPa: e.radialMax,
+    vonMisesMax_MPa: e.vonMisesMax,
+  };
+}
+
+function notchSection(e: Evaluation): CheckResult["notch"] {
+  return {
+    kt: e.conc.kt,
+    ktGoverns: e.conc.governs,
+    biaxialRatio: e.lambda,
+    q: e.notch.q,
+    kf: e.notch.kf,
+    peakMax_MPa: e.peakMax,
+    peakMin_MPa: e.peakMin,
+    localYield: e.localYield,
+    ...(e.conc.fasteners?.length
+      ? {
+          fasteners: e.conc.fasteners.map((f) => ({
+            kt: f.kt,
+            hoop_mm: f.hoop_mm,
+            axial_mm: f.axial_mm,
+            radius_mm: f.radius_mm,
+            ligament_mm: Number.isFinite(f.ligament_mm) ? f.ligament_mm : null,
+            solvedWithOpening: f.solvedWithOpening,
+            ktKirsch: f.ktKirsch,
+          })),
+        }
+      : {}),
+    ...(e.conc.picture ? { opening: e.conc.picture } : {}),
+    ...(e.conc.refer?.length ? { refer: e.conc.refer } : {}),
+  };
+}
+
+function fatigueSection(ctx: Context, e: Evaluation, curve: CurveInUse): CheckResult["fatigue"] {
+  const f = ctx.input.fatigue;
+  return {
+    criterion: f.meanStress,
+    curve: f.curve,
+    amplitude_MPa: e.governing.amplitude,
+    mean_MPa: e.governing.mean,
+    equivalentAmplitude_MPa: e.governing.sigmaAr,
+    life_cycles: e.life,
+    allowableLife_cycles: e.allowable,
+    designLife_cycles: f.designLife_cycles,
+    scatterFactor: f.scatterFactor,
+    damage: e.damage,
+    lifeCountedIn: ctx.load.isSpectrum ? "passes" : "cycles",
+    modifyingFactor: curve.mods.factor,
+    curveUsed: {
+      fatigueStrengthCoefficient_MPa: curve.coefficient,
+      fatigueStrengthExponent: curve.exponent,
+      enduranceLimit_MPa: curve.se.value ?? null,
+    },
+    criteria: f.curve !== "basquin" ? [] : compareCriteria(ctx, e),
+    pass: e.damage !== null && e.damage <= 1,
+    detailCategory_MPa: f.curve === "basquin" ? null : (f.detailCategory_MPa ?? null),
+    weldDetail: f.curve === "en13445-welded" ? (f.weldDetail ?? null) : null,
+    temperature_C: f.temperature_C,
+    defaults: f.defaults,
+    weldedPoint: weldedPoint(ctx, e),
+  };
+}
+
+/** The spectrum's cycles at the governing point, for the spectrum plot and the damage sum. */
+function spectrumSection(ctx: Context, e: Evaluation): NonNullable<CheckResult["spectrum"]> {
+  const { input, load } = ctx;
+  const extra = input.axialExtra ?? { max_MPa: 0, min_MPa: 0 };
+  return {
+    cycles: load.cycles.map((c) => {
+      const o = cycleAtPoint(ctx, input.fatigue.meanStress, e.point, e.fatigueUnit, extra, 1, c.range, c.mean, e.equivalentRange, true);
+      return { range_MPa: 2 * o.amplitude, mean_MPa: o.mean, count: c.count };
+    }),
+    totalCycles: load.cycles.reduce((s, c) => s + c.count, 0),
+    damagePerPass: e.damagePerPass,
+    passesToFailure: e.life,
+    historyPoints: load.historyPoints,
+  };
+}
+
+/** The test evidence against the design life, in cycles: with a spectrum the design life counts passes and is converted first. */
+function evidenceSection(input: ResolvedCheck, load: Load, said: Said): NonNullable<CheckResult["evidence"]> {
+  const cyclesPerPass = load.isSpectrum ? load.cycles.reduce((s, c) => s + c.count, 0) : 1;
+  const designCycles = input.fatigue.designLife_cycles * cyclesPerPass;
+  if (load.isSpectrum)
+    said.steps.push(
+      step(
+        "evidence-design-cycles",
+        "Design life in cycles, for comparison with test lives in cycles",
+        "N_design = B_design × n_pass",
+        `N_design = ${fmt(input.fatigue.designLife_cycles)} passes × ${fmt(cyclesPerPass)} cycles per pass`,
+        designCycles,
+        "cycles",
+        "unit conversion: test lives count cycles, the design life counts passes of the spectrum",
+      ),
+    );
+  const { steps, warnings, ...evidence } = evaluateEvidence(input.evidence!, designCycles, input.fatigue.scatterFactor);
+  if (load.isSpectrum)
+    warnings.push(
+      say`the test lives (cycles) are compared with the design life converted to cycles, ${n(designCycles)} = ${n(input.fatigue.designLife_cycles)} passes × ${n(cyclesPerPass)} cycles per pass; tests at one amplitude do not reproduce the spectrum's mix of cycles, so the comparison is approximate`,
+    );
+  said.steps.push(...steps);
+  said.warnings.push(...warnings);
+  return { ...evidence, designLife_cycles: designCycles };
+}
+
+/**
+ * The whole check, stage by stage: load → material curve → static plan → evaluation (membrane,
+ * static, notch, fatigue) → the sections of the result → optional solve, crack growth, test
+ * evidence and fleet view → verdict, with the steps put in the sheet's order. Pure: no I/O.
+ * Throws InputError only for input problems that show once the numbers are worked; faces turn it
+ * into the errors document.
+ */
+export function runCheck(input: ResolvedCheck): CheckResult {
+  const said: Said = { steps: [], warnings: [] };
+  const { steps, warnings } = said;
+  const load = loadStage(input, said);
+  const curve = curveStage(input, load, said);
+  const plan = staticStage(input, said);
+  const ctx = contextOf(input, load, plan, curve);
+  const e = evaluationStage(ctx, said);
+  const t = input.shell.thickness_mm;
+  const mat = input.material;
 
   const result: CheckResult = {
     format: "hoopwise.result/1",
@@ -199,93 +399,10 @@ export function runCheck(input: ResolvedCheck): CheckResult {
     governing: { rowId: "static", text: "", parts: [] },
     workedAt: workedAt(input, t),
     load: { pressureMax_MPa: load.max_MPa, pressureMin_MPa: load.min_MPa, source: load.source },
-    membrane: {
-      theory: e.theory,
-      theoryReason: theoryReason(input.shell.theory, e),
-      innerRadius_mm: e.radii.inner_mm,
-      meanRadius_mm: e.radii.mean_mm,
-      outerRadius_mm: e.radii.outer_mm,
-      hoopMax_MPa: e.hoopMax,
-      hoopMin_MPa: e.hoopMin,
-      axialMax_MPa: e.axialMax,
-      axialMin_MPa: e.axialMin,
-      radialMax_MPa: e.radialMax,
-      vonMisesMax_MPa: e.vonMisesMax,
-    },
-    static: {
-      basis: plan.basis,
-      service: input.shell.service,
-      yieldFactor: input.static.yieldFactor,
-      allowable_MPa: e.staticAllowable,
-      vonMisesMax_MPa: e.vonMisesMax,
-      margin: e.staticMargin,
-      pass: e.staticMargin >= 0 && gaugeOk && !plan.refer && !e.static.formula?.outside,
-      refer: plan.refer ?? e.static.formula?.outside?.text ?? null,
-      referParts: plan.refer ? [plan.refer] : (e.static.formula?.outside?.parts ?? null),
-      governs: e.static.governs,
-      jointEfficiency: plan.joint,
-      corrosionAllowance_mm: plan.corrosion_mm,
-      thicknessTolerance_mm: plan.tolerance_mm,
-      minimumGauge_mm: plan.gauge_mm,
-      analysisThickness_mm: e.thickness_mm - allowances_mm(plan),
-      formulaThickness_mm: e.static.formula ? finiteOrNull(e.static.formula.formula_mm) : null,
-      requiredThickness_mm: required.value,
-      limitFactor: plan.basis === "aircraft" ? plan.limitFactor : null,
-      ultimateFactor: plan.basis === "aircraft" ? plan.ultimateFactor : null,
-      statement,
-      defaults: input.static.defaults,
-    },
-    notch: {
-      kt: e.conc.kt,
-      ktGoverns: e.conc.governs,
-      biaxialRatio: e.lambda,
-      q: e.notch.q,
-      kf: e.notch.kf,
-      peakMax_MPa: e.peakMax,
-      peakMin_MPa: e.peakMin,
-      localYield: e.localYield,
-      ...(e.conc.fasteners?.length
-        ? {
-            fasteners: e.conc.fasteners.map((f) => ({
-              kt: f.kt,
-              hoop_mm: f.hoop_mm,
-              axial_mm: f.axial_mm,
-              radius_mm: f.radius_mm,
-              ligament_mm: Number.isFinite(f.ligament_mm) ? f.ligament_mm : null,
-              solvedWithOpening: f.solvedWithOpening,
-              ktKirsch: f.ktKirsch,
-            })),
-          }
-        : {}),
-      ...(e.conc.picture ? { opening: e.conc.picture } : {}),
-      ...(e.conc.refer?.length ? { refer: e.conc.refer } : {}),
-    },
-    fatigue: {
-      criterion,
-      curve: input.fatigue.curve,
-      amplitude_MPa: e.governing.amplitude,
-      mean_MPa: e.governing.mean,
-      equivalentAmplitude_MPa: e.governing.sigmaAr,
-      life_cycles: e.life,
-      allowableLife_cycles: e.allowable,
-      designLife_cycles: input.fatigue.designLife_cycles,
-      scatterFactor: input.fatigue.scatterFactor,
-      damage: e.damage,
-      lifeCountedIn: load.isSpectrum ? "passes" : "cycles",
-      modifyingFactor: mods.factor,
-      curveUsed: {
-        fatigueStrengthCoefficient_MPa: coefficient,
-        fatigueStrengthExponent: exponent,
-        enduranceLimit_MPa: se.value ?? null,
-      },
-      criteria,
-      pass: e.damage !== null && e.damage <= 1,
-      detailCategory_MPa: input.fatigue.curve === "basquin" ? null : (input.fatigue.detailCategory_MPa ?? null),
-      weldDetail: input.fatigue.curve === "en13445-welded" ? (input.fatigue.weldDetail ?? null) : null,
-      temperature_C: input.fatigue.temperature_C,
-      defaults: input.fatigue.defaults,
-      weldedPoint: weldedPoint(ctx, e),
-    },
+    membrane: membraneSection(input, e),
+    static: staticSection(ctx, e, said),
+    notch: notchSection(e),
+    fatigue: fatigueSection(ctx, e, curve),
     lifeVsThickness: lifeVsThickness(ctx, t),
     verdictTable: [],
     sections: [],
@@ -294,21 +411,8 @@ export function runCheck(input: ResolvedCheck): CheckResult {
     warnings: [],
     warningParts: [],
   };
-  if (fit) result.materialFit = fitSummary(fit, mat.coupons ?? []);
-  if (load.isSpectrum) {
-    const totalCycles = load.cycles.reduce((s, c) => s + c.count, 0);
-    const extra = input.axialExtra ?? { max_MPa: 0, min_MPa: 0 };
-    result.spectrum = {
-      cycles: load.cycles.map((c) => {
-        const o = cycleAtPoint(ctx, criterion, e.point, e.fatigueUnit, extra, 1, c.range, c.mean, e.equivalentRange, true);
-        return { range_MPa: 2 * o.amplitude, mean_MPa: o.mean, count: c.count };
-      }),
-      totalCycles,
-      damagePerPass: e.damagePerPass,
-      passesToFailure: e.life,
-      historyPoints: load.historyPoints,
-    };
-  }
+  if (curve.fit) result.materialFit = fitSummary(curve.fit, mat.coupons ?? []);
+  if (load.isSpectrum) result.spectrum = spectrumSection(ctx, e);
 
   if (input.solve) {
     const s = solveFor(ctx, input.solve.for);
@@ -317,33 +421,9 @@ export function runCheck(input: ResolvedCheck): CheckResult {
     warnings.push(...s.warnings);
   }
   if (input.crack) addCrack(result, input, e, load, steps, warnings);
-  if (input.evidence) {
-    // Test lives are in cycles; with a spectrum the design life counts passes: convert before comparing.
-    const cyclesPerPass = load.isSpectrum ? load.cycles.reduce((s, c) => s + c.count, 0) : 1;
-    const designCycles = input.fatigue.designLife_cycles * cyclesPerPass;
-    if (load.isSpectrum)
-      steps.push(
-        step(
-          "evidence-design-cycles",
-          "Design life in cycles, for comparison with test lives in cycles",
-          "N_design = B_design × n_pass",
-          `N_design = ${fmt(input.fatigue.designLife_cycles)} passes × ${fmt(cyclesPerPass)} cycles per pass`,
-          designCycles,
-          "cycles",
-          "unit conversion: test lives count cycles, the design life counts passes of the spectrum",
-        ),
-      );
-    const ev = evaluateEvidence(input.evidence, designCycles, input.fatigue.scatterFactor);
-    const { steps: evidenceSteps, warnings: evidenceWarnings, ...evidence } = ev;
-    result.evidence = { ...evidence, designLife_cycles: designCycles };
-    if (load.isSpectrum)
-      evidenceWarnings.push(
-        say`the test lives (cycles) are compared with the design life converted to cycles, ${n(designCycles)} = ${n(input.fatigue.designLife_cycles)} passes × ${n(cyclesPerPass)} cycles per pass; tests at one amplitude do not reproduce the spectrum's mix of cycles, so the comparison is approximate`,
-      );
-    steps.push(...evidenceSteps);
-    warnings.push(...evidenceWarnings);
-  }
+  if (input.evidence) result.evidence = evidenceSection(input, load, said);
   if (input.fleet) addFleet(result, input, e, steps, warnings);
+
   const table = verdictTable(result);
   result.verdictTable = table.rows;
   result.verdict = table.verdict;
