@@ -183,15 +183,15 @@ function developed(
         "critical-crack",
       ),
     );
+    // Two lines, so the sizes stay inside the picture at any width the page gives it.
+    const style = { size: FONT_SIZE.note, fill: CRACK };
+    out.push(textAt(xc, yBar + 20, `crack size a: critical ${len(crack.critical_mm)}`, style));
     out.push(
       textAt(
         xc,
-        yBar + 20,
-        `crack size a: critical ${len(crack.critical_mm)}, initial ${len(crack.initial_mm)}${isFiniteNumber(crack.detectable_mm) ? `, detectable ${len(crack.detectable_mm)}` : ""}`,
-        {
-          size: FONT_SIZE.note,
-          fill: CRACK,
-        },
+        yBar + 36,
+        `initial ${len(crack.initial_mm)}${isFiniteNumber(crack.detectable_mm) ? `, detectable ${len(crack.detectable_mm)}` : ""}`,
+        style,
       ),
     );
   }

@@ -3,6 +3,7 @@ import { DEMOS } from "../../src/demo/index.ts";
 import { checkDocument } from "../../src/engine/index.ts";
 import { shellPicture } from "../../src/plots/index.ts";
 import { scaleBarLength } from "../../src/plots/shell.ts";
+import { textWidth } from "../../src/plots/svgText.ts";
 import { assertWellFormed } from "./svgTools.ts";
 
 /** The x extent and y extent of a path's absolute coordinates (M/L pairs). */
@@ -55,7 +56,18 @@ describe("the shell and its opening, to scale", () => {
     if (!bar || !crack) throw new Error("no bars");
     const barMm = Number(svg.match(/>(\d+) mm<\/text>/)?.[1]);
     expect((Number(crack[2]) - Number(crack[1])) / (Number(bar[2]) - Number(bar[1]))).toBeCloseTo(200 / barMm, 2);
-    expect(svg).toContain("crack size a: critical 200 mm, initial 1.27 mm");
+    expect(svg).toContain("crack size a: critical 200 mm");
+    expect(svg).toContain("initial 1.27 mm");
+  });
+
+  it("keeps every label inside the picture, the crack sizes of the demo included", () => {
+    const c = r.crack!;
+    const svg = shellPicture({ ...data, crack: { initial_mm: c.initial_mm, critical_mm: c.critical_mm, detectable_mm: c.detectable_mm } });
+    const width = Number(svg.match(/viewBox="0 0 ([\d.]+) /)?.[1]);
+    // Each start-anchored label's right end, at the plots' own glyph-width estimate (svgText.ts), stays within the view box.
+    for (const m of svg.matchAll(/<text x="([\d.]+)" y="[\d.]+" font-size="(\d+)"(?![^>]*text-anchor)[^>]*>([^<]*)</g))
+      expect(Number(m[1]) + textWidth(m[3], Number(m[2])), m[3]).toBeLessThanOrEqual(width);
+    expect(svg).toContain(`detectable ${c.detectable_mm} mm`);
   });
 
   it("gives the opening's hoop extent as an arc of half-angle half-width / mean radius", () => {
