@@ -204,6 +204,8 @@ export interface FastenerPath {
   neighbours: number[];
   /** Stress normal to the path at x mm from the hole's edge (0 ≤ x ≤ ligament), per unit remote hoop and axial stress. */
   field: (x_mm: number) => PathField;
+  /** With neighbours: the same field with the opening alone, so the crack can take the larger of the two. */
+  fieldWithoutNeighbours?: (x_mm: number) => PathField;
 }
 
 /** Clear gap from a hole's edge to the segment p→q. */
@@ -256,9 +258,10 @@ export function fastenerPath(opening: Outline, openingKey: string, holes: PathHo
     opening,
     ...neighbours.map((j) => ellipse(holes[j].radius_mm, holes[j].radius_mm, holes[j].hoop_mm, holes[j].axial_mm)),
   ];
-  const direct = solvedPathField(outlines, start, direction);
   // Read only along the ligament: beyond it the path runs inside the opening.
-  const field = tabulatePathField((x) => direct(Math.min(Math.max(x, 0), ligament)), ligament);
+  const along = (direct: (s_mm: number) => PathField) => tabulatePathField((x) => direct(Math.min(Math.max(x, 0), ligament)), ligament);
+  const field = along(solvedPathField(outlines, start, direction));
+  const fieldWithoutNeighbours = neighbours.length ? along(solvedPathField([opening], start, direction)) : undefined;
   const path: FastenerPath = {
     index,
     start_mm: start,
@@ -268,6 +271,7 @@ export function fastenerPath(opening: Outline, openingKey: string, holes: PathHo
     angleFromAxis_deg: (Math.acos(Math.min(Math.abs(direction[1]), 1)) * 180) / Math.PI,
     neighbours,
     field,
+    ...(fieldWithoutNeighbours ? { fieldWithoutNeighbours } : {}),
   };
   if (fastenerPathCache.size > 32) fastenerPathCache.clear();
   fastenerPathCache.set(key, path);

@@ -14,7 +14,7 @@
  */
 import { TYPICAL_DETECTABLE_MM, TYPICAL_DETECTABLE_SOURCE } from "../materials/inspection.ts";
 import type { ResolvedCheck } from "./input.ts";
-import { crackGrowth, type CrackGradient, type CrackResult } from "./crack.ts";
+import { crackGrowth, type CrackGradient, type CrackResult, type PathField } from "./crack.ts";
 import type { CrackOrientation } from "./crackGeometry.ts";
 import {
   ellipseAxisField,
@@ -123,13 +123,16 @@ function cornerCrack(input: ResolvedCheck, e: Evaluation, number: number): Corne
   delete (shape as { reinforcement?: unknown }).reinforcement;
   const path = fastenerPath(outlineOf(shape), JSON.stringify(shape), holes, number - 1, JOINT_LIGAMENT_RADII);
   const lambda = e.hoopMax > 0 ? e.axialMax / e.hoopMax : 0;
+  const combined = (f: PathField) => f.hoopCoeff + lambda * f.axialCoeff;
+  const alone = path.fieldWithoutNeighbours;
+  const normal = (x: number) => Math.max(combined(path.field(x)), alone ? combined(alone(x)) : Number.NEGATIVE_INFINITY);
   const hole = holes[number - 1];
   const [sx, sy] = path.start_mm;
   const [ex, ey] = path.end_mm;
   const bearing = (Math.atan2(path.direction[1], path.direction[0]) * 180) / Math.PI;
   const others = path.neighbours.map((j) => j + 1);
   const with_ = others.length
-    ? `, with fastener hole${others.length > 1 ? "s" : ""} ${others.join(", ")} (within ${JOINT_LIGAMENT_RADII} radii of the path) in the solution`
+    ? `, with fastener hole${others.length > 1 ? "s" : ""} ${others.join(", ")} (within ${JOINT_LIGAMENT_RADII} radii of the path) in the solution and without, the larger at each point taken (a neighbour may shield the path or raise its stress; the larger is the conservative choice)`
     : ", the other fastener holes left out (none within 3 radii of the path)";
   const source = `the opening's field by the plane-elasticity solver (${SOLVER_SOURCE}), read as the stress normal to the straight path from fastener hole ${number} to the opening${with_} and without the crack's own hole (Bowie's factor carries it), tabulated at ${PATH_NODES} Chebyshev nodes along the path, with the biaxial ratio λ = ${fmt(lambda)}`;
   const steps: Step[] = [
@@ -146,8 +149,8 @@ function cornerCrack(input: ResolvedCheck, e: Evaluation, number: number): Corne
       "crack-path-field",
       `Stress normal to the path, per unit nominal hoop stress: at the hole's edge and at the opening's edge`,
       "σn(x)/σθ = c_θ(x) + λ·c_x(x), from the unit hoop and unit axial solutions",
-      `σn/σθ = ${fmt(path.field(0).hoopCoeff + lambda * path.field(0).axialCoeff)} at the hole's edge, ${fmt(path.field(path.ligament_mm).hoopCoeff + lambda * path.field(path.ligament_mm).axialCoeff)} at the opening's edge (λ = ${fmt(lambda)})`,
-      path.field(path.ligament_mm).hoopCoeff + lambda * path.field(path.ligament_mm).axialCoeff,
+      `σn/σθ = ${fmt(normal(0))} at the hole's edge, ${fmt(normal(path.ligament_mm))} at the opening's edge (λ = ${fmt(lambda)})`,
+      normal(path.ligament_mm),
       "—",
       SOLVER_SOURCE,
     ),
@@ -161,10 +164,7 @@ function cornerCrack(input: ResolvedCheck, e: Evaluation, number: number): Corne
     );
   return {
     gradient: {
-      field: (x) => {
-        const f = path.field(x);
-        return f.hoopCoeff + lambda * f.axialCoeff;
-      },
+      field: normal,
       ligament_mm: path.ligament_mm,
       source,
     },
