@@ -227,11 +227,10 @@ describe("the reader's units reach the error limits", () => {
     d.display = display;
     return d;
   };
+  const page = async (display: Record<string, string>) => (await app.request(`/?c=${encodeCheck(doc(display))}`)).text();
 
   it("states each limit in the form's units, taken from the schema's own limits", async () => {
-    const html = await (
-      await app.request(`/?c=${encodeCheck(doc({ length: "in", stress: "ksi", pressure: "psi", altitude: "ft" }))}`)
-    ).text();
+    const html = await page({ length: "in", stress: "ksi", pressure: "psi", altitude: "ft" });
     // 10 000 mm / 25.4 = 393.7 in; 0.001 mm / 25.4 = 3.937×10⁻⁵ in (1 in = 25.4 mm exactly).
     expect(fieldError(html, "shell.thickness")).toBe("the wall thickness must be at most 393.7 in");
     expect(fieldError(html, "shell.radius")).toBe("the radius must be at least 3.937 × 10⁻⁵ in");
@@ -240,9 +239,7 @@ describe("the reader's units reach the error limits", () => {
   });
 
   it("and in SI with the unit the schema's number leaves out", async () => {
-    const html = await (
-      await app.request(`/?c=${encodeCheck(doc({ length: "mm", stress: "MPa", pressure: "MPa", altitude: "m" }))}`)
-    ).text();
+    const html = await page({ length: "mm", stress: "MPa", pressure: "MPa", altitude: "m" });
     expect(fieldError(html, "shell.thickness")).toBe("the wall thickness must be at most 10\u2009000 mm");
     expect(fieldError(html, "pressure.max")).toBe("the highest pressure must be at most 10\u2009000 MPa");
   });
