@@ -133,7 +133,7 @@ function cornerCrack(input: ResolvedCheck, e: Evaluation, number: number): Corne
   const others = path.neighbours.map((j) => j + 1);
   const with_ = others.length
     ? `, with fastener hole${others.length > 1 ? "s" : ""} ${others.join(", ")} (within ${JOINT_LIGAMENT_RADII} radii of the path) in the solution and without, the larger at each point taken (a neighbour may shield the path or raise its stress; the larger is the conservative choice)`
-    : ", the other fastener holes left out (none within 3 radii of the path)";
+    : `, the other fastener holes left out (none within ${JOINT_LIGAMENT_RADII} radii of the path)`;
   const source = `the opening's field by the plane-elasticity solver (${SOLVER_SOURCE}), read as the stress normal to the straight path from fastener hole ${number} to the opening${with_} and without the crack's own hole (Bowie's factor carries it), tabulated at ${PATH_NODES} Chebyshev nodes along the path, with the biaxial ratio λ = ${fmt(lambda)}`;
   const steps: Step[] = [
     step(
