@@ -102,7 +102,7 @@ export function inputGroups(m: SheetModel): InputGroup[] {
 
   groups.push({ title: "Material", rows: materialRows(m, q, t) });
   groups.push({ title: "Fatigue", rows: fatigueRows(m, t, q, input) });
-  groups.push({ title: "Static strength", rows: staticRows(m, t, q, input) });
+  groups.push({ title: "Static strength", rows: staticRows(m, t, input) });
 
   if (d.crack) {
     const k = d.crack;
@@ -233,7 +233,7 @@ function parisRow(C: number, m: number | undefined, units: Units, origin: string
 }
 
 /** The static basis and its values, each marked where a default of the kind of shell or of the basis filled it. */
-function staticRows(m: SheetModel, t: T, q: Q, input: I): InputRow[] {
+function staticRows(m: SheetModel, t: T, input: I): InputRow[] {
   const s = m.result.static;
   const why = (key: string) => (s.defaults[key] ? `default: ${s.defaults[key]}` : "as entered");
   const rows: InputRow[] = [
@@ -245,13 +245,13 @@ function staticRows(m: SheetModel, t: T, q: Q, input: I): InputRow[] {
       t(s.basis === "en13445-3" ? "Weld joint coefficient z" : "Joint efficiency E", sig(s.jointEfficiency, 3), why("jointEfficiency")),
     );
   if (s.basis === "aircraft") {
-    rows.push(t("Limit factor on the differential", sig(s.limitFactor ?? 0, 3), why("limitFactor")));
-    rows.push(t("Ultimate factor", sig(s.ultimateFactor ?? 0, 3), why("ultimateFactor")));
+    rows.push(input("static.limitFactor", s.limitFactor, `on the pressure differential; ${why("limitFactor")}`));
+    rows.push(input("static.ultimateFactor", s.ultimateFactor, why("ultimateFactor")));
   }
   if (s.basis === "yield") rows.push(t("Yield factor n_y", sig(s.yieldFactor, 4), m.document.static ? "" : "default"));
   rows.push(input("static.corrosionAllowance_mm", s.corrosionAllowance_mm, why("corrosionAllowance_mm")));
   rows.push(input("static.thicknessTolerance_mm", s.thicknessTolerance_mm, why("thicknessTolerance_mm")));
-  rows.push(q("Minimum gauge (without c)", s.minimumGauge_mm, "length", why("minimumGauge_mm")));
+  rows.push(input("static.minimumGauge_mm", s.minimumGauge_mm, `without the corrosion allowance; ${why("minimumGauge_mm")}`));
   return rows;
 }
 

@@ -5,7 +5,8 @@ import { applyCarried, unshownParts } from "../../src/web/form/carry.ts";
 import { convertValues, parseNumberList, readForm, understand, writeForm } from "../../src/web/form/index.ts";
 import { defaultAt } from "../../src/schema/defaults.ts";
 import { SI_UNITS, unitsKey, type Units } from "../../src/schema/units.ts";
-import { NUMBER_INPUTS } from "../../src/schema/inputs.ts";
+import { inputAt, NUMBER_INPUTS } from "../../src/schema/inputs.ts";
+import { sheetHtml } from "../../src/sheet/sheet.ts";
 import { FORM_FIELDS, type FieldSpec, NUMBER_FIELDS } from "../../views/form/fields.ts";
 import { CheckForm } from "../../views/form/index.tsx";
 
@@ -183,5 +184,21 @@ describe("a choice with no value shows the schema's default", () => {
     // Cracks at a hole default to two (the schema's conservative choice: Bowie's two-crack factor is the larger).
     expect(defaulted.map(([n]) => n)).toContain("crack.cracksAtHole");
     for (const [name, f] of defaulted) expect(chosen(name), name).toBe(String(defaultAt(f.path)));
+  });
+});
+
+describe("the aircraft basis's factors and the allowances say the same on the page and the sheet", () => {
+  it("labels each with the schema's words on both faces", () => {
+    const doc = structuredClone(DEMOS[0].document) as Record<string, any>;
+    doc.shell.service = "aircraft-cabin";
+    doc.static = { basis: "aircraft" };
+    const sheet = sheetHtml(doc);
+    if (!sheet.ok) throw new Error(JSON.stringify(sheet.errors));
+    const page = String(CheckForm({ s: { values: writeForm(doc, SI_UNITS), errors: new Map(), units: SI_UNITS, blockRows: [0] } }));
+    for (const p of ["static.limitFactor", "static.ultimateFactor", "static.minimumGauge_mm", "static.thicknessTolerance_mm"]) {
+      const label = inputAt(p).label;
+      expect(sheet.html, p).toContain(label);
+      expect(page, p).toMatch(new RegExp(`<label[^>]*>${label}`));
+    }
   });
 });

@@ -12,6 +12,13 @@ import { NumberInput, Select } from "./controls.tsx";
 import type { FormState } from "./state.ts";
 
 /** The kind of shell, chosen first: it sets the static basis and the fatigue route, each shown as a default to change. */
+/** The allowances whose default follows the service: field, its default's key, and a note before the default. */
+const DEFAULTED = [
+  ["static.corrosionAllowance", "corrosionAllowance_mm", ""],
+  ["static.thicknessTolerance", "thicknessTolerance_mm", "Of the plate. "],
+  ["static.minimumGauge", "minimumGauge_mm", "Without the corrosion allowance. "],
+] as const;
+
 export function ServiceSection({ s }: { s: FormState }) {
   const service = (SERVICES as readonly string[]).includes(s.values["shell.service"] ?? "")
     ? (s.values["shell.service"] as Service)
@@ -74,35 +81,18 @@ export function ServiceSection({ s }: { s: FormState }) {
         <NumberInput
           s={s}
           name="static.limitFactor"
-          label="Limit factor on the differential (aircraft basis)"
+          hint="Aircraft basis only: on the pressure differential."
           placeholder={num(BASIS_DEFAULTS.limitFactor.value)}
         />
         <NumberInput
           s={s}
           name="static.ultimateFactor"
-          label="Ultimate factor (aircraft basis)"
+          hint="Aircraft basis only."
           placeholder={num(BASIS_DEFAULTS.ultimateFactor.value)}
         />
-        <NumberInput
-          s={s}
-          name="static.corrosionAllowance"
-          placeholder={num(d.corrosionAllowance_mm.value)}
-          hint={`Default: ${d.corrosionAllowance_mm.why}.`}
-        />
-        <NumberInput
-          s={s}
-          name="static.thicknessTolerance"
-          label="Minus tolerance of the plate"
-          placeholder={num(d.thicknessTolerance_mm.value)}
-          hint={`Default: ${d.thicknessTolerance_mm.why}.`}
-        />
-        <NumberInput
-          s={s}
-          name="static.minimumGauge"
-          label="Minimum gauge (without corrosion allowance)"
-          placeholder={num(d.minimumGauge_mm.value)}
-          hint={`Default: ${d.minimumGauge_mm.why}.`}
-        />
+        {DEFAULTED.map(([name, key, note]) => (
+          <NumberInput s={s} name={name} placeholder={num(d[key].value)} hint={`${note}Default: ${d[key].why}.`} />
+        ))}
       </div>
       {code ? (
         <p class="hint">
