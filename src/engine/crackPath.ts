@@ -26,9 +26,9 @@
  */
 import type { PathField } from "./crack.ts";
 import { InputError } from "./errors.ts";
-import { discretize, ellipse, nearestOnOutline, type Outline } from "./openings/geometry.ts";
-import { outlineOf } from "./openings/index.ts";
-import { buildOperator, type PlaneStress, solve, stressAt } from "./openings/solver.ts";
+import { ellipse, nearestOnOutline, type Outline } from "./openings/geometry.ts";
+import { discretizeCutout, JOINT_PANELS, outlineOf, unitSolutions } from "./openings/index.ts";
+import { type PlaneStress, stressAt } from "./openings/solver.ts";
 import { fmt } from "./step.ts";
 
 /** σy on the x-axis at x ≥ A for a unit remote tension along y (c = −1) or along x (c = +1). */
@@ -86,9 +86,7 @@ export function solvedPathField(
   start: [number, number],
   direction: [number, number] = [0, 1],
 ): (s_mm: number) => PathField {
-  const op = buildOperator(discretize(Array.isArray(outlines) ? outlines : [outlines], { maxPanels: 600 }));
-  const hoop = solve(op, { sxx: 1, syy: 0 });
-  const axial = solve(op, { sxx: 0, syy: 1 });
+  const { hoop, axial } = unitSolutions(discretizeCutout(Array.isArray(outlines) ? outlines : [outlines], JOINT_PANELS));
   const len = Math.hypot(direction[0], direction[1]);
   const [dx, dy] = [direction[0] / len, direction[1] / len];
   return (s) => {
@@ -165,9 +163,7 @@ export function roundedRectangleAxisField(cut: RoundedRectangle, length_mm: numb
   if (known) return known;
   const { halfWidthAlongHoop_mm, halfLengthAlongAxial_mm, cornerRadius_mm } = cut;
   const outline = outlineOf({ kind: "rounded-rectangle", halfWidthAlongHoop_mm, halfLengthAlongAxial_mm, cornerRadius_mm });
-  const op = buildOperator(discretize([outline]));
-  const hoop = solve(op, { sxx: 1, syy: 0 });
-  const axial = solve(op, { sxx: 0, syy: 1 });
+  const { hoop, axial } = unitSolutions(discretizeCutout([outline]));
   const end = cut.halfLengthAlongAxial_mm;
   const direct = (s: number): PathField => ({
     hoopCoeff: stressAt(hoop, 0, end + Math.max(s, 0)).sxx,

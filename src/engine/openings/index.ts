@@ -340,6 +340,39 @@ function circleOutline(f: FastenerInput): Outline {
   return ellipse(f.radius_mm, f.radius_mm, f.hoop_mm, f.axial_mm);
 }
 
+/** Most panels for the opening solved together with the holes beside it. */
+export const JOINT_PANELS = 600;
+
+/**
+ * The outlines cut into panels for the solver. A shape past what the panels can resolve (a slot
+ * so slender that its sides nearly touch, or bends too tight beside a hole) is the user's to
+ * change, so it is refused as an error on `cutout`, never a fault of the server.
+ */
+export function discretizeCutout(outlines: Outline[], maxPanels?: number): Discretization {
+  try {
+    return discretize(outlines, maxPanels === undefined ? {} : { maxPanels });
+  } catch (e) {
+    if (e instanceof TooManyPanels)
+      throw new InputError(
+        "cutout",
+        "the opening's outline (or a hole close to it) is too slender or bends too tightly for this screening's stress solution: widen a narrow slot, smooth its tight bends, or analyse the detail by finite elements",
+      );
+    throw e;
+  }
+}
+
+/** The solutions for unit hoop stress (σxx = 1) and unit axial stress (σyy = 1); an outline the iteration cannot settle is refused on `cutout`. */
+export function unitSolutions(disc: Discretization): { hoop: Solution; axial: Solution } {
+  const op = buildOperator(disc);
+  try {
+    return { hoop: solve(op, { sxx: 1, syy: 0 }), axial: solve(op, { sxx: 0, syy: 1 }) };
+  } catch (e) {
+    if (e instanceof NoConvergence)
+      throw new InputError("cutout", "the stress solution round this opening did not converge; smooth the outline");
+    throw e;
+  }
+}
+
 /** Cache of solved geometries: the solution depends only on the shape, not on the load level. */
 const cache = new Map<string, OpeningSolution>();
 
@@ -349,7 +382,7 @@ export function solveOpening(cutout: ShapeCutout, fasteners: FastenerInput[] = [
   if (known) return known;
   const opening = outlineOf(cutout);
   // the opening alone, coarsely, to place the fasteners against its edge
-  const lone = discretize([opening]);
+  const lone = discretizeCutout([opening]);
   const ex = lone.x;
   const ey = lone.y;
   let circumradius = 0;
@@ -408,37 +441,13 @@ export function solveOpening(cutout: ShapeCutout, fasteners: FastenerInput[] = [
     );
   const jointList = [...joint].sort((a, b) => a - b);
   const outlines = [opening, ...jointList.map((i) => circleOutline(fasteners[i]))];
-  let disc: Discretization;
-  try {
-    disc = discretize(outlines, { maxPanels: 600 });
-  } catch (e) {
-    if (e instanceof TooManyPanels)
-      throw new InputError(
-        "cutout",
-        "the opening's outline (or a hole close to it) is too intricate for this screening: smooth its tight bends",
-      );
-    throw e;
-  }
-  const op = buildOperator(disc);
-  let hoopSol: Solution;
-  let axialSol: Solution;
-  try {
-    hoopSol = solve(op, { sxx: 1, syy: 0 });
-    axialSol = solve(op, { sxx: 0, syy: 1 });
-  } catch (e) {
-    if (e instanceof NoConvergence)
-      throw new InputError("cutout", "the stress solution round this opening did not converge; smooth the outline");
-    throw e;
-  }
+  const disc = discretizeCutout(outlines, JOINT_PANELS);
+  const { hoop: hoopSol, axial: axialSol } = unitSolutions(disc);
   const sampled = sampleEdges(disc, edgeStress(hoopSol), edgeStress(axialSol));
   // The field a hole solved with the opening would stand in, without it: the opening alone.
   let loneHoop = hoopSol;
   let loneAxial = axialSol;
-  if (jointList.length) {
-    const loneOp = buildOperator(lone);
-    loneHoop = solve(loneOp, { sxx: 1, syy: 0 });
-    loneAxial = solve(loneOp, { sxx: 0, syy: 1 });
-  }
+  if (jointList.length) ({ hoop: loneHoop, axial: loneAxial } = unitSolutions(lone));
   const edge = sampled[0];
   const points = toPoints(edge, "edge", "the opening's edge", 0, 0);
   const fast: FastenerField[] = fasteners.map((f, i) => {

@@ -179,6 +179,19 @@ describe("the check with an opening of its own shape", () => {
     expect(out.result.verdict === "refer" || out.result.verdict === "fail").toBe(true);
   });
 
+  it("refuses a slot too slender for the solver's panels as an error on the cutout, and solves a moderately slender one", () => {
+    // A 230 × 2 mm slot: its long sides stand 2 mm apart, so panels short beside that gap (the
+    // discretizer's proximity rule) would number far past the solver's limit. This had thrown
+    // past the engine and answered 500.
+    const slot = checkDocument({ ...base, cutout: rr(115, 1, 0.5) });
+    expect(slot.ok).toBe(false);
+    if (slot.ok) return;
+    expect(slot.errors[0].path).toBe("cutout");
+    expect(slot.errors[0].message).toContain("too slender");
+    // 10:1 is well inside what the panels resolve: a result, not a refusal.
+    expect(checkDocument({ ...base, cutout: rr(40, 4, 2) }).ok).toBe(true);
+  });
+
   it("answers an error that names the field for a corner radius beyond the half-size", () => {
     const out = checkDocument({
       ...base,
