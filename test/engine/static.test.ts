@@ -49,6 +49,22 @@ describe("EN 13445-3 design by formula", () => {
     expect(r.steps.find((s) => s.id === "static-formula-thickness")?.source).toContain("§7.4.2");
   });
 
+  it("says which side each allowance comes off, and what the other side for the minus tolerance would change", () => {
+    const r = run(cylinder({ basis: "en13445-3", jointEfficiency: 0.85, ...allowances }));
+    const words = r.steps.find((s) => s.id === "static-analysis-thickness")?.source ?? "";
+    expect(words).toContain("corrosion is taken off the bore");
+    expect(words).toContain("minus tolerance off the outer face");
+    // δ/R = 0.3/(300 + 1) = 0.0997 % (hand calculation), stated to two significant figures
+    expect(words).toContain("δ/R = 0.1 %");
+    // An independent check of those words: the same 0.3 mm taken off the bore instead (as more
+    // corrosion) raises the hoop stress by about δ/R. Thin-wall hoop stress P·R_m/e: the mean
+    // radius grows from 301 + 1.85 to 301.3 + 1.85, so the ratio is 303.15/302.85 = 1.00099 (hand calculation).
+    const bore = run(
+      cylinder({ basis: "en13445-3", jointEfficiency: 0.85, ...allowances, corrosionAllowance_mm: 1.3, thicknessTolerance_mm: 0 }),
+    );
+    expect(bore.membrane.hoopMax_MPa / r.membrane.hoopMax_MPa).toBeCloseTo(303.15 / 302.85, 3);
+  });
+
   it("the formula is the mean-diameter hoop equilibrium P·Dm = 2fz·e (an independent identity)", () => {
     fc.assert(
       fc.property(
