@@ -19,7 +19,7 @@ const cabinBarrel: CheckDocument = {
     "Demo scenario: skin bay between two frames at a passenger window; the window opening is a rounded rectangle with a row of fastener holes round its upper aft corner." +
     " A crack is grown from fastener hole 5 of that row (the one with the highest stress concentration, near the top of the corner) straight to the nearest point of the corner's edge, into the window's stress field; a fleet of 150 invented aircraft is assumed.",
   display: { length: "mm", stress: "MPa", pressure: "kPa", altitude: "m" },
-  shell: { form: "cylinder", radius_mm: 1150, radiusAt: "mean", thickness_mm: 1.0, theory: "auto" },
+  shell: { form: "cylinder", radius_mm: 1150, radiusAt: "mean", thickness_mm: 1.0, theory: "auto", service: "aircraft-cabin" },
   pressure: { fromAltitude: { flight_m: 7620, cabin_m: 2440 }, min_MPa: 0 },
   cutout: {
     kind: "rounded-rectangle",
