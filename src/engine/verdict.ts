@@ -237,11 +237,18 @@ function crackRows(r: CheckResult): VerdictRow[] {
     margin = repeatCycles / minimum - 1;
   } else {
     status = "pass";
+    // Without a practical minimum interval the programme's reserve is on crack size: how far the
+    // detectable size stands below the critical one (nil when it reaches it, where the row fails above).
+    const onSize = minimum === null || repeatCycles === null;
     detail = joined(
-      [say`inspect from ${th} ${unit} and then every ${n(repeat)} ${unit} (detectable ${mm(c.detectable_mm ?? 0)}, `, critical, say`)`],
+      [
+        say`inspect from ${th} ${unit} and then every ${n(repeat)} ${unit} (detectable ${mm(c.detectable_mm ?? 0)}, `,
+        critical,
+        onSize ? say`; no practical minimum interval given, so the reserve is on crack size)` : say`)`,
+      ],
       "",
     );
-    margin = minimum !== null && repeatCycles !== null ? repeatCycles / minimum - 1 : null;
+    margin = onSize ? c.critical_mm / (c.detectable_mm ?? c.critical_mm) - 1 : repeatCycles / minimum - 1;
   }
   rows.push(row("crack", `Damage tolerance: crack growth and inspections${which}`, status, detail, margin));
   if (lbb) {

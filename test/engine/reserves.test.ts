@@ -38,6 +38,26 @@ describe("a reserve for every check", () => {
     expect(row?.detail).toContain("the reserve is on stress");
   });
 
+  it("a crack row that passes by inspection with no practical minimum interval shows its reserve on crack size", () => {
+    const r = run(DEMOS[0].document);
+    const row = r.verdictTable.find((x) => x.id === "crack");
+    const c = r.crack;
+    if (!row || !c) throw new Error("the cabin demo has a crack row");
+    expect(row.status).toBe("pass");
+    // The demo's detectable size is the typical surface eddy-current size, 0.1 in = 2.54 mm (common practice); the
+    // row's reserve is how far it stands below the critical size: a_crit/a_det − 1, positive while inspection can find it.
+    expect(c.detectable_mm).toBe(2.54);
+    expect(row.margin).toBeCloseTo(c.critical_mm / 2.54 - 1, 12);
+    expect(row.margin).toBeGreaterThan(0);
+    expect(row.detail).toContain("the reserve is on crack size");
+    // Given a practical minimum, the reserve is the repeat interval over it instead.
+    const doc = DEMOS[0].document as { crack: Record<string, unknown> };
+    const timed = run({ ...doc, crack: { ...doc.crack, minimumInterval_cycles: 3000 } });
+    const timedRow = timed.verdictTable.find((x) => x.id === "crack");
+    expect(timedRow?.margin).toBeCloseTo((timed.crack?.repeatInterval_cycles ?? 0) / 3000 - 1, 12);
+    expect(timedRow?.detail).not.toContain("crack size");
+  });
+
   it("the opening row's reserve is its curvature range over β: negative where the cabin demo refers", () => {
     const r = run(DEMOS[0].document);
     const row = r.verdictTable.find((x) => x.id === "opening");
