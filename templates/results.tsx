@@ -10,7 +10,7 @@ import { VERDICT_WORDS, type CheckResult, type VerdictRow } from "../src/engine/
 import { capitalise, life, margin, sig } from "./format.ts";
 import { typeset } from "./math.tsx";
 import type { SheetModel } from "./model.ts";
-import { CRITERION_STATUS_WORDS, STATUS_WORDS } from "../src/present/words.ts";
+import { CRITERION_STATUS_WORDS, STATUS_WORDS, VERDICT_COLUMNS } from "../src/present/words.ts";
 import { CRITERION_NAMES } from "./names.ts";
 import { dual, dualText } from "./quantities.ts";
 
@@ -51,10 +51,10 @@ export function VerdictTable({ r, units }: { r: CheckResult; units: Units }) {
       </colgroup>
       <thead>
         <tr>
-          <th>Check</th>
-          <th>Demand against capacity</th>
-          <th class="n">Margin</th>
-          <th>Outcome</th>
+          <th>{VERDICT_COLUMNS.check}</th>
+          <th>{VERDICT_COLUMNS.demand}</th>
+          <th class="n">{VERDICT_COLUMNS.reserve}</th>
+          <th>{VERDICT_COLUMNS.outcome}</th>
         </tr>
       </thead>
       <tbody>

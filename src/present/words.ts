@@ -16,6 +16,14 @@ export const STATUS_WORDS: Record<VerdictRow["status"] | "refer", string> = {
   info: "for information",
 };
 
+/** The headings of the verdict table's columns; each face orders them as its layout needs. */
+export const VERDICT_COLUMNS = {
+  check: "Check",
+  outcome: "Outcome",
+  demand: "Demand against capacity",
+  reserve: "Reserve",
+} as const;
+
 /** The overall verdict in words: the engine's, the one list (src/engine/verdict.ts). */
 export { VERDICT_WORDS } from "../engine/index.ts";
 

@@ -7,7 +7,7 @@ import { DEMOS, findDemo } from "../../src/demo/index.ts";
 import { checkDocument, type CheckResult } from "../../src/engine/index.ts";
 import { parseCheck } from "../../src/engine/input.ts";
 import { haighDiagram } from "../../src/plots/index.ts";
-import { CRITERION_NAMES } from "../../src/present/words.ts";
+import { CRITERION_NAMES, VERDICT_COLUMNS } from "../../src/present/words.ts";
 import { MEAN_STRESS_CRITERIA } from "../../src/schema/check.ts";
 import { SI_UNITS } from "../../src/schema/units.ts";
 import { sheetHtml } from "../../src/sheet/sheet.ts";
@@ -41,6 +41,18 @@ describe("page and sheet agree", () => {
     expect(onSheet).toEqual(onPage);
     // A reserve of 0.2345 reads "+23 %" on both (one formatter, src/present/numbers.ts).
     expect(onPage.some((t) => /^[+−]\d[\d\u2009]* %$|^over/.test(t))).toBe(true);
+  });
+
+  it("the verdict table's columns carry the same headings on the page and on the sheet (the sheet said Margin, the page Reserve)", async () => {
+    const headings = (html: string, start: string) => {
+      const at = html.indexOf(start);
+      const head = html.slice(at, html.indexOf("</thead>", at));
+      return [...head.matchAll(/<th[^>]*>([^<]*)<\/th>/g)].map((m) => m[1]).sort();
+    };
+    const onPage = headings(await page("cabin"), 'class="verdict-table"');
+    const onSheet = headings(sheet(findDemo("cabin")!.document), '<table class="verdict">');
+    expect(onPage).toEqual(Object.values(VERDICT_COLUMNS).sort());
+    expect(onSheet).toEqual(onPage);
   });
 
   it("the receiver's life-against-thickness axis counts passes on the page as on the sheet", async () => {

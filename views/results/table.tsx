@@ -1,7 +1,7 @@
 import type { CheckResult } from "../../src/engine/index.ts";
 import { phraseText } from "../../src/present/numbers.ts";
 import type { Units } from "../../src/schema/units.ts";
-import { STATUS_WORDS } from "../../src/present/words.ts";
+import { STATUS_WORDS, VERDICT_COLUMNS } from "../../src/present/words.ts";
 import { margin } from "../format.ts";
 
 /** Every check the verdict weighs, with its demand against capacity in words. */
@@ -13,10 +13,10 @@ export function VerdictTable({ result, units }: { result: CheckResult; units: Un
         <table class="verdict-table">
           <thead>
             <tr>
-              <th scope="col">Check</th>
-              <th scope="col">Outcome</th>
-              <th scope="col">Demand against capacity</th>
-              <th scope="col">Reserve</th>
+              <th scope="col">{VERDICT_COLUMNS.check}</th>
+              <th scope="col">{VERDICT_COLUMNS.outcome}</th>
+              <th scope="col">{VERDICT_COLUMNS.demand}</th>
+              <th scope="col">{VERDICT_COLUMNS.reserve}</th>
             </tr>
           </thead>
           <tbody>
