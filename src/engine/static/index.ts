@@ -250,6 +250,9 @@ export function staticAt(plan: StaticPlan, g: StaticInputs): StaticAt {
   return { ratio: vm > 0 ? plan.allowable_MPa / vm : Infinity, demand_MPa: vm, formula: null, governs: "von Mises against yield / factor" };
 }
 
+const ANALYSIS_WALL_SOURCE =
+  "EN 13445-3 §5.2 (analysis thickness); ASME VIII-1 UG-16, UG-25 (from memory). Every stress of this check is worked on e_a";
+
 /** The worked steps of the static check at the given wall. */
 export function staticSteps(plan: StaticPlan, g: StaticInputs, at: StaticAt, thickness_mm: number): Step[] {
   const steps: Step[] = [...plan.steps];
@@ -264,9 +267,11 @@ export function staticSteps(plan: StaticPlan, g: StaticInputs, at: StaticAt, thi
         `e_a = ${fmt(thickness_mm)} − ${fmt(c)} − ${fmt(d)}`,
         g.analysis_mm,
         "mm",
-        d > 0
-          ? `EN 13445-3 §5.2 (analysis thickness); ASME VIII-1 UG-16, UG-25 (from memory). Every stress of this check is worked on e_a. Sides: the corrosion is taken off the bore (R_i + c) and the minus tolerance off the outer face, as UG-27 and §7.4 take the inner radius at its nominal value plus corrosion; δ taken off the bore instead would raise the membrane stresses by about δ/R = ${fmt((100 * d) / (g.innerRadius_mm + c), 2)} %`
-          : "EN 13445-3 §5.2 (analysis thickness); ASME VIII-1 UG-16, UG-25 (from memory). Every stress of this check is worked on e_a, the corrosion taken off the bore (R_i + c)",
+        `${ANALYSIS_WALL_SOURCE}${
+          d > 0
+            ? `. Sides: the corrosion is taken off the bore (R_i + c) and the minus tolerance off the outer face, as UG-27 and §7.4 take the inner radius at its nominal value plus corrosion; δ taken off the bore instead would raise the membrane stresses by about δ/R = ${fmt((100 * d) / (g.innerRadius_mm + c), 2)} %`
+            : ", the corrosion taken off the bore (R_i + c)"
+        }`,
       ),
     );
   if (at.formula) {
